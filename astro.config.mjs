@@ -1,0 +1,14 @@
+// @ts-check
+import { defineConfig } from "astro/config";
+
+// RAILSIEVE_BASE serves the guide from a subfolder of a team server
+// (e.g. RAILSIEVE_BASE=/tools/railsieve/); RAILSIEVE_OUT lets the build script
+// build into a scratch folder and swap it in only when the build succeeds.
+export default defineConfig({
+  base: process.env.RAILSIEVE_BASE ?? "/",
+  outDir: process.env.RAILSIEVE_OUT ?? "./dist",
+  trailingSlash: "ignore",
+  build: { format: "directory", inlineStylesheets: "never" },
+  devToolbar: { enabled: false },
+  telemetry: false,
+});

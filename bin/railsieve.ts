@@ -1,0 +1,10 @@
+#!/usr/bin/env node
+// `npx railsieve …`: runs on the project's pinned Node 24, which strips the
+// TypeScript types itself (erasable syntax only, imports with .ts extensions).
+import { main } from "../src/cli/main.ts";
+
+process.exitCode = await main(process.argv.slice(2), {
+  out: (text) => process.stdout.write(text),
+  err: (text) => process.stderr.write(text),
+  color: Boolean(process.stdout.isTTY) && !process.env.NO_COLOR,
+});

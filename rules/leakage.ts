@@ -1,0 +1,58 @@
+import type { Rule } from "../src/core/engine/types.ts";
+import { finding } from "../src/core/engine/finding.ts";
+import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
+import { formatSI } from "../src/core/units.ts";
+import type { Diode } from "../src/core/schemas/diode.ts";
+
+/**
+ * Reverse leakage at the hot end of the temperature range, from the 25 °C
+ * rating: silicon and low-leakage junctions double every 10 °C, Schottky
+ * leakage grows ten-fold every 25 °C (both common practice [M]). Never scaled down.
+ */
+export function leakageAt(d: Diode, maxC: number): number {
+  const ir = d.ir_na * 1e-9;
+  const rise = Math.max(0, maxC - 25);
+  return d.type === "schottky" ? ir * 10 ** (rise / 25) : ir * 2 ** (rise / 10);
+}
+
+export const leakage: Rule = {
+  id: "leakage",
+  checks: "Reverse leakage at the hottest temperature, flowing through the resistance around the diode, stays inside its share of the error.",
+  formula:
+    "ir(T) = ir_na × 2^((T_max − 25)/10) (silicon, low-leakage) or × 10^((T_max − 25)/25) (Schottky); rectifier diode: ir(T) · rectifier_load_ohm / k ≤ offset_share · required_v; clamp diode: ir(T) · pull_down_ohm ≤ vil_v",
+  source: "Leakage doubling per 10 °C and Schottky ×10 per 25 °C: common practice [M].",
+  policy: "offset_share",
+  kinds: ["diode"],
+  needs: { diode: ["ir_na"] },
+  evaluate({ part, stage, design, policy }) {
+    const d = part as Diode;
+    if (stage.stage !== "diode" || stage.leakage_ohm === undefined || stage.leakage_limit_v === undefined) {
+      throw new Error("leakage needs a diode stage with a resistance and a limit");
+    }
+    const ohm = stage.leakage_ohm;
+    const hot = design.temperature.max_c;
+    const ir = leakageAt(d, hot);
+    const perInput = stage.leakage_per_input ?? 1;
+    const error = (ir * ohm) / perInput;
+    const limit = stage.leakage_limit_v;
+    const margin = limit - error;
+    const scale = perInput === 1 ? "" : ` ÷ ${Number(perInput.toPrecision(3))}`;
+    return finding("leakage", {
+      verdict: shareVerdict(margin, limit, policy),
+      needed: limit,
+      available: error,
+      margin,
+      unit: "V",
+      limit,
+      reason: () => `leaks ${formatSI(ir, "A")} at ${hot} °C (${formatSI(d.ir_na * 1e-9, "A")} at 25 °C), × ${formatSI(ohm, "Ω")}${scale} = ${formatSI(error, "V")}; the limit is ${formatSI(limit, "V")} (${stage.leakage_what ?? "error share"}): ${spareOrShortSmall(margin)}`,
+      steps: () => [
+        { label: "ir at 25 °C", value: d.ir_na * 1e-9, unit: "A" },
+        { label: `ir at ${hot} °C`, value: ir, unit: "A" },
+        { label: "resistance it flows through", value: ohm, unit: "Ω" },
+        { label: "error = ir × R (÷ k when input-referred)", value: error, unit: "V" },
+        { label: "limit", value: limit, unit: "V" },
+        { label: "margin = limit − error", value: margin, unit: "V" },
+      ],
+    });
+  },
+};

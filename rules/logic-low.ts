@@ -1,0 +1,86 @@
+import type { Rule } from "../src/core/engine/types.ts";
+import { finding, volts } from "../src/core/engine/finding.ts";
+import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
+import { formatSI, formatVolts } from "../src/core/units.ts";
+import { INPUT_CLAMP_V, NPN_VBE_ON_V, NPN_VCE_SAT_V, outputHigh, outputLow } from "./levels.ts";
+
+export const logicLow: Rule = {
+  id: "logic-low",
+  checks: "When the signal is negative, the logic input sees a level below V_IL and not below −0.3 V.",
+  formula:
+    "diode-clamp: V_low = ir · pull_down_ohm, margin = vil_v − V_low; pull-up: V_low = V− + out_neg_headroom_v, margin = min(vil_v − V_low, V_low + 0.3); npn-inverter: V_OH must exceed 0.7 V + 0.3 V to saturate the NPN, V_low = 0.2 V",
+  source: "Logic thresholds per the logic family (JEDEC JESD8C.01 for 3.3 V LVCMOS); input limits −0.3 V … V_DD + 0.3 V (common practice).",
+  policy: "headroom_margin_v",
+  kinds: ["comparator", "op-amp"],
+  needs: {},
+  evaluate({ part, stage, design, rails, policy }) {
+    const { vil_v: vil, level_shift: shift, pull_down_ohm: pull } = design.logic;
+    if (shift === "diode-clamp") {
+      const ir = stage.stage === "sign" && stage.clamp ? stage.clamp.ir_na * 1e-9 : 0;
+      const level = ir * pull;
+      const margin = vil - level;
+      return finding("logic-low", {
+        verdict: voltageVerdict(margin, policy),
+        needed: vil,
+        available: level,
+        margin,
+        unit: "V",
+        limit: vil,
+        reason: () => `with the output low the clamp diode blocks, and its leakage of ${formatSI(ir, "A")} × ${formatSI(pull, "Ω")} holds the input at ${formatSI(level, "V")}; needs at most V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
+        steps: () => [
+          { label: "clamp diode leakage ir", value: ir, unit: "A" },
+          { label: "V_low = ir × pull_down_ohm", value: level, unit: "V" },
+          { label: "margin = vil − V_low", value: margin, unit: "V" },
+        ],
+      });
+    }
+    if (shift === "npn-inverter") {
+      const high = outputHigh(part, rails);
+      if (high === null) {
+        return finding("logic-low", {
+          verdict: "fail",
+          needed: NPN_VBE_ON_V + INPUT_CLAMP_V,
+          available: 0,
+          margin: -(NPN_VBE_ON_V + INPUT_CLAMP_V),
+          unit: "V",
+          limit: vil,
+          reason: "an open-drain output cannot drive the NPN's base high",
+          steps: [],
+        });
+      }
+      const drive = NPN_VBE_ON_V + INPUT_CLAMP_V;
+      const margin = Math.min(high - drive, vil - NPN_VCE_SAT_V);
+      return finding("logic-low", {
+        verdict: voltageVerdict(margin, policy),
+        needed: drive,
+        available: high,
+        margin,
+        unit: "V",
+        limit: vil,
+        reason: () => `the output high of ${volts(high)} must exceed ${formatVolts(drive)} to saturate the NPN, which then pulls the input to ${formatVolts(NPN_VCE_SAT_V)} against V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
+        steps: () => [
+          { label: "V_OH", value: high, unit: "V" },
+          { label: "margin = min(V_OH − 1.0 V, vil − 0.2 V)", value: margin, unit: "V" },
+        ],
+      });
+    }
+    const low = outputLow(part, rails);
+    const margin = Math.min(vil - low, low + INPUT_CLAMP_V);
+    const tooLow = low + INPUT_CLAMP_V < vil - low;
+    return finding("logic-low", {
+      verdict: voltageVerdict(margin, policy),
+      needed: tooLow ? -INPUT_CLAMP_V : vil,
+      available: low,
+      margin,
+      unit: "V",
+      limit: vil,
+      reason: () => `the output low of ${volts(low)} reaches the input directly; ${tooLow ? "needs at least −0.30 V (below that the input's protection conducts)" : `needs at most V_IL ${formatVolts(vil)}`}: ${spareOrShort(margin, "V")}`,
+      steps: () => [
+        { label: "V_low = V− + out_neg_headroom_v", value: low, unit: "V" },
+        { label: "vil − V_low", value: vil - low, unit: "V" },
+        { label: "V_low + 0.3 V", value: low + INPUT_CLAMP_V, unit: "V" },
+        { label: "margin = the smaller", value: margin, unit: "V" },
+      ],
+    });
+  },
+};

@@ -1,0 +1,64 @@
+import type { Rule } from "../src/core/engine/types.ts";
+import { driftSpanC, finding } from "../src/core/engine/finding.ts";
+import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
+import { formatSI } from "../src/core/units.ts";
+import type { OpAmp } from "../src/core/schemas/op-amp.ts";
+
+/** Output offset of an op-amp stage at the temperature extreme, and its parts. */
+export function stageOffset(p: OpAmp, vosMultiplier: number, biasOhm: number, minC: number, maxC: number) {
+  const vos25 = p.vos_max_mv * 1e-3;
+  const span = driftSpanC(minC, maxC);
+  const drift = p.vos_drift_uv_per_c === undefined ? 0 : p.vos_drift_uv_per_c * 1e-6 * span;
+  const vos = vos25 + drift;
+  const ib = p.ib_max_na * 1e-9;
+  return { vos25, drift, vos, ib, output_v: vosMultiplier * vos + ib * biasOhm };
+}
+
+export const offset: Rule = {
+  id: "offset",
+  checks: "Input offset voltage and bias current through the source resistance stay inside this stage's share of the accuracy.",
+  formula:
+    "buffer: (Vos + Ib·R_th) / k; rectifier: (2·Vos + Ib·R_load) / k; Vos grows by drift × the largest distance of the temperature range from 25 °C; limit = offset_share · required_v",
+  source: "V_err = V_OS + I_B·R_S (op-amp error analysis, e.g. Fiore, Operational Amplifiers & Linear Integrated Circuits, ch. 5).",
+  policy: "offset_share",
+  kinds: ["op-amp"],
+  needs: { "op-amp": ["vos_max_mv", "ib_max_na"] },
+  evaluate({ part, stage, design, policy }) {
+    const p = part as OpAmp;
+    if (stage.stage !== "op-amp") throw new Error("offset applies to op-amp stages only");
+    const o = stageOffset(p, stage.vos_multiplier, stage.bias_ohm, design.temperature.min_c, design.temperature.max_c);
+    const error = o.output_v / stage.output_per_input;
+    const limit = policy.offset_share * design.accuracy.required_v;
+    const margin = limit - error;
+    const mult = stage.vos_multiplier === 1 ? "" : `${stage.vos_multiplier}·`;
+    const drift = o.drift > 0 ? ` incl. ${mv(o.drift)} drift` : "";
+    const scale = stage.output_per_input === 1 ? "" : `, ÷ ${round3(stage.output_per_input)} to the input`;
+    return finding("offset", {
+      verdict: shareVerdict(margin, limit, policy),
+      needed: limit,
+      available: error,
+      margin,
+      unit: "V",
+      limit,
+      reason: () => `adds ${mv(error)} at the input (${mult}${mv(o.vos)} offset${drift} + ${formatSI(o.ib, "A")} × ${formatSI(stage.bias_ohm, "Ω")}${scale}); the limit is ${mv(limit)}: ${spareOrShortSmall(margin)}`,
+      steps: () => [
+        { label: "Vos at 25 °C", value: o.vos25, unit: "V" },
+        { label: "drift × temperature span", value: o.drift, unit: "V" },
+        { label: "Ib", value: o.ib, unit: "A" },
+        { label: "R through which Ib flows", value: stage.bias_ohm, unit: "Ω" },
+        { label: `output error = ${mult}Vos + Ib·R`, value: o.output_v, unit: "V" },
+        { label: "input-referred error = output error / k", value: error, unit: "V" },
+        { label: "limit = offset_share × required_v", value: limit, unit: "V" },
+        { label: "margin = limit − error", value: margin, unit: "V" },
+      ],
+    });
+  },
+};
+
+function mv(v: number): string {
+  return formatSI(v, "V");
+}
+
+function round3(v: number): string {
+  return String(Number(v.toPrecision(3)));
+}

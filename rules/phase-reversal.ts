@@ -1,0 +1,41 @@
+import type { Rule } from "../src/core/engine/types.ts";
+import { finding } from "../src/core/engine/finding.ts";
+import { formatVolts } from "../src/core/units.ts";
+import type { OpAmp } from "../src/core/schemas/op-amp.ts";
+import { commonModeMargin } from "./input-common-mode.ts";
+
+// A part that reverses is only as safe as its common-mode margin: inside the
+// range it works, but an overload transient can latch the output the wrong way.
+export const phaseReversal: Rule = {
+  id: "phase-reversal",
+  checks: "The output does not invert when an input leaves the common-mode range.",
+  formula:
+    "no reversal: pass; reversal with common-mode margin ≥ 0: marginal; reversal with common-mode margin < 0: fail (margin = the input-common-mode margin)",
+  source: "Output phase reversal of some JFET- and bipolar-input classes (datasheet; common practice).",
+  policy: null,
+  kinds: ["op-amp"],
+  needs: { "op-amp": ["phase_reversal"] },
+  evaluate(ctx) {
+    const p = ctx.part as OpAmp;
+    const m = commonModeMargin(ctx);
+    const reverses = p.phase_reversal === true;
+    const verdict = !reverses ? "pass" : m.margin < 0 ? "fail" : "marginal";
+    const reason = !reverses
+      ? "does not reverse its output phase when the inputs leave the common-mode range"
+      : m.margin < 0
+        ? `reverses its output phase outside the common-mode range, and the inputs already leave it by ${formatVolts(-m.margin)}: the output can latch the wrong way`
+        : `reverses its output phase outside the common-mode range; inside it here with ${formatVolts(m.margin)} to spare, but an overload can latch the output the wrong way`;
+    return finding("phase-reversal", {
+      verdict,
+      needed: 0,
+      available: m.margin,
+      margin: reverses ? m.margin : Math.max(0, m.margin),
+      unit: "V",
+      reason,
+      steps: () => [
+        { label: "phase_reversal (1 = yes)", value: reverses ? 1 : 0, unit: "" },
+        { label: "input common-mode margin", value: m.margin, unit: "V" },
+      ],
+    });
+  },
+};

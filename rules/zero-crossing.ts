@@ -1,0 +1,41 @@
+import type { Rule } from "../src/core/engine/types.ts";
+import { finding } from "../src/core/engine/finding.ts";
+import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
+import { formatQuantity, formatSI } from "../src/core/units.ts";
+import type { OpAmp } from "../src/core/schemas/op-amp.ts";
+
+export const zeroCrossing: Rule = {
+  id: "zero-crossing",
+  checks: "At each zero crossing the rectifier's output jumps through two diode drops fast enough.",
+  formula: "jump time = 2·Vf / slew; limit = timing_fraction / f",
+  source: "Precision-rectifier dead time from slew through the diode drops (common practice).",
+  policy: "timing_fraction",
+  kinds: ["op-amp"],
+  needs: { "op-amp": ["slew_v_per_us"] },
+  evaluate({ part, stage, design, policy }) {
+    const p = part as OpAmp;
+    if (stage.stage !== "op-amp") throw new Error("zero-crossing applies to op-amp stages only");
+    const jump = stage.zero_crossing_v ?? 0;
+    const slew = p.slew_v_per_us * 1e6;
+    const time = jump / slew;
+    const f = design.signal.max_frequency_hz;
+    const limit = policy.timing_fraction / f;
+    const margin = limit - time;
+    return finding("zero-crossing", {
+      verdict: shareVerdict(margin, limit, policy),
+      needed: limit,
+      available: time,
+      margin,
+      unit: "s",
+      limit,
+      reason: () => `jumps ${formatSI(jump, "V")} (two diode drops) at ${formatQuantity(slew, "V/s")} in ${formatSI(time, "s")}; the limit is ${formatSI(limit, "s")} (${policy.timing_fraction * 100} % of the ${formatSI(1 / f, "s")} period): ${spareOrShort(margin, "s")}`,
+      steps: () => [
+        { label: "jump = 2·Vf", value: jump, unit: "V" },
+        { label: "slew rate", value: slew, unit: "V/s" },
+        { label: "jump time = jump / slew", value: time, unit: "s" },
+        { label: "limit = timing_fraction / f", value: limit, unit: "s" },
+        { label: "margin = limit − jump time", value: margin, unit: "s" },
+      ],
+    });
+  },
+};

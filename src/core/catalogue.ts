@@ -1,0 +1,271 @@
+// Loads the three catalogue CSV files into typed parts, collecting every
+// problem of every file at once (SPEC §4). Pure: callers pass text, not paths.
+import Papa from "papaparse";
+import type { z } from "zod";
+import { closest, type Problem } from "./problems.ts";
+import { comparatorColumns, comparatorRow, type Comparator } from "./schemas/comparator.ts";
+import { diodeColumns, diodeRow, type Diode } from "./schemas/diode.ts";
+import { opAmpColumns, opAmpRow, type OpAmp } from "./schemas/op-amp.ts";
+
+export type Part = OpAmp | Comparator | Diode;
+export type PartKind = Part["kind"];
+
+export const KINDS = [
+  { kind: "op-amp", file: "op-amps.csv", plural: "op amps", columns: opAmpColumns, row: opAmpRow },
+  { kind: "comparator", file: "comparators.csv", plural: "comparators", columns: comparatorColumns, row: comparatorRow },
+  { kind: "diode", file: "diodes.csv", plural: "diodes", columns: diodeColumns, row: diodeRow },
+] as const;
+
+export type Catalogue = {
+  parts: Part[];
+  byId: Map<string, Part>;
+  opAmps: OpAmp[];
+  comparators: Comparator[];
+  diodes: Diode[];
+};
+
+export type Loaded<T> = { value: T; problems: Problem[] };
+
+export type ParsedFile = { kind: PartKind; file: string; parts: Part[]; lines: number[]; problems: Problem[] };
+
+type RowSchema = z.ZodType<Part, Record<string, string | undefined>>;
+
+const MAX_LINE_CHARS = 20_000;
+
+/** Parses one catalogue file's text. Rows with problems are left out of `parts`. */
+export function parseCatalogueText(kind: PartKind, file: string, text: string): ParsedFile {
+  const { value, problems, lines } = parseRows(kind, file, text);
+  return { kind, file, parts: value, lines, problems };
+}
+
+function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> & { lines: number[] } {
+  const lines: number[] = [];
+  const spec = KINDS.find((k) => k.kind === kind);
+  if (!spec) throw new Error(`unknown kind ${kind}`);
+  const known = Object.keys(spec.columns);
+  const problems: Problem[] = [];
+  const body = text.startsWith("\uFEFF") ? text.slice(1) : text;
+
+  if (body.trim() === "") {
+    return { value: [], lines, problems: [{ file, message: `file is empty (expected a header row: ${known.join(",")})` }] };
+  }
+  const longLine = findLongLine(body);
+  if (longLine) {
+    problems.push({
+      file,
+      line: longLine.line,
+      message: `line is ${longLine.length} characters long (expected at most ${MAX_LINE_CHARS}; is this really a catalogue file?)`,
+    });
+    return { value: [], lines, problems };
+  }
+
+  const parsed = Papa.parse<string[]>(body, { delimiter: ",", skipEmptyLines: "greedy" });
+  const lineOf = lineStarts(body);
+  const rowLines = rowLineNumbers(parsed.data, body, lineOf);
+
+  for (const e of parsed.errors) {
+    if (e.type === "Quotes") {
+      const line = e.row !== undefined ? (rowLines[e.row] ?? 1) : 1;
+      problems.push({ file, line, message: "a quoted cell is never closed (expected a closing '\"')" });
+    }
+  }
+  if (problems.length > 0) return { value: [], lines, problems };
+
+  const [header, ...rows] = parsed.data;
+  if (!header) return { value: [], lines, problems: [{ file, message: "file has no header row" }] };
+  const columns = header.map((h) => h.trim());
+
+  if (columns.length === 1 && (columns[0] ?? "").includes(";")) {
+    return {
+      value: [],
+      lines,
+      problems: [
+        {
+          file,
+          line: 1,
+          message: `header looks semicolon-separated (got '${shorten(columns[0] ?? "")}', expected comma-separated columns; export the sheet as CSV with commas)`,
+        },
+      ],
+    };
+  }
+
+  let headerOk = true;
+  columns.forEach((c, i) => {
+    if (known.includes(c)) {
+      if (columns.indexOf(c) !== i) {
+        problems.push({ file, line: 1, column: c, message: "column appears twice (expected each column once)" });
+        headerOk = false;
+      }
+      return;
+    }
+    const guess = closest(c, known);
+    problems.push({
+      file,
+      line: 1,
+      column: c,
+      message: `unknown column (got '${shorten(c)}', expected ${guess ? `'${guess}'` : `one of ${known.join(", ")}`})`,
+    });
+    headerOk = false;
+  });
+  for (const required of requiredColumns(spec.columns)) {
+    if (!columns.includes(required)) {
+      problems.push({ file, line: 1, column: required, message: "required column is missing (expected it in the header)" });
+      headerOk = false;
+    }
+  }
+  if (!headerOk) return { value: [], lines, problems };
+
+  const schema = spec.row as unknown as RowSchema;
+  const parts: Part[] = [];
+  rows.forEach((cells, index) => {
+    const line = rowLines[index + 1] ?? index + 2;
+    if (cells.length > columns.length) {
+      problems.push({
+        file,
+        line,
+        message: `row has ${cells.length} cells (got ${cells.length - columns.length} more than the header, expected ${columns.length}; is there an unquoted comma?)`,
+      });
+      return;
+    }
+    const record: Record<string, string> = {};
+    columns.forEach((c, i) => {
+      record[c] = cells[i] ?? "";
+    });
+    const result = schema.safeParse(record);
+    if (result.success) {
+      parts.push(result.data);
+      lines.push(line);
+      return;
+    }
+    for (const issue of result.error.issues) {
+      const column = issue.path.length > 0 ? String(issue.path[0]) : undefined;
+      problems.push({ file, line, ...(column !== undefined ? { column } : {}), message: issue.message });
+    }
+  });
+  return { value: parts, lines, problems };
+}
+
+function requiredColumns(columns: Record<string, z.ZodType>): string[] {
+  return Object.entries(columns)
+    .filter(([, schema]) => !schema.safeParse(undefined).success)
+    .map(([name]) => name)
+    .filter((name) => name !== "out_neg_headroom_v" && name !== "out_pos_headroom_v");
+}
+
+function shorten(s: string): string {
+  return s.length > 40 ? `${s.slice(0, 37)}…` : s;
+}
+
+function findLongLine(text: string): { line: number; length: number } | undefined {
+  let line = 1;
+  let start = 0;
+  for (let i = 0; i <= text.length; i++) {
+    if (i === text.length || text.charCodeAt(i) === 10) {
+      if (i - start > MAX_LINE_CHARS) return { line, length: i - start };
+      line++;
+      start = i + 1;
+    }
+  }
+  return undefined;
+}
+
+function lineStarts(text: string): number[] {
+  const starts = [0];
+  for (let i = 0; i < text.length; i++) if (text.charCodeAt(i) === 10) starts.push(i + 1);
+  return starts;
+}
+
+/**
+ * Line number (1-based) where each parsed row starts. Blank lines are skipped by
+ * the parser and quoted cells may span lines, so rows are located by walking the
+ * text past each row's cells rather than by counting rows.
+ */
+function rowLineNumbers(rows: string[][], text: string, starts: number[]): number[] {
+  const lines: number[] = [];
+  let pos = 0;
+  const lineAt = (offset: number) => {
+    let lo = 0;
+    let hi = starts.length - 1;
+    while (lo < hi) {
+      const mid = (lo + hi + 1) >> 1;
+      if ((starts[mid] ?? 0) <= offset) lo = mid;
+      else hi = mid - 1;
+    }
+    return lo + 1;
+  };
+  for (const row of rows) {
+    while (pos < text.length && (text[pos] === "\n" || text[pos] === "\r" || isBlankLine(text, pos))) {
+      pos = skipLine(text, pos);
+    }
+    lines.push(lineAt(pos));
+    pos = skipRow(text, pos, row.length);
+  }
+  return lines;
+}
+
+function isBlankLine(text: string, pos: number): boolean {
+  if (pos > 0 && text[pos - 1] !== "\n") return false;
+  let i = pos;
+  while (i < text.length && (text[i] === " " || text[i] === "\t" || text[i] === ",")) i++;
+  return i < text.length ? text[i] === "\n" || text[i] === "\r" : i > pos;
+}
+
+function skipLine(text: string, pos: number): number {
+  const nl = text.indexOf("\n", pos);
+  return nl < 0 ? text.length : nl + 1;
+}
+
+// Moves past one CSV record starting at pos, honouring quotes.
+function skipRow(text: string, pos: number, _cells: number): number {
+  let inQuotes = false;
+  let i = pos;
+  for (; i < text.length; i++) {
+    const ch = text[i];
+    if (ch === '"') {
+      if (inQuotes && text[i + 1] === '"') i++;
+      else inQuotes = !inQuotes;
+    } else if (ch === "\n" && !inQuotes) return i + 1;
+  }
+  return i;
+}
+
+/** Joins the three kinds, adding cross-file checks (ids unique across all files). */
+export function buildCatalogue(
+  files: (Pick<ParsedFile, "file" | "parts" | "problems"> & { lines?: number[] })[],
+): Loaded<Catalogue> {
+  const problems: Problem[] = files.flatMap((f) => f.problems);
+  const byId = new Map<string, Part>();
+  const seenIn = new Map<string, string>();
+  for (const f of files) {
+    for (const [index, p] of f.parts.entries()) {
+      const first = seenIn.get(p.id);
+      const line = f.lines?.[index];
+      if (first !== undefined) {
+        problems.push({
+          file: f.file,
+          ...(line !== undefined ? { line } : {}),
+          column: "id",
+          message: `duplicate id (got '${p.id}', expected an id not already used in ${first})`,
+        });
+        continue;
+      }
+      seenIn.set(p.id, f.file);
+      byId.set(p.id, p);
+    }
+  }
+  const parts = [...byId.values()];
+  return {
+    value: {
+      parts,
+      byId,
+      opAmps: parts.filter((p): p is OpAmp => p.kind === "op-amp"),
+      comparators: parts.filter((p): p is Comparator => p.kind === "comparator"),
+      diodes: parts.filter((p): p is Diode => p.kind === "diode"),
+    },
+    problems,
+  };
+}
+
+export function catalogueFromParts(parts: Part[]): Catalogue {
+  return buildCatalogue([{ file: "parts", parts, problems: [] }]).value;
+}

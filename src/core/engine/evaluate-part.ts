@@ -1,0 +1,79 @@
+// Runs a role's rules on one part and ranks the parts of a role (SPEC §7).
+import type { Part } from "../catalogue.ts";
+import type { Policy, Role } from "../schemas/design.ts";
+import type { Finding, Rule, RuleContext, Stage, Verdict } from "./types.ts";
+import { severity, unratedFinding, worst } from "./verdict.ts";
+
+export type PartResult = {
+  part: Part;
+  verdict: Verdict;
+  findings: Finding[];
+  /** Named for this role in the design's BOM. */
+  bom: boolean;
+  /** Smallest margin relative to its limit, over the findings that have one. */
+  relative: number;
+};
+
+export function evaluatePart(rules: readonly Rule[], ctx: Omit<RuleContext, "part">, part: Part, bom: boolean): PartResult {
+  const findings: Finding[] = [];
+  for (const rule of rules) {
+    const needs = rule.needs[part.kind] ?? [];
+    const empty = needs.filter((c) => (part as Record<string, unknown>)[c] === undefined);
+    findings.push(empty.length > 0 ? unratedFinding(rule.id, empty, unitOf(rule.id)) : rule.evaluate({ ...ctx, part }));
+  }
+  return { part, verdict: partVerdict(findings, ctx.policy), findings, bom, relative: relativeMargin(findings) };
+}
+
+/** The worst finding; with allow_unrated an unrated finding counts as marginal. */
+export function partVerdict(findings: readonly Finding[], policy: Policy): Verdict {
+  const v = worst(findings.map((f) => f.verdict));
+  return v === "unrated" && policy.allow_unrated ? "marginal" : v;
+}
+
+function relativeMargin(findings: readonly Finding[]): number {
+  let least = Infinity;
+  for (const f of findings) {
+    if (f.margin === null || f.limit === undefined || !(f.limit > 0)) continue;
+    least = Math.min(least, f.margin / f.limit);
+  }
+  return Number.isFinite(least) ? least : 0;
+}
+
+const UNITS: Record<string, string> = {
+  "slew-rate": "V/s",
+  "zero-crossing": "s",
+  "propagation-delay": "s",
+  recovery: "s",
+  "forward-current": "A",
+  "unity-gain-stable": "",
+};
+
+function unitOf(rule: string): string {
+  return UNITS[rule] ?? "V";
+}
+
+const STATUS_ORDER: Record<string, number> = { stocked: 0, approved: 1, listed: 2 };
+
+/** Ranking of SPEC §7: verdict, status, cost band, relative margin (largest first), id. */
+export function compareResults(a: PartResult, b: PartResult): number {
+  return (
+    severity(a.verdict) - severity(b.verdict) ||
+    (STATUS_ORDER[a.part.status] ?? 3) - (STATUS_ORDER[b.part.status] ?? 3) ||
+    (a.part.cost_band ?? 6) - (b.part.cost_band ?? 6) ||
+    b.relative - a.relative ||
+    (a.part.id < b.part.id ? -1 : a.part.id > b.part.id ? 1 : 0)
+  );
+}
+
+export function isFit(v: Verdict): boolean {
+  return v === "pass" || v === "marginal";
+}
+
+export type RoleParts = { fits: PartResult[]; rejected: PartResult[] };
+
+export function rankRole(results: PartResult[]): RoleParts {
+  const sorted = [...results].sort(compareResults);
+  return { fits: sorted.filter((r) => isFit(r.verdict)), rejected: sorted.filter((r) => !isFit(r.verdict)) };
+}
+
+export type { Role, Stage };

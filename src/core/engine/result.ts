@@ -1,0 +1,71 @@
+// What evaluating a design yields: derived values and, per role, ranked parts.
+import type { PartKind } from "../catalogue.ts";
+import type { Divider } from "../math/divider.ts";
+import type { PumpRail } from "../math/charge-pump.ts";
+import type { Design, Role } from "../schemas/design.ts";
+import type { PartResult } from "./evaluate-part.ts";
+import type { Rails, Stage } from "./types.ts";
+
+export type RoleResult = {
+  role: Role;
+  /** The kind the role asks for; the sign role also takes op amps. */
+  kind: PartKind;
+  kinds: readonly PartKind[];
+  /** What the role does, in a few words. */
+  label: string;
+  rules: readonly string[];
+  stage: Stage;
+  fits: PartResult[];
+  rejected: PartResult[];
+  /** BOM id for this role, if any. */
+  bom?: string;
+  /** The part the design uses: the BOM part, else the best-ranked fit. */
+  chosen?: string;
+  /** A role that may be left out without failing the design. */
+  optional?: boolean;
+};
+
+export type DiodeUse = { id: string; vf_v: number; current_a: number; fits: boolean };
+
+export type Derived = {
+  rails: Rails;
+  negative:
+    | { kind: "ground" }
+    | { kind: "fixed" }
+    | ({ kind: "charge-pump"; diode: DiodeUse } & PumpRail);
+  /** Target ratio window/peak (1 when no divider is needed). */
+  target_ratio: number;
+  divider: Divider | null;
+  /** Ratio actually used, k. */
+  ratio: number;
+  /** Window actually used, W = k · peak_v. */
+  window_v: number;
+  /** (Rs + R1) ‖ R2. */
+  thevenin_ohm: number;
+  /** One ADC step referred to the input: (reference_v / 2^bits) / k. */
+  adc_step_at_input_v: number;
+  rectifier_diode?: DiodeUse;
+  clamp_diode?: DiodeUse;
+};
+
+export type DesignResult = {
+  design: Design;
+  topology: Exclude<Design["topology"], "all">;
+  derived: Derived;
+  roles: RoleResult[];
+  /** Things the reader must know about how the numbers were obtained. */
+  notes: string[];
+};
+
+export type DesignProblem = { path: string; message: string };
+
+export type Evaluation = { ok: true; result: DesignResult } | { ok: false; problems: DesignProblem[] };
+
+/** Exit-0 condition of SPEC §10: every BOM part fits and every required role has a fit. */
+export function designHolds(result: DesignResult): boolean {
+  return result.roles.every((r) => {
+    if (r.optional && r.fits.length === 0 && !r.bom) return true;
+    if (r.fits.length === 0) return false;
+    return r.bom === undefined || r.fits.some((p) => p.part.id === r.bom);
+  });
+}

@@ -1,0 +1,260 @@
+// Topology `rectify-and-sign` (SPEC §6–§7): divider, follower buffer, sign
+// comparator, two-op-amp precision rectifier, optional charge-pumped V−.
+// Diodes are settled first so every amplifier is checked against the rail and
+// the diode drops it will really get.
+import type { Catalogue, Part } from "../../catalogue.ts";
+import { pumpRail } from "../../math/charge-pump.ts";
+import { forwardVoltage } from "../../math/diode.ts";
+import type { Design, Role } from "../../schemas/design.ts";
+import type { Diode } from "../../schemas/diode.ts";
+import { formatSI, formatVolts } from "../../units.ts";
+import { RULES_BY_ID, type RuleId } from "../../../../rules/index.ts";
+import { evaluatePart, rankRole, type PartResult } from "../evaluate-part.ts";
+import type { Derived, DesignResult, DiodeUse, Evaluation, RoleResult } from "../result.ts";
+import type { DiodeStage, OpAmpStage, Rails, Rule, SignStage, Stage } from "../types.ts";
+import { frontEnd } from "./front-end.ts";
+
+const OP_AMP_RULES: RuleId[] = [
+  "supply-range",
+  "input-common-mode",
+  "output-swing",
+  "unity-gain-stable",
+  "phase-reversal",
+  "offset",
+  "bandwidth",
+  "slew-rate",
+];
+
+export const RECTIFY_AND_SIGN_ROLES: Record<string, { kind: Part["kind"]; kinds: Part["kind"][]; label: string; rules: RuleId[] }> = {
+  buffer: { kind: "op-amp", kinds: ["op-amp"], label: "follower after the divider (in = out = ±W)", rules: OP_AMP_RULES },
+  rectifier: {
+    kind: "op-amp",
+    kinds: ["op-amp"],
+    label: "precision rectifier, two per design (output −Vf … W + Vf, noise gain 2)",
+    rules: [...OP_AMP_RULES, "zero-crossing"],
+  },
+  sign: {
+    kind: "comparator",
+    kinds: ["comparator", "op-amp"],
+    label: "sign comparator driving a logic input (an op amp may stand in, at best marginal)",
+    rules: ["supply-range", "input-common-mode", "logic-high", "logic-low", "propagation-delay", "sign-dead-band"],
+  },
+  "pump-diode": { kind: "diode", kinds: ["diode"], label: "charge-pump diode (two per pump)", rules: ["reverse-voltage", "recovery", "forward-current"] },
+  "rectifier-diode": { kind: "diode", kinds: ["diode"], label: "precision-rectifier feedback diode", rules: ["reverse-voltage", "leakage", "recovery"] },
+  "clamp-diode": { kind: "diode", kinds: ["diode"], label: "series diode from the comparator to the logic input", rules: ["reverse-voltage", "leakage"] },
+};
+
+/** Used only when the catalogue has no diode at all, so rails can still be computed. */
+const NOMINAL_SILICON: Diode = {
+  kind: "diode",
+  id: "nominal-silicon",
+  name: "Nominal silicon diode (assumed)",
+  status: "listed",
+  cost_band: undefined,
+  tags: [],
+  notes: "",
+  type: "silicon",
+  vf_1ma_v: 0.65,
+  vf_10ma_v: 0.75,
+  ir_na: 25,
+  vr_max_v: 75,
+  trr_ns: 4,
+  cj_pf: 2,
+  if_max_ma: 200,
+};
+
+export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Evaluation {
+  const fe = frontEnd(design);
+  if (!fe.ok) return fe;
+  const { divider, ratio: k, window_v: W, thevenin_ohm, target_ratio } = fe;
+  const notes: string[] = [];
+  const roles: RoleResult[] = [];
+  const policy = design.policy;
+  const A = design.accuracy.required_v;
+  const positive = design.supply.positive_v;
+  const neg = design.supply.negative;
+
+  const runRole = (role: Role, stage: Stage, rails: Rails, candidates: readonly Part[]): RoleResult => {
+    const spec = RECTIFY_AND_SIGN_ROLES[role];
+    if (!spec) throw new Error(`role ${role} is not part of rectify-and-sign`);
+    const rules = spec.rules.map((id) => RULES_BY_ID.get(id)).filter((r): r is Rule => r !== undefined);
+    const bom = design.bom[role];
+    const ctx = { role, stage, design, policy, rails };
+    const results: PartResult[] = candidates.map((p) => evaluatePart(rules, ctx, p, p.id === bom));
+    const ranked = rankRole(results);
+    const chosen = bom ?? ranked.fits[0]?.part.id;
+    const result: RoleResult = {
+      role,
+      kind: spec.kind,
+      kinds: spec.kinds,
+      label: spec.label,
+      rules: spec.rules,
+      stage,
+      ...ranked,
+      ...(bom !== undefined ? { bom } : {}),
+      ...(chosen !== undefined ? { chosen } : {}),
+    };
+    roles.push(result);
+    return result;
+  };
+
+  // Diode choice for a role: the BOM part, else the best fit, else the least bad.
+  const settleDiode = (r: RoleResult, what: string): Diode => {
+    const pick = r.bom ?? r.fits[0]?.part.id ?? r.rejected[0]?.part.id;
+    const found = pick === undefined ? undefined : catalogue.byId.get(pick);
+    if (found && found.kind === "diode") {
+      if (!r.fits.some((f) => f.part.id === found.id)) {
+        notes.push(`The ${what} ${found.id} does not fit its role; values that depend on it use it anyway.`);
+      }
+      return found;
+    }
+    notes.push(`The catalogue has no diodes; the ${what} is taken as a nominal silicon diode (0.65 V at 1 mA).`);
+    return NOMINAL_SILICON;
+  };
+  const use = (d: Diode, current: number, r: RoleResult | undefined): DiodeUse => ({
+    id: d.id,
+    vf_v: forwardVoltage(d, current),
+    current_a: current,
+    fits: r ? r.fits.some((f) => f.part.id === d.id) : false,
+  });
+
+  // 1. The negative rail, with the pump diode settled first.
+  let negative_v: number;
+  let negativeDerived: Derived["negative"];
+  const noRails: Rails = { positive_v: positive, negative_v: 0 };
+  if (neg.kind === "charge-pump") {
+    const stage: DiodeStage = {
+      stage: "diode",
+      label: "the pump diode",
+      reverse_v: 2 * neg.drive_v,
+      reverse_what: `2 × the ${formatVolts(neg.drive_v)} drive`,
+      recovery_limit_s: policy.timing_fraction / (2 * neg.frequency_hz),
+      recovery_what: `${policy.timing_fraction * 100} % of the pump's ${formatSI(1 / (2 * neg.frequency_hz), "s")} half period`,
+      forward_a: 2 * neg.load_a,
+    };
+    const r = runRole("pump-diode", stage, noRails, catalogue.diodes);
+    const diode = settleDiode(r, "pump diode");
+    const pumpDiode = use(diode, neg.load_a, r);
+    const rail = pumpRail(neg, pumpDiode.vf_v);
+    if (neg.load_a >= rail.collapse_a) {
+      return {
+        ok: false,
+        problems: [
+          {
+            path: "supply.negative.load_a",
+            message: `load is at or past the pump's collapse current (got ${formatSI(neg.load_a, "A")}, expected less than (drive − 2·Vf)·f·C = ${formatSI(rail.collapse_a, "A")} with diode ${diode.id}); raise the frequency or the flying capacitor, or lower the load`,
+          },
+        ],
+      };
+    }
+    negative_v = rail.worst_v;
+    negativeDerived = { kind: "charge-pump", diode: pumpDiode, ...rail };
+  } else if (neg.kind === "fixed") {
+    negative_v = neg.v;
+    negativeDerived = { kind: "fixed" };
+  } else {
+    negative_v = 0;
+    negativeDerived = { kind: "ground" };
+  }
+  const rails: Rails = { positive_v: positive, negative_v };
+
+  // 2. The rectifier's diodes, at the current the full window drives through the load.
+  const rectCurrent = W / design.front_end.rectifier_load_ohm;
+  const rectDiodeRole = runRole(
+    "rectifier-diode",
+    {
+      stage: "diode",
+      label: "the rectifier diode",
+      reverse_v: 2 * W,
+      reverse_what: `2 × the ${formatVolts(W)} window`,
+      recovery_limit_s: policy.timing_fraction / design.signal.max_frequency_hz,
+      recovery_what: `${policy.timing_fraction * 100} % of the signal period`,
+      leakage_ohm: design.front_end.rectifier_load_ohm,
+      leakage_limit_v: policy.offset_share * A,
+      leakage_per_input: k,
+      leakage_what: "offset share of the required accuracy, input-referred",
+    },
+    rails,
+    catalogue.diodes,
+  );
+  const rectDiode = use(settleDiode(rectDiodeRole, "rectifier diode"), rectCurrent, rectDiodeRole);
+  const vf = rectDiode.vf_v;
+
+  // 3. The clamp diode, when the level shift uses one.
+  let clamp: SignStage["clamp"];
+  let clampUse: DiodeUse | undefined;
+  if (design.logic.level_shift === "diode-clamp") {
+    const clampRole = runRole(
+      "clamp-diode",
+      {
+        stage: "diode",
+        label: "the clamp diode",
+        reverse_v: Math.abs(negative_v),
+        reverse_what: "|V−|, when the comparator output sits low",
+        leakage_ohm: design.logic.pull_down_ohm,
+        leakage_limit_v: design.logic.vil_v,
+        leakage_what: "V_IL of the logic input",
+      },
+      rails,
+      catalogue.diodes,
+    );
+    const d = settleDiode(clampRole, "clamp diode");
+    clamp = { id: d.id, vf_1ma_v: d.vf_1ma_v, vf_10ma_v: d.vf_10ma_v, ir_na: d.ir_na };
+    clampUse = use(d, positive / design.logic.pull_down_ohm, clampRole);
+  }
+
+  // 4. The amplifiers.
+  const buffer: OpAmpStage = {
+    stage: "op-amp",
+    label: "the buffer",
+    input: { low: -W, high: W },
+    output: { low: -W, high: W },
+    noise_gain: 1,
+    vos_multiplier: 1,
+    bias_ohm: thevenin_ohm,
+    output_per_input: k,
+    bandwidth_peak_v: design.signal.peak_v,
+    slew_amplitude_v: W,
+  };
+  const rectifier: OpAmpStage = {
+    stage: "op-amp",
+    label: "the rectifier",
+    input: { low: -W, high: W },
+    output: { low: -vf, high: W + vf },
+    noise_gain: 2,
+    vos_multiplier: 2,
+    bias_ohm: design.front_end.rectifier_load_ohm,
+    output_per_input: k,
+    bandwidth_peak_v: design.signal.peak_v,
+    slew_amplitude_v: W + vf,
+    zero_crossing_v: 2 * vf,
+  };
+  const sign: SignStage = {
+    stage: "sign",
+    label: "the sign comparator",
+    input: { low: -W, high: W },
+    output_per_input: k,
+    ...(clamp ? { clamp } : {}),
+  };
+  runRole("buffer", buffer, rails, catalogue.opAmps);
+  runRole("rectifier", rectifier, rails, catalogue.opAmps);
+  runRole("sign", sign, rails, [...catalogue.comparators, ...catalogue.opAmps]);
+
+  const order: Role[] = ["buffer", "rectifier", "sign", "pump-diode", "rectifier-diode", "clamp-diode"];
+  roles.sort((a, b) => order.indexOf(a.role) - order.indexOf(b.role));
+
+  const derived: Derived = {
+    rails,
+    negative: negativeDerived,
+    target_ratio,
+    divider,
+    ratio: k,
+    window_v: W,
+    thevenin_ohm,
+    adc_step_at_input_v: design.adc.reference_v / 2 ** design.adc.bits / k,
+    rectifier_diode: rectDiode,
+    ...(clampUse ? { clamp_diode: clampUse } : {}),
+  };
+  const result: DesignResult = { design, topology: "rectify-and-sign", derived, roles, notes };
+  return { ok: true, result };
+}

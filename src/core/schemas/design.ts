@@ -1,0 +1,236 @@
+// Design files (SPEC §5). Numbers are SI; a string with an SI prefix ("1u",
+// "100k") is accepted wherever a number is. DesignInput is what a user writes,
+// Design the cleaned value with policy defaults filled in.
+import { z } from "zod";
+import { ID_PATTERN } from "./cells.ts";
+import { parseSI } from "../units.ts";
+
+type Range = { above?: number; min?: number; max?: number; below?: number; integer?: boolean };
+
+function describe(r: Range): string {
+  const parts = [r.integer ? "a whole number" : "a number (or a string such as \"100k\")"];
+  if (r.above !== undefined) parts.push(`greater than ${r.above}`);
+  if (r.min !== undefined) parts.push(`of at least ${r.min}`);
+  if (r.below !== undefined) parts.push(`less than ${r.below}`);
+  if (r.max !== undefined) parts.push(`of at most ${r.max}`);
+  return parts.join(" ");
+}
+
+export function shown(value: unknown): string {
+  if (typeof value === "string") return `'${value.length > 40 ? `${value.slice(0, 37)}…` : value}'`;
+  if (value === undefined) return "nothing";
+  const json = JSON.stringify(value);
+  return json === undefined ? String(value) : json.length > 40 ? `${json.slice(0, 37)}…` : json;
+}
+
+/** A number in SI units, given as a JSON number or an SI-prefixed string. */
+export function si(range: Range = {}) {
+  return z.unknown().transform((value, ctx): number => {
+    const expected = describe(range);
+    let n: number | undefined;
+    if (typeof value === "number") n = value;
+    else if (typeof value === "string") {
+      const parsed = parseSI(value);
+      if (parsed.ok) n = parsed.value;
+    }
+    if (n === undefined || !Number.isFinite(n)) {
+      const what = value === undefined ? "required value is missing" : "not a number";
+      ctx.addIssue({ code: "custom", message: `${what} (got ${shown(value)}, expected ${expected})` });
+      return z.NEVER;
+    }
+    const bad =
+      (range.integer === true && !Number.isInteger(n)) ||
+      (range.above !== undefined && n <= range.above) ||
+      (range.min !== undefined && n < range.min) ||
+      (range.below !== undefined && n >= range.below) ||
+      (range.max !== undefined && n > range.max);
+    if (bad) {
+      ctx.addIssue({ code: "custom", message: `out of range (got ${shown(value)}, expected ${expected})` });
+      return z.NEVER;
+    }
+    return n;
+  });
+}
+
+function oneOf<const T extends readonly [string, ...string[]]>(values: T) {
+  return z.unknown().transform((value, ctx): T[number] => {
+    if (typeof value === "string" && (values as readonly string[]).includes(value)) return value as T[number];
+    const what = value === undefined ? "required value is missing" : "unknown value";
+    ctx.addIssue({
+      code: "custom",
+      message: `${what} (got ${shown(value)}, expected ${values.map((v) => `'${v}'`).join(" or ")})`,
+    });
+    return z.NEVER;
+  });
+}
+
+export const TOPOLOGIES = ["rectify-and-sign", "offset-to-mid-rail", "all"] as const;
+export const LEVEL_SHIFTS = ["diode-clamp", "npn-inverter", "pull-up"] as const;
+export const SERIES = ["E12", "E24", "E96"] as const;
+export const ROLES = [
+  "buffer",
+  "rectifier",
+  "sign",
+  "pump-diode",
+  "rectifier-diode",
+  "clamp-diode",
+  "level-shift",
+  "reference-buffer",
+] as const;
+export type Role = (typeof ROLES)[number];
+
+export const POLICY_DEFAULTS = {
+  headroom_margin_v: 0.1,
+  marginal_fraction: 0.2,
+  offset_share: 0.25,
+  speed_share: 0.25,
+  sign_share: 0.5,
+  timing_fraction: 0.01,
+  allow_unrated: false,
+} as const;
+
+const chargePump = z.strictObject({
+  kind: z.literal("charge-pump"),
+  drive_v: si({ above: 0, max: 100 }),
+  frequency_hz: si({ above: 0 }),
+  flying_cap_f: si({ above: 0 }),
+  reservoir_cap_f: si({ above: 0 }),
+  load_a: si({ min: 0 }),
+});
+
+const negativeSupply = z.unknown().pipe(
+  z.discriminatedUnion(
+    "kind",
+    [
+      z.strictObject({ kind: z.literal("ground") }),
+      z.strictObject({ kind: z.literal("fixed"), v: si({ below: 0, min: -100 }) }),
+      chargePump,
+    ],
+    { error: (iss) => negativeKindMessage(iss.input) },
+  ),
+);
+
+function negativeKindMessage(input: unknown): string {
+  const kind = typeof input === "object" && input !== null ? (input as { kind?: unknown }).kind : input;
+  return `unknown negative supply (got kind ${shown(kind)}, expected 'ground', 'fixed' or 'charge-pump')`;
+}
+
+const policy = z
+  .strictObject({
+    headroom_margin_v: si({ min: 0, max: 10 }).optional(),
+    marginal_fraction: si({ min: 0, max: 1 }).optional(),
+    offset_share: si({ above: 0, max: 1 }).optional(),
+    speed_share: si({ above: 0, max: 1 }).optional(),
+    sign_share: si({ above: 0, max: 1 }).optional(),
+    timing_fraction: si({ above: 0, max: 1 }).optional(),
+    allow_unrated: z.boolean({ error: (i) => `not true or false (got ${shown(i.input)}, expected true or false)` }).optional(),
+  })
+  .optional()
+  .transform((p) => ({ ...POLICY_DEFAULTS, ...stripUndefined(p ?? {}) }));
+
+function stripUndefined<T extends object>(o: T): Partial<T> {
+  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
+}
+
+const text = (what: string, max: number) =>
+  z.unknown().transform((value, ctx): string => {
+    if (typeof value === "string" && value.trim() !== "" && value.length <= max) return value;
+    ctx.addIssue({ code: "custom", message: `not a valid ${what} (got ${shown(value)}, expected text of 1 to ${max} characters)` });
+    return z.NEVER;
+  });
+
+const designId = z.unknown().transform((value, ctx): string => {
+  if (typeof value === "string" && ID_PATTERN.test(value) && value.length <= 80) return value;
+  ctx.addIssue({
+    code: "custom",
+    message: `not a valid id (got ${shown(value)}, expected lower-case letters, digits and '-', starting with a letter or digit)`,
+  });
+  return z.NEVER;
+});
+
+const bom = z
+  .record(
+    z.string().transform((key, ctx): Role => {
+      if ((ROLES as readonly string[]).includes(key)) return key as Role;
+      ctx.addIssue({ code: "custom", message: `unknown role (got '${key}', expected one of ${ROLES.join(", ")})` });
+      return z.NEVER;
+    }),
+    designId,
+  )
+  .optional()
+  .transform((b): Partial<Record<Role, string>> => b ?? {});
+
+export const designSchema = z
+  .strictObject({
+    id: designId,
+    title: text("title", 200),
+    topology: oneOf(TOPOLOGIES),
+    supply: z.strictObject({
+      positive_v: si({ above: 0, max: 100 }),
+      negative: negativeSupply,
+    }),
+    signal: z.strictObject({
+      peak_v: si({ above: 0, max: 100000 }),
+      max_frequency_hz: si({ above: 0 }),
+      source_ohm: si({ min: 0 }),
+    }),
+    front_end: z.strictObject({
+      window_v: si({ above: 0 }),
+      divider_total_ohm: si({ above: 0 }),
+      resistor_tolerance: si({ min: 0, max: 0.2 }),
+      series: oneOf(SERIES),
+      rectifier_load_ohm: si({ above: 0 }),
+    }),
+    adc: z.strictObject({
+      bits: si({ integer: true, min: 1, max: 32 }),
+      reference_v: si({ above: 0, max: 100 }),
+      reference_tolerance: si({ min: 0, max: 0.2 }),
+    }),
+    logic: z.strictObject({
+      vdd_v: si({ above: 0, max: 100 }),
+      vih_v: si({ above: 0 }),
+      vil_v: si({ min: 0 }),
+      level_shift: oneOf(LEVEL_SHIFTS),
+      pull_down_ohm: si({ above: 0 }),
+    }),
+    accuracy: z.strictObject({ required_v: si({ above: 0 }) }),
+    temperature: z.strictObject({ min_c: si({ min: -273.15 }), max_c: si({ max: 500 }) }),
+    policy,
+    bom,
+  })
+  .superRefine((d, ctx) => {
+    const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: "custom", path, message });
+    if (d.front_end.window_v >= d.supply.positive_v) {
+      issue(
+        ["front_end", "window_v"],
+        `window can never fit inside the positive rail (got ${d.front_end.window_v} V, expected less than supply.positive_v ${d.supply.positive_v} V)`,
+      );
+    }
+    if (d.topology !== "offset-to-mid-rail" && d.front_end.window_v > d.adc.reference_v) {
+      issue(
+        ["front_end", "window_v"],
+        `window is wider than the ADC range (got ${d.front_end.window_v} V, expected at most adc.reference_v ${d.adc.reference_v} V)`,
+      );
+    }
+    if (d.logic.vil_v >= d.logic.vih_v) {
+      issue(["logic", "vil_v"], `logic-low threshold is not below logic-high (got ${d.logic.vil_v} V, expected less than logic.vih_v ${d.logic.vih_v} V)`);
+    }
+    if (d.logic.vih_v > d.logic.vdd_v) {
+      issue(["logic", "vih_v"], `logic-high threshold is above the logic supply (got ${d.logic.vih_v} V, expected at most logic.vdd_v ${d.logic.vdd_v} V)`);
+    }
+    if (d.temperature.min_c > d.temperature.max_c) {
+      issue(["temperature", "min_c"], `range is upside down (got ${d.temperature.min_c} °C, expected at most temperature.max_c ${d.temperature.max_c} °C)`);
+    }
+    if (d.supply.negative.kind === "charge-pump" && d.supply.negative.drive_v > d.supply.positive_v + 0.5) {
+      issue(
+        ["supply", "negative", "drive_v"],
+        `pump drive is above the positive rail it is made from (got ${d.supply.negative.drive_v} V, expected at most supply.positive_v ${d.supply.positive_v} V)`,
+      );
+    }
+  });
+
+export type DesignInput = z.input<typeof designSchema>;
+export type Design = z.output<typeof designSchema>;
+export type Policy = Design["policy"];
+export type NegativeSupply = Design["supply"]["negative"];
+export type Topology = Design["topology"];

@@ -1,0 +1,34 @@
+// op-amps.csv (SPEC §4). Values stay in the units their column names carry;
+// rules convert to SI where they compute.
+import { z } from "zod";
+import { optionalNumber, optionalYesNo, requiredNumber, requiredYesNo } from "./cells.ts";
+import { commonColumns } from "./common.ts";
+import { checkSupplyAndHeadroom } from "./row-checks.ts";
+
+export const opAmpColumns = {
+  ...commonColumns,
+  channels: requiredNumber({ unit: "", label: "Channels" }, { integer: true, min: 1, max: 8 }),
+  supply_min_v: requiredNumber({ unit: "V", label: "Supply min" }, { above: 0 }),
+  supply_max_v: requiredNumber({ unit: "V", label: "Supply max" }, { above: 0 }),
+  icm_neg_headroom_v: requiredNumber({ unit: "V", label: "Input headroom to V−" }),
+  icm_pos_headroom_v: requiredNumber({ unit: "V", label: "Input headroom to V+" }),
+  out_neg_headroom_v: requiredNumber({ unit: "V", label: "Output headroom to V−" }),
+  out_pos_headroom_v: requiredNumber({ unit: "V", label: "Output headroom to V+" }),
+  out_load_ohm: optionalNumber({ unit: "Ω", label: "Swing rated at load" }, { above: 0 }),
+  vos_max_mv: requiredNumber({ unit: "mV", label: "Offset max" }, { min: 0 }),
+  vos_drift_uv_per_c: optionalNumber({ unit: "µV/°C", label: "Offset drift" }, { min: 0 }),
+  ib_max_na: requiredNumber({ unit: "nA", label: "Bias current max" }, { min: 0 }),
+  gbw_mhz: requiredNumber({ unit: "MHz", label: "Gain-bandwidth" }, { above: 0 }),
+  slew_v_per_us: requiredNumber({ unit: "V/µs", label: "Slew rate" }, { above: 0 }),
+  iq_ma: requiredNumber({ unit: "mA", label: "Supply current" }, { min: 0 }),
+  noise_nv_rthz: optionalNumber({ unit: "nV/√Hz", label: "Noise at 1 kHz" }, { min: 0 }),
+  unity_gain_stable: requiredYesNo({ unit: "", label: "Unity-gain stable" }),
+  phase_reversal: optionalYesNo({ unit: "", label: "Phase reversal" }),
+};
+
+export const opAmpRow = z
+  .strictObject(opAmpColumns)
+  .superRefine(checkSupplyAndHeadroom)
+  .transform((row) => ({ kind: "op-amp" as const, ...row }));
+
+export type OpAmp = z.output<typeof opAmpRow>;

@@ -1,0 +1,109 @@
+// SI-prefixed number parsing and engineering formatting. Everything inside the
+// engine is in base SI units (V, A, Ω, F, Hz, s); text appears only at the edge.
+
+const PREFIX_EXPONENT: Readonly<Record<string, number>> = {
+  p: -12,
+  n: -9,
+  u: -6,
+  µ: -6, // U+00B5 micro sign
+  μ: -6, // U+03BC Greek mu, which some keyboards produce instead
+  m: -3,
+  k: 3,
+  K: 3,
+  M: 6,
+  G: 9,
+  T: 12,
+};
+
+const NUMBER_WITH_PREFIX = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)\s*([pnuµμmkKMGT])?$/;
+
+export type ParsedNumber = { ok: true; value: number } | { ok: false };
+
+/** Parses "0.5", "500m", "2.2k", "1.5M", "10u", "10µ", "1e-6". No units, no spaces inside. */
+export function parseSI(text: string): ParsedNumber {
+  const match = NUMBER_WITH_PREFIX.exec(text.trim());
+  if (!match) return { ok: false };
+  const mantissa = Number(match[1]);
+  const prefix = match[2];
+  const value = prefix === undefined ? mantissa : scaleByPowerOfTen(mantissa, PREFIX_EXPONENT[prefix] ?? 0);
+  return Number.isFinite(value) ? { ok: true, value } : { ok: false };
+}
+
+// Dividing by 10^n (rather than multiplying by 10^-n) keeps "1u" exactly 1e-6.
+function scaleByPowerOfTen(value: number, exponent: number): number {
+  return exponent < 0 ? value / 10 ** -exponent : value * 10 ** exponent;
+}
+
+const FORMAT_PREFIXES = [
+  { exponent: 9, symbol: "G" },
+  { exponent: 6, symbol: "M" },
+  { exponent: 3, symbol: "k" },
+  { exponent: 0, symbol: "" },
+  { exponent: -3, symbol: "m" },
+  { exponent: -6, symbol: "µ" },
+  { exponent: -9, symbol: "n" },
+  { exponent: -12, symbol: "p" },
+  { exponent: -15, symbol: "f" },
+] as const;
+
+const MINUS = "\u2212";
+
+export type FormatOptions = {
+  /** Significant digits (default 3). */
+  digits?: number;
+  /** Always show the sign ("+2.50 V"). */
+  signed?: boolean;
+  /** Use a fixed number of decimals instead of significant digits, in the chosen prefix. */
+  decimals?: number;
+  /** Use this prefix exponent instead of choosing one (e.g. 0 to keep volts in V). */
+  exponent?: number;
+};
+
+/**
+ * Formats a value in base SI units with an engineering prefix: 1.2e6 Hz → "1.20 MHz",
+ * 2.5e-7 A → "250 nA", -0.1 V → "−0.100 V". Never prints NaN, Infinity or −0.
+ */
+export function formatSI(value: number, unit: string, options: FormatOptions = {}): string {
+  if (Number.isNaN(value)) return "not rated";
+  if (!Number.isFinite(value)) return `${value < 0 ? MINUS : ""}∞ ${unit}`.trim();
+  const digits = options.digits ?? 3;
+  const magnitude = Math.abs(value);
+  let exponent = options.exponent;
+  if (exponent === undefined) {
+    const rounded = magnitude === 0 ? 0 : Number(magnitude.toPrecision(digits));
+    const raw = rounded === 0 ? 0 : Math.floor(Math.log10(rounded) / 3) * 3;
+    exponent = Math.min(9, Math.max(-15, raw));
+  }
+  const prefix = FORMAT_PREFIXES.find((p) => p.exponent === exponent) ?? FORMAT_PREFIXES[3];
+  const scaled = magnitude / 10 ** exponent;
+  let body: string;
+  if (options.decimals !== undefined) body = scaled.toFixed(options.decimals);
+  else body = toSignificant(scaled, digits);
+  const isZero = Number(body) === 0;
+  // A value that rounds to zero carries no sign: "−0.00 V" reads as a bug.
+  const sign = isZero ? "" : value < 0 ? MINUS : options.signed ? "+" : "";
+  return `${sign}${body} ${prefix.symbol}${unit}`.trim();
+}
+
+function toSignificant(value: number, digits: number): string {
+  if (value === 0) return (0).toFixed(Math.max(0, digits - 1));
+  const decimals = Math.max(0, digits - 1 - Math.floor(Math.log10(Number(value.toPrecision(digits)))));
+  return value.toFixed(decimals);
+}
+
+/** Volts with two decimals, the convention of every reason sentence ("+2.60 V", "−4.18 V"). */
+export function formatVolts(value: number, options: { signed?: boolean } = {}): string {
+  const decimals = Math.abs(value) >= 99.995 ? 0 : 2;
+  return formatSI(value, "V", { exponent: 0, decimals, signed: options.signed ?? false });
+}
+
+/**
+ * A quantity in its display unit: V/s is shown in V/µs, as datasheets do; "V" is a
+ * rail-level voltage (two decimals) and "V-prefixed" a small one ("12.6 mV").
+ */
+export function formatQuantity(value: number, unit: string, digits = 3): string {
+  if (unit === "V/s") return formatSI(value / 1e6, "V/µs", { digits });
+  if (unit === "V") return formatSI(value, "V", { exponent: 0, decimals: 2 });
+  if (unit === "V-prefixed") return formatSI(value, "V", { digits });
+  return formatSI(value, unit, { digits });
+}

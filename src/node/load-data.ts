@@ -1,0 +1,84 @@
+// Reads a data folder from disk (Node only): the three catalogue files and
+// data/designs/*.json, with every problem collected before anything is used.
+import { readdirSync, readFileSync, statSync } from "node:fs";
+import { basename, join, relative } from "node:path";
+import { buildCatalogue, KINDS, parseCatalogueText, type Catalogue, type ParsedFile } from "../core/catalogue.ts";
+import { checkDesignSet, parseDesignText, type DesignFile } from "../core/designs.ts";
+import type { Problem } from "../core/problems.ts";
+import { decodeUtf8 } from "../core/text-decoding.ts";
+
+export type DataSet = { catalogue: Catalogue; designs: DesignFile[]; problems: Problem[] };
+
+const MAX_FILE_BYTES = 20 * 1024 * 1024;
+
+/** Names files relative to the folder the user ran from, as an editor would show them. */
+export function displayPath(path: string): string {
+  const rel = relative(process.cwd(), path);
+  return rel.startsWith("..") || rel === "" ? path : rel;
+}
+
+export function readText(path: string): { text?: string; problem?: Problem } {
+  const file = displayPath(path);
+  let bytes: Uint8Array;
+  try {
+    if (statSync(path).size > MAX_FILE_BYTES) return { problem: { file, message: `file is larger than ${MAX_FILE_BYTES / 1024 / 1024} MB (expected a catalogue or design file)` } };
+    bytes = readFileSync(path);
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    return { problem: { file, message: code === "ENOENT" ? "file not found (expected it to exist)" : `cannot be read (${code ?? "unknown error"})` } };
+  }
+  const decoded = decodeUtf8(bytes, file);
+  return decoded.ok ? { text: decoded.text } : { problem: decoded.problem };
+}
+
+export function loadCatalogue(dir: string): { catalogue: Catalogue; problems: Problem[] } {
+  const files: ParsedFile[] = [];
+  const problems: Problem[] = [];
+  for (const spec of KINDS) {
+    const path = join(dir, spec.file);
+    const { text, problem } = readText(path);
+    if (problem) {
+      problems.push(problem);
+      continue;
+    }
+    files.push(parseCatalogueText(spec.kind, displayPath(path), text ?? ""));
+  }
+  const built = buildCatalogue(files);
+  return { catalogue: built.value, problems: [...problems, ...built.problems] };
+}
+
+export function loadDesignFiles(paths: string[]): { designs: DesignFile[]; problems: Problem[] } {
+  const designs: DesignFile[] = [];
+  for (const path of paths) {
+    const file = displayPath(path);
+    const { text, problem } = readText(path);
+    designs.push(problem ? { file, problems: [problem] } : parseDesignText(file, text ?? ""));
+  }
+  const problems = [...designs.flatMap((d) => d.problems), ...checkDesignSet(designs)];
+  return { designs, problems };
+}
+
+export function designPathsIn(dir: string): string[] {
+  const folder = join(dir, "designs");
+  try {
+    return readdirSync(folder)
+      .filter((f) => f.endsWith(".json"))
+      .sort()
+      .map((f) => join(folder, f));
+  } catch {
+    return [];
+  }
+}
+
+/** The whole data folder; design files must be named after their id. */
+export function loadDataSet(dir: string): DataSet {
+  const { catalogue, problems: catalogueProblems } = loadCatalogue(dir);
+  const { designs, problems: designProblems } = loadDesignFiles(designPathsIn(dir));
+  const nameProblems: Problem[] = [];
+  for (const d of designs) {
+    if (d.design && basename(d.file, ".json") !== d.design.id) {
+      nameProblems.push({ file: d.file, path: "id", message: `id does not match the file name (got '${d.design.id}', expected '${basename(d.file, ".json")}')` });
+    }
+  }
+  return { catalogue, designs, problems: [...catalogueProblems, ...designProblems, ...nameProblems] };
+}
