@@ -1,0 +1,53 @@
+// Command-line parsing: positional words and --flags, with clear usage errors.
+export type ParsedArgs = { command?: string; positional: string[]; flags: Map<string, string | true> };
+
+export class UsageError extends Error {}
+
+const VALUE_FLAGS = new Set(["data", "format", "role", "topology"]);
+const BOOLEAN_FLAGS = new Set(["help", "no-color"]);
+
+export function parseArgs(argv: readonly string[]): ParsedArgs {
+  const positional: string[] = [];
+  const flags = new Map<string, string | true>();
+  for (let i = 0; i < argv.length; i++) {
+    const word = argv[i] ?? "";
+    if (word === "-h") {
+      flags.set("help", true);
+      continue;
+    }
+    if (!word.startsWith("--")) {
+      positional.push(word);
+      continue;
+    }
+    const [name = "", inline] = word.slice(2).split(/=(.*)/s, 2);
+    if (BOOLEAN_FLAGS.has(name)) flags.set(name, true);
+    else if (VALUE_FLAGS.has(name)) {
+      const value = inline ?? argv[++i];
+      if (value === undefined || value === "") throw new UsageError(`option --${name} needs a value`);
+      flags.set(name, value);
+    } else throw new UsageError(`unknown option --${name}`);
+  }
+  const [command, ...rest] = positional;
+  return { ...(command !== undefined ? { command } : {}), positional: rest, flags };
+}
+
+export function flag(args: ParsedArgs, name: string): string | undefined {
+  const v = args.flags.get(name);
+  return typeof v === "string" ? v : undefined;
+}
+
+export const USAGE = `railsieve — shortlist op amps, comparators and diodes for a bipolar-to-ADC front end
+
+Usage:
+  railsieve validate [--data DIR]
+  railsieve check DESIGN.json… [--data DIR] [--format text|json|csv] [--topology NAME]
+  railsieve explain PART-ID DESIGN.json [--role ROLE] [--data DIR]
+
+  --data DIR       catalogue folder (op-amps.csv, comparators.csv, diodes.csv, designs/); default ./data
+  --format F       output of check: text (default), json or csv
+  --topology NAME  evaluate as rectify-and-sign, offset-to-mid-rail, or all (side by side)
+  --role ROLE      explain one role only
+
+Exit status: 0 when everything asked holds, 1 when a BOM part fails or a role has no fit,
+2 on invalid input.
+`;

@@ -1,0 +1,38 @@
+// `railsieve check DESIGN.json…`: evaluate, print, and exit 0 / 1 / 2.
+import { evaluateDesign } from "../core/engine/evaluate.ts";
+import { designHolds, type DesignResult } from "../core/engine/result.ts";
+import { InputError, type Problem } from "../core/problems.ts";
+import { flag, UsageError, type ParsedArgs } from "./args.ts";
+import type { Io } from "./io.ts";
+import { loadForCheck } from "./load.ts";
+import { renderCsv } from "./render-csv.ts";
+import { renderJson } from "./render-json.ts";
+import { renderDesignText } from "./render-text.ts";
+
+const FORMATS = ["text", "json", "csv"] as const;
+
+export function evaluateFiles(args: ParsedArgs, data: string): DesignResult[] {
+  if (args.positional.length === 0) throw new UsageError("check needs at least one design file");
+  const loaded = loadForCheck(data, args.positional);
+  if ("problems" in loaded) throw new InputError(loaded.problems);
+  const problems: Problem[] = [];
+  const results: DesignResult[] = [];
+  for (const file of loaded.designs) {
+    if (!file.design) continue;
+    const evaluation = evaluateDesign(file.design, loaded.catalogue);
+    if (evaluation.ok) results.push(evaluation.result);
+    else problems.push(...evaluation.problems.map((p) => ({ file: file.file, path: p.path, message: p.message })));
+  }
+  if (problems.length > 0) throw new InputError(problems);
+  return results;
+}
+
+export function runCheck(args: ParsedArgs, data: string, io: Io): number {
+  const format = flag(args, "format") ?? "text";
+  if (!(FORMATS as readonly string[]).includes(format)) throw new UsageError(`unknown format '${format}' (expected text, json or csv)`);
+  const results = evaluateFiles(args, data);
+  if (format === "json") io.out(renderJson(results));
+  else if (format === "csv") io.out(renderCsv(results));
+  else io.out(results.map((r) => renderDesignText(r, io)).join("\n"));
+  return results.every(designHolds) ? 0 : 1;
+}

@@ -1,0 +1,21 @@
+// CSV report: one row per design, role, part and rule.
+import { csvLine } from "../core/csv-escape.ts";
+import type { DesignResult } from "../core/engine/result.ts";
+
+const HEADER = ["design", "topology", "role", "part", "part_verdict", "fits", "bom", "rule", "verdict", "needed", "available", "margin", "unit", "reason"];
+
+export function renderCsv(results: DesignResult[]): string {
+  const lines = [csvLine(HEADER)];
+  for (const r of results) {
+    for (const role of r.roles) {
+      for (const [fits, list] of [["yes", role.fits], ["no", role.rejected]] as const) {
+        for (const p of list) {
+          for (const f of p.findings) {
+            lines.push(csvLine([r.design.id, r.topology, role.role, p.part.id, p.verdict, fits, p.bom ? "yes" : "no", f.rule, f.verdict, f.needed, f.available, f.margin, f.unit, f.reason]));
+          }
+        }
+      }
+    }
+  }
+  return `${lines.join("\r\n")}\r\n`;
+}

@@ -1,0 +1,71 @@
+// Human-readable report of one evaluated design, readable at 80 columns.
+import type { PartResult } from "../core/engine/evaluate-part.ts";
+import type { DesignResult, RoleResult } from "../core/engine/result.ts";
+import type { Verdict } from "../core/engine/types.ts";
+import { formatSI, formatVolts } from "../core/units.ts";
+import { paint, type Io } from "./io.ts";
+import { shortfalls } from "./summary.ts";
+import { wrap } from "./wrap.ts";
+
+const WIDTH = 80;
+export const VERDICT_MARK: Record<Verdict, string> = { pass: "+", marginal: "~", unrated: "?", fail: "x" };
+
+export function renderDesignText(result: DesignResult, io: Pick<Io, "color">): string {
+  const d = result.design;
+  const x = result.derived;
+  const out: string[] = [];
+  out.push(paint(io, "bold", wrap(`${d.id} — ${d.title}`, WIDTH, "  ", "")));
+  out.push(`  topology   ${result.topology}`);
+  out.push(wrap(`V+ ${formatVolts(x.rails.positive_v)}, V− ${formatVolts(x.rails.negative_v)}${negativeNote(result)}`, WIDTH, "             ", "  rails      "));
+  out.push(
+    x.divider
+      ? `  divider    ${formatSI(x.divider.top_ohm, "Ω")} over ${formatSI(x.divider.bottom_ohm, "Ω")} (${d.front_end.series}), k = ${x.ratio.toFixed(4)}`
+      : "  divider    none (the signal already fits the window), k = 1",
+  );
+  out.push(`  window     ±${formatVolts(x.window_v)}; source seen by the buffer ${formatSI(x.thevenin_ohm, "Ω")}`);
+  out.push(`  ADC step   ${formatSI(x.adc_step_at_input_v, "V")} at the input (${d.adc.bits} bits, ${formatVolts(d.adc.reference_v)} reference)`);
+  for (const note of result.notes) out.push(wrap(`note: ${note}`, WIDTH, "    ", "  "));
+  if (d.signal.peak_v > 30) {
+    out.push(
+      wrap(
+        "caution: voltages above extra-low-voltage limits need isolation and protection designed to local codes and licensed practice, which this guide does not assess.",
+        WIDTH,
+        "    ",
+        "  ",
+      ),
+    );
+  }
+  for (const role of result.roles) out.push("", ...renderRole(role, io));
+  const problems = shortfalls(result);
+  out.push("");
+  if (problems.length === 0) out.push(paint(io, "pass", "  result: every role has a fit and every BOM part fits"));
+  else for (const p of problems) out.push(paint(io, "fail", wrap(`result: ${p}`, WIDTH, "    ", "  ")));
+  return `${out.join("\n")}\n`;
+}
+
+function negativeNote(result: DesignResult): string {
+  const n = result.derived.negative;
+  if (n.kind === "ground") return " (no negative supply)";
+  if (n.kind === "fixed") return " (fixed)";
+  return ` (charge pump, worst case: no load ${formatVolts(n.no_load_v)}, droop ${formatVolts(n.droop_v)}, ripple ${formatSI(n.ripple_v, "V")} p-p; diode ${n.diode.id} at ${formatVolts(n.diode.vf_v)})`;
+}
+
+function renderRole(role: RoleResult, io: Pick<Io, "color">): string[] {
+  const lines: string[] = [paint(io, "bold", `  ${role.role}`) + ` — ${role.label}`];
+  lines.push(`    fits (${role.fits.length}):${role.fits.length === 0 ? " none" : ""}`);
+  role.fits.forEach((p, i) => lines.push(...renderPart(p, `${i + 1}.`, io)));
+  lines.push(`    rejected (${role.rejected.length}):${role.rejected.length === 0 ? " none" : ""}`);
+  for (const p of role.rejected) lines.push(...renderPart(p, "-", io));
+  return lines;
+}
+
+function renderPart(p: PartResult, bullet: string, io: Pick<Io, "color">): string[] {
+  const marks = [p.part.status, p.part.cost_band !== undefined ? `cost ${p.part.cost_band}` : "cost ?", ...(p.bom ? ["BOM"] : [])];
+  const verdict = paint(io, p.verdict, `${VERDICT_MARK[p.verdict]} ${p.verdict}`);
+  const lines = [`    ${bullet} ${verdict}  ${p.part.id}  [${marks.join(", ")}]`];
+  for (const f of p.findings) {
+    if (f.verdict === "pass") continue;
+    lines.push(wrap(`${VERDICT_MARK[f.verdict]} ${f.rule}: ${f.reason}`, WIDTH, "          ", "        "));
+  }
+  return lines;
+}
