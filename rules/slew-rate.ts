@@ -7,7 +7,7 @@ import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 export const slewRate: Rule = {
   id: "slew-rate",
   checks: "The op amp slews fast enough to follow a full-scale sine at the highest signal frequency.",
-  formula: "needed = 2π · f · W (rectifier: 2π · f · (W + Vf)); margin = slew − needed",
+  formula: "needed = 2π · f · W (rectifier: 2π · f · (W + Vf); level shifter: 2π · f · a · peak); margin = slew − needed",
   source: "Full-power bandwidth f = SR / (2π·Vp) (worked example, NPTEL course 117107094, lecture 7).",
   policy: "marginal_fraction",
   kinds: ["op-amp"],

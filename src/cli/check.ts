@@ -2,6 +2,7 @@
 import { evaluateDesign } from "../core/engine/evaluate.ts";
 import { designHolds, type DesignResult } from "../core/engine/result.ts";
 import { InputError, type Problem } from "../core/problems.ts";
+import { TOPOLOGIES, type Topology } from "../core/schemas/design.ts";
 import { flag, UsageError, type ParsedArgs } from "./args.ts";
 import type { Io } from "./io.ts";
 import { loadForCheck } from "./load.ts";
@@ -13,13 +14,18 @@ const FORMATS = ["text", "json", "csv"] as const;
 
 export function evaluateFiles(args: ParsedArgs, data: string): DesignResult[] {
   if (args.positional.length === 0) throw new UsageError("check needs at least one design file");
+  const topologyFlag = flag(args, "topology");
+  if (topologyFlag !== undefined && !(TOPOLOGIES as readonly string[]).includes(topologyFlag)) {
+    throw new UsageError(`unknown topology '${topologyFlag}' (expected ${TOPOLOGIES.join(", ")})`);
+  }
+  const topology = topologyFlag as Topology | undefined;
   const loaded = loadForCheck(data, args.positional);
   if ("problems" in loaded) throw new InputError(loaded.problems);
   const problems: Problem[] = [];
   const results: DesignResult[] = [];
   for (const file of loaded.designs) {
     if (!file.design) continue;
-    const evaluation = evaluateDesign(file.design, loaded.catalogue);
+    const evaluation = evaluateDesign(file.design, loaded.catalogue, topology);
     if (evaluation.ok) results.push(evaluation.result);
     else problems.push(...evaluation.problems.map((p) => ({ file: file.file, path: p.path, message: p.message })));
   }
@@ -34,5 +40,5 @@ export function runCheck(args: ParsedArgs, data: string, io: Io): number {
   if (format === "json") io.out(renderJson(results));
   else if (format === "csv") io.out(renderCsv(results));
   else io.out(results.map((r) => renderDesignText(r, io)).join("\n"));
-  return results.every(designHolds) ? 0 : 1;
+  return results.every((r) => designHolds(r)) ? 0 : 1;
 }

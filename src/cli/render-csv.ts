@@ -16,6 +16,13 @@ export function renderCsv(results: DesignResult[]): string {
         }
       }
     }
+    // Budget rows: the term's error in `available`, the requirement in `needed`.
+    const b = r.budget;
+    for (const t of b.terms) {
+      lines.push(csvLine([r.design.id, r.topology, "budget", "", b.verdict, "", "", t.name, "", b.required_v, t.v, null, "V", t.label]));
+    }
+    lines.push(csvLine([r.design.id, r.topology, "budget", "", b.verdict, "", "", "worst-case", b.verdict, b.required_v, b.worst_case_v, b.required_v - b.worst_case_v, "V", "sum of the terms' magnitudes"]));
+    lines.push(csvLine([r.design.id, r.topology, "budget", "", b.verdict, "", "", "rss", b.verdict, b.required_v, b.rss_v, b.required_v - b.rss_v, "V", "root-sum-square of the terms (JCGM 100:2008)"]));
   }
   return `${lines.join("\r\n")}\r\n`;
 }

@@ -20,7 +20,7 @@ function partJson(p: PartResult) {
   };
 }
 
-export function designJson(result: DesignResult) {
+export function designJson(result: DesignResult): Record<string, unknown> {
   const x = result.derived;
   return {
     id: result.design.id,
@@ -37,7 +37,36 @@ export function designJson(result: DesignResult) {
       fits: r.fits.map(partJson),
       rejected: r.rejected.map(partJson),
     })),
+    budget: budgetJson(result),
+    conversion: result.conversion,
+    ...(result.comparison ? { comparison: comparisonJson(result) } : {}),
     notes: result.notes,
+  };
+}
+
+function budgetJson(result: DesignResult) {
+  const b = result.budget;
+  return {
+    terms: b.terms.map((t) => ({ name: t.name, label: t.label, v: t.v, calibrates_out: t.calibrates_out })),
+    worst_case_v: b.worst_case_v,
+    rss_v: b.rss_v,
+    required_v: b.required_v,
+    verdict: b.verdict,
+    dominant: b.dominant,
+    calibrated: b.calibrated,
+    effective_bits: b.effective_bits,
+    missing: b.missing,
+  };
+}
+
+function comparisonJson(result: DesignResult) {
+  const c = result.comparison;
+  if (!c) return undefined;
+  return {
+    recommended: c.recommended,
+    reason: c.reason,
+    rows: c.rows,
+    topologies: c.results.filter((r) => r.topology !== result.topology).map((r) => designJson({ ...r, comparison: undefined })),
   };
 }
 

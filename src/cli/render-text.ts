@@ -11,6 +11,32 @@ const WIDTH = 80;
 export const VERDICT_MARK: Record<Verdict, string> = { pass: "+", marginal: "~", unrated: "?", fail: "x" };
 
 export function renderDesignText(result: DesignResult, io: Pick<Io, "color">): string {
+  const c = result.comparison;
+  if (!c) return renderSingle(result, io);
+  return [renderComparison(result, io), ...c.results.map((r) => renderSingle(r, io))].join("\n");
+}
+
+function renderComparison(result: DesignResult, io: Pick<Io, "color">): string {
+  const c = result.comparison;
+  if (!c) return "";
+  const out = [paint(io, "bold", wrap(`${result.design.id} — both topologies compared`, WIDTH, "  ", ""))];
+  for (const row of c.rows) {
+    out.push(`  ${row.topology}${row.topology === c.recommended ? "  (recommended)" : ""}`);
+    out.push(wrap(`roles: ${row.roles.map((r) => `${r.role} ${r.fits} fit${r.fits === 1 ? "" : "s"}${r.chosen ? ` (${r.chosen})` : ""}`).join("; ")}`, WIDTH, "      ", "    "));
+    out.push(
+      wrap(
+        `budget ${row.budget_verdict} (worst case ${formatSI(row.budget_worst_case_v, "V")}, largest term ${row.dominant ?? "none"}); ${row.effective_bits.toFixed(1)} effective bits; ${row.part_count} parts, cost bands ${row.cost_total}`,
+        WIDTH,
+        "      ",
+        "    ",
+      ),
+    );
+  }
+  out.push(wrap(`recommendation: ${c.reason}`, WIDTH, "    ", "  "));
+  return `${out.join("\n")}\n`;
+}
+
+function renderSingle(result: DesignResult, io: Pick<Io, "color">): string {
   const d = result.design;
   const x = result.derived;
   const out: string[] = [];
@@ -35,12 +61,41 @@ export function renderDesignText(result: DesignResult, io: Pick<Io, "color">): s
       ),
     );
   }
+  if (x.level_shift) {
+    const n = x.level_shift;
+    out.push(
+      wrap(
+        `R1 ${formatSI(n.r1_ohm, "Ω")} from the signal, R2 ${formatSI(n.r2_ohm, "Ω")} from the reference, ${n.r3_ohm === null ? "no R3" : `R3 ${formatSI(n.r3_ohm, "Ω")} to ground`}: out = ${n.gain.toFixed(4)} × in + ${formatVolts(n.offset_v)}, spanning ${formatVolts(n.output_low_v)} … ${formatVolts(n.output_high_v)}`,
+        WIDTH,
+        "             ",
+        "  network    ",
+      ),
+    );
+  }
+  out.push(...renderBudget(result));
   for (const role of result.roles) out.push("", ...renderRole(role, io));
   const problems = shortfalls(result);
   out.push("");
   if (problems.length === 0) out.push(paint(io, "pass", "  result: every role has a fit and every BOM part fits"));
   else for (const p of problems) out.push(paint(io, "fail", wrap(`result: ${p}`, WIDTH, "    ", "  ")));
   return `${out.join("\n")}\n`;
+}
+
+function renderBudget(result: DesignResult): string[] {
+  const b = result.budget;
+  const out = ["", `  accuracy budget (input-referred; required ${formatSI(b.required_v, "V")})`];
+  for (const t of b.terms) {
+    const mark = t.name === b.dominant ? " <- largest" : "";
+    out.push(`    ${t.label.padEnd(58).slice(0, 58)} ${formatSI(t.v, "V").padStart(9)}${mark}`);
+  }
+  out.push(`    ${"worst case (sum)".padEnd(58)} ${formatSI(b.worst_case_v, "V").padStart(9)}`);
+  out.push(`    ${"root-sum-square (JCGM 100:2008)".padEnd(58)} ${formatSI(b.rss_v, "V").padStart(9)}`);
+  out.push(`    verdict: ${b.verdict}; after a one-point gain calibration: ${b.calibrated.verdict} (worst case ${formatSI(b.calibrated.worst_case_v, "V")})`);
+  if (b.missing.length > 0) out.push(`    incomplete: no part for ${b.missing.join(", ")}, so its errors are unknown`);
+  out.push(`    effective ADC bits used: ${b.effective_bits.toFixed(2)}`);
+  const c = result.conversion;
+  out.push("", "  firmware conversion", wrap(c.formula, WIDTH, "      ", "    "), wrap(c.sign, WIDTH, "      ", "    "));
+  return out;
 }
 
 function negativeNote(result: DesignResult): string {

@@ -74,6 +74,8 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
   const [header, ...rows] = parsed.data;
   if (!header) return { value: [], lines, problems: [{ file, message: "file has no header row" }] };
   const columns = header.map((h) => h.trim());
+  // The header is line 1 unless blank lines come before it.
+  const headerLine = rowLines[0] ?? 1;
 
   if (columns.length === 1 && (columns[0] ?? "").includes(";")) {
     return {
@@ -82,7 +84,7 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
       problems: [
         {
           file,
-          line: 1,
+          line: headerLine,
           message: `header looks semicolon-separated (got '${shorten(columns[0] ?? "")}', expected comma-separated columns; export the sheet as CSV with commas)`,
         },
       ],
@@ -93,7 +95,7 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
   columns.forEach((c, i) => {
     if (known.includes(c)) {
       if (columns.indexOf(c) !== i) {
-        problems.push({ file, line: 1, column: c, message: "column appears twice (expected each column once)" });
+        problems.push({ file, line: headerLine, column: c, message: "column appears twice (expected each column once)" });
         headerOk = false;
       }
       return;
@@ -101,7 +103,7 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
     const guess = closest(c, known);
     problems.push({
       file,
-      line: 1,
+      line: headerLine,
       column: c,
       message: `unknown column (got '${shorten(c)}', expected ${guess ? `'${guess}'` : `one of ${known.join(", ")}`})`,
     });
@@ -109,7 +111,7 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
   });
   for (const required of requiredColumns(spec.columns)) {
     if (!columns.includes(required)) {
-      problems.push({ file, line: 1, column: required, message: "required column is missing (expected it in the header)" });
+      problems.push({ file, line: headerLine, column: required, message: "required column is missing (expected it in the header)" });
       headerOk = false;
     }
   }

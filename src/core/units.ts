@@ -15,7 +15,7 @@ const PREFIX_EXPONENT: Readonly<Record<string, number>> = {
   T: 12,
 };
 
-const NUMBER_WITH_PREFIX = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)\s*([pnuµμmkKMGT])?$/;
+const NUMBER_WITH_PREFIX = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)([pnuµμmkKMGT])?$/;
 
 export type ParsedNumber = { ok: true; value: number } | { ok: false };
 
@@ -61,7 +61,7 @@ export type FormatOptions = {
 
 /**
  * Formats a value in base SI units with an engineering prefix: 1.2e6 Hz → "1.20 MHz",
- * 2.5e-7 A → "250 nA", -0.1 V → "−0.100 V". Never prints NaN, Infinity or −0.
+ * 2.5e-7 A → "250 nA", -0.1 V → "−100 mV". Never prints NaN, Infinity or −0.
  */
 export function formatSI(value: number, unit: string, options: FormatOptions = {}): string {
   if (Number.isNaN(value)) return "not rated";
@@ -88,7 +88,8 @@ export function formatSI(value: number, unit: string, options: FormatOptions = {
 function toSignificant(value: number, digits: number): string {
   if (value === 0) return (0).toFixed(Math.max(0, digits - 1));
   const decimals = Math.max(0, digits - 1 - Math.floor(Math.log10(Number(value.toPrecision(digits)))));
-  return value.toFixed(decimals);
+  // toFixed takes at most 100 decimals; anything that small prints as zero anyway.
+  return value.toFixed(Math.min(decimals, 20));
 }
 
 /** Volts with two decimals, the convention of every reason sentence ("+2.60 V", "−4.18 V"). */
@@ -102,7 +103,8 @@ export function formatVolts(value: number, options: { signed?: boolean } = {}): 
  * rail-level voltage (two decimals) and "V-prefixed" a small one ("12.6 mV").
  */
 export function formatQuantity(value: number, unit: string, digits = 3): string {
-  if (unit === "V/s") return formatSI(value / 1e6, "V/µs", { digits });
+  // Kept in V/µs even when small ("0.500 V/µs", not "500 mV/µs"), as datasheets print it.
+  if (unit === "V/s") return formatSI(value / 1e6, "V/µs", { digits, exponent: 0 });
   if (unit === "V") return formatSI(value, "V", { exponent: 0, decimals: 2 });
   if (unit === "V-prefixed") return formatSI(value, "V", { digits });
   return formatSI(value, unit, { digits });

@@ -2,9 +2,11 @@
 import type { PartKind } from "../catalogue.ts";
 import type { Divider } from "../math/divider.ts";
 import type { PumpRail } from "../math/charge-pump.ts";
+import type { LevelShiftNetwork } from "../math/level-shift.ts";
 import type { Design, Role } from "../schemas/design.ts";
 import type { PartResult } from "./evaluate-part.ts";
 import type { Rails, Stage } from "./types.ts";
+import type { Budget, Conversion } from "./budget.ts";
 
 export type RoleResult = {
   role: Role;
@@ -46,6 +48,8 @@ export type Derived = {
   adc_step_at_input_v: number;
   rectifier_diode?: DiodeUse;
   clamp_diode?: DiodeUse;
+  /** offset-to-mid-rail only: the Millman network and the output span it gives. */
+  level_shift?: LevelShiftNetwork & { output_low_v: number; output_high_v: number };
 };
 
 export type DesignResult = {
@@ -55,6 +59,30 @@ export type DesignResult = {
   roles: RoleResult[];
   /** Things the reader must know about how the numbers were obtained. */
   notes: string[];
+  budget: Budget;
+  conversion: Conversion;
+  /** Present when the design asked for topology "all": both topologies side by side. */
+  comparison?: Comparison;
+};
+
+export type ComparisonRow = {
+  topology: Exclude<Design["topology"], "all">;
+  holds: boolean;
+  roles: { role: Role; fits: number; chosen?: string }[];
+  effective_bits: number;
+  budget_verdict: Budget["verdict"];
+  budget_worst_case_v: number;
+  dominant: string | null;
+  part_count: number;
+  cost_total: number;
+};
+
+export type Comparison = {
+  rows: ComparisonRow[];
+  recommended: Exclude<Design["topology"], "all">;
+  reason: string;
+  /** Every topology's full result, in row order. */
+  results: DesignResult[];
 };
 
 export type DesignProblem = { path: string; message: string };

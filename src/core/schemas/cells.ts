@@ -38,13 +38,13 @@ function requireText(raw: string, ctx: Issues, expected: string): boolean {
 type NumberOptions = { min?: number; above?: number; integer?: boolean; max?: number };
 
 function describeRange(o: NumberOptions): string {
-  const parts: string[] = [];
-  if (o.integer) parts.push("a whole number");
-  else parts.push(NUMBER_EXAMPLES);
-  if (o.above !== undefined) parts.push(`greater than ${o.above}`);
-  if (o.min !== undefined) parts.push(`of at least ${o.min}`);
-  if (o.max !== undefined) parts.push(`of at most ${o.max}`);
-  return parts.join(" ");
+  const bounds: string[] = [];
+  if (o.above !== undefined) bounds.push(`greater than ${o.above}`);
+  if (o.min !== undefined) bounds.push(`at least ${o.min}`);
+  if (o.max !== undefined) bounds.push(`at most ${o.max}`);
+  // The comma keeps the bound from reading as part of the example ("2.2k greater than 0").
+  const what = o.integer ? "a whole number" : NUMBER_EXAMPLES;
+  return bounds.length === 0 ? what : `${what}, ${bounds.join(" and ")}`;
 }
 
 function toNumber(raw: string, ctx: Issues, o: NumberOptions): number | typeof z.NEVER {
@@ -61,7 +61,12 @@ function toNumber(raw: string, ctx: Issues, o: NumberOptions): number | typeof z
     (o.above !== undefined && v <= o.above) ||
     (o.max !== undefined && v > o.max);
   if (wrong) {
-    const what = o.min === 0 && v < 0 ? "must not be negative" : "out of range";
+    const what =
+      (o.min === 0 || o.above === 0) && v < 0
+        ? "must not be negative"
+        : o.integer && !Number.isInteger(v)
+          ? "not a whole number"
+          : "out of range";
     ctx.addIssue({ code: "custom", message: cellMessage(what, raw, expected) });
     return z.NEVER;
   }
@@ -174,7 +179,7 @@ export function idCell(meta: ColumnMeta) {
   return z
     .string()
     .transform((raw, ctx) => {
-      const expected = "lower-case letters, digits and '-', starting with a letter or digit";
+      const expected = "lower-case letters, digits and '-', starting with a letter or digit, at most 80 characters";
       if (!requireText(raw, ctx, expected)) return z.NEVER;
       const v = raw.trim();
       if (ID_PATTERN.test(v) && v.length <= 80) return v;

@@ -8,12 +8,13 @@ import { parseSI } from "../units.ts";
 type Range = { above?: number; min?: number; max?: number; below?: number; integer?: boolean };
 
 function describe(r: Range): string {
-  const parts = [r.integer ? "a whole number" : "a number (or a string such as \"100k\")"];
-  if (r.above !== undefined) parts.push(`greater than ${r.above}`);
-  if (r.min !== undefined) parts.push(`of at least ${r.min}`);
-  if (r.below !== undefined) parts.push(`less than ${r.below}`);
-  if (r.max !== undefined) parts.push(`of at most ${r.max}`);
-  return parts.join(" ");
+  const bounds: string[] = [];
+  if (r.above !== undefined) bounds.push(`greater than ${r.above}`);
+  if (r.min !== undefined) bounds.push(`at least ${r.min}`);
+  if (r.below !== undefined) bounds.push(`less than ${r.below}`);
+  if (r.max !== undefined) bounds.push(`at most ${r.max}`);
+  const what = r.integer ? "a whole number" : "a number (or a string such as \"100k\")";
+  return bounds.length === 0 ? what : `${what}, ${bounds.join(" and ")}`;
 }
 
 export function shown(value: unknown): string {
@@ -143,7 +144,7 @@ const designId = z.unknown().transform((value, ctx): string => {
   if (typeof value === "string" && ID_PATTERN.test(value) && value.length <= 80) return value;
   ctx.addIssue({
     code: "custom",
-    message: `not a valid id (got ${shown(value)}, expected lower-case letters, digits and '-', starting with a letter or digit)`,
+    message: `not a valid id (got ${shown(value)}, expected lower-case letters, digits and '-', starting with a letter or digit, at most 80 characters)`,
   });
   return z.NEVER;
 });

@@ -8,10 +8,12 @@ import { forwardVoltage } from "../../math/diode.ts";
 import type { Design, Role } from "../../schemas/design.ts";
 import type { Diode } from "../../schemas/diode.ts";
 import { formatSI, formatVolts } from "../../units.ts";
-import { RULES_BY_ID, type RuleId } from "../../../../rules/index.ts";
-import { evaluatePart, rankRole, type PartResult } from "../evaluate-part.ts";
+import type { RuleId } from "../../../../rules/index.ts";
+import { buildBudget, type BudgetTerm, type Conversion } from "../budget.ts";
+import { ratioDeviation } from "../../math/divider.ts";
 import type { Derived, DesignResult, DiodeUse, Evaluation, RoleResult } from "../result.ts";
-import type { DiodeStage, OpAmpStage, Rails, Rule, SignStage, Stage } from "../types.ts";
+import { runRole as runRoleWith, type RoleSpec } from "../run-role.ts";
+import type { DiodeStage, OpAmpStage, Rails, SignStage, Stage } from "../types.ts";
 import { frontEnd } from "./front-end.ts";
 
 const OP_AMP_RULES: RuleId[] = [
@@ -25,7 +27,7 @@ const OP_AMP_RULES: RuleId[] = [
   "slew-rate",
 ];
 
-export const RECTIFY_AND_SIGN_ROLES: Record<string, { kind: Part["kind"]; kinds: Part["kind"][]; label: string; rules: RuleId[] }> = {
+export const RECTIFY_AND_SIGN_ROLES: Partial<Record<Role, RoleSpec>> = {
   buffer: { kind: "op-amp", kinds: ["op-amp"], label: "follower after the divider (in = out = ±W)", rules: OP_AMP_RULES },
   rectifier: {
     kind: "op-amp",
@@ -77,23 +79,7 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
   const runRole = (role: Role, stage: Stage, rails: Rails, candidates: readonly Part[]): RoleResult => {
     const spec = RECTIFY_AND_SIGN_ROLES[role];
     if (!spec) throw new Error(`role ${role} is not part of rectify-and-sign`);
-    const rules = spec.rules.map((id) => RULES_BY_ID.get(id)).filter((r): r is Rule => r !== undefined);
-    const bom = design.bom[role];
-    const ctx = { role, stage, design, policy, rails };
-    const results: PartResult[] = candidates.map((p) => evaluatePart(rules, ctx, p, p.id === bom));
-    const ranked = rankRole(results);
-    const chosen = bom ?? ranked.fits[0]?.part.id;
-    const result: RoleResult = {
-      role,
-      kind: spec.kind,
-      kinds: spec.kinds,
-      label: spec.label,
-      rules: spec.rules,
-      stage,
-      ...ranked,
-      ...(bom !== undefined ? { bom } : {}),
-      ...(chosen !== undefined ? { chosen } : {}),
-    };
+    const result = runRoleWith(design, role, spec, stage, rails, candidates);
     roles.push(result);
     return result;
   };
@@ -255,6 +241,44 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
     rectifier_diode: rectDiode,
     ...(clampUse ? { clamp_diode: clampUse } : {}),
   };
-  const result: DesignResult = { design, topology: "rectify-and-sign", derived, roles, notes };
+  const budget = buildBudget(design, fixedTerms(design, k), ROLE_TERMS, roles, design.adc.bits + Math.log2(W / design.adc.reference_v) + 1);
+  const result: DesignResult = { design, topology: "rectify-and-sign", derived, roles, notes, budget, conversion: conversion(design, k) };
   return { ok: true, result };
+}
+
+const ROLE_TERMS = [
+  { name: "buffer-offset", label: "buffer offset and bias current", role: "buffer", rule: "offset" },
+  { name: "rectifier-offset", label: "rectifier offset and bias current", role: "rectifier", rule: "offset" },
+  { name: "buffer-bandwidth", label: "buffer gain error at f max", role: "buffer", rule: "bandwidth" },
+  { name: "rectifier-bandwidth", label: "rectifier gain error at f max", role: "rectifier", rule: "bandwidth" },
+  { name: "sign-dead-band", label: "comparator dead band", role: "sign", rule: "sign-dead-band" },
+  { name: "rectifier-diode-leakage", label: "rectifier diode leakage", role: "rectifier-diode", rule: "leakage" },
+];
+
+/** Terms that do not depend on the parts: the ADC, its reference, the divider. */
+export function fixedTerms(design: Design, k: number): BudgetTerm[] {
+  const { bits, reference_v, reference_tolerance } = design.adc;
+  const peak = design.signal.peak_v;
+  const terms: BudgetTerm[] = [
+    { name: "quantization", label: "quantization, half a step", v: (0.5 * (reference_v / 2 ** bits)) / k, calibrates_out: false },
+    { name: "reference", label: "ADC reference tolerance", v: reference_tolerance * peak, calibrates_out: true },
+  ];
+  if (k < 1) {
+    const dev = ratioDeviation(k, design.front_end.resistor_tolerance);
+    terms.push({ name: "divider-ratio", label: "divider ratio, worst case of both tolerances", v: Math.max(Math.abs(dev.high), Math.abs(dev.low)) * peak, calibrates_out: true });
+  }
+  return terms;
+}
+
+function conversion(design: Design, k: number): Conversion {
+  const perCode = design.adc.reference_v / 2 ** design.adc.bits / k;
+  const positiveIsHigh = design.logic.level_shift !== "npn-inverter";
+  return {
+    volts_per_code: perCode,
+    offset_v: 0,
+    formula: `reading = sign × (code + 0.5) × ${perCode.toPrecision(6)} V`,
+    sign: positiveIsHigh
+      ? "sign = +1 when the sign input reads high, −1 when it reads low"
+      : "sign = +1 when the sign input reads low (the NPN inverts), −1 when it reads high",
+  };
 }
