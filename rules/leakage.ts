@@ -36,7 +36,7 @@ export const leakage: Rule = {
     const error = (ir * ohm) / perInput;
     const limit = stage.leakage_limit_v;
     const margin = limit - error;
-    const scale = perInput === 1 ? "" : ` ÷ ${Number(perInput.toPrecision(3))}`;
+    const scale = () => (perInput === 1 ? "" : ` ÷ ${Number(perInput.toPrecision(3))}`);
     return finding("leakage", {
       verdict: shareVerdict(margin, limit, policy),
       needed: limit,
@@ -44,7 +44,7 @@ export const leakage: Rule = {
       margin,
       unit: "V",
       limit,
-      reason: () => `leaks ${formatSI(ir, "A")} at ${hot} °C (${formatSI(d.ir_na * 1e-9, "A")} at 25 °C), × ${formatSI(ohm, "Ω")}${scale} = ${formatSI(error, "V")}; the limit is ${formatSI(limit, "V")} (${stage.leakage_what ?? "error share"}): ${spareOrShortSmall(margin)}`,
+      reason: () => `leaks ${formatSI(ir, "A")} at ${hot} °C (${formatSI(d.ir_na * 1e-9, "A")} at 25 °C), × ${formatSI(ohm, "Ω")}${scale()} = ${formatSI(error, "V")}; the limit is ${formatSI(limit, "V")} (${stage.leakage_what ?? "error share"}): ${spareOrShortSmall(margin)}`,
       steps: () => [
         { label: "ir at 25 °C", value: d.ir_na * 1e-9, unit: "A" },
         { label: `ir at ${hot} °C`, value: ir, unit: "A" },

@@ -63,8 +63,8 @@ export const logicHigh: Rule = {
     const level = high - vf;
     const margin = Math.min(level - vih, top - level);
     const tooHigh = top - level < level - vih;
-    const diode = vf > 0 ? `, minus ${formatVolts(vf)} across the clamp diode at ${formatSI(current, "A")} = ${formatVolts(level)}` : "";
-    const bound = tooHigh ? `needs at most ${formatVolts(top)} (V_DD + 0.3 V)` : `needs at least V_IH ${formatVolts(vih)}`;
+    const diode = () => (vf > 0 ? `, minus ${formatVolts(vf)} across the clamp diode at ${formatSI(current, "A")} = ${formatVolts(level)}` : "");
+    const bound = () => (tooHigh ? `needs at most ${formatVolts(top)} (V_DD + 0.3 V)` : `needs at least V_IH ${formatVolts(vih)}`);
     return finding("logic-high", {
       verdict: voltageVerdict(margin, policy),
       needed: tooHigh ? top : vih,
@@ -72,7 +72,7 @@ export const logicHigh: Rule = {
       margin,
       unit: "V",
       limit: vih,
-      reason: () => `the output high reaches ${formatVolts(high)}${diode}; ${bound}: ${spareOrShort(margin, "V")}`,
+      reason: () => `the output high reaches ${formatVolts(high)}${diode()}; ${bound()}: ${spareOrShort(margin, "V")}`,
       steps: () => [
         { label: "V_OH = V+ − out_pos_headroom_v", value: high, unit: "V" },
         { label: "clamp current = V_OH / pull_down_ohm", value: current, unit: "A" },

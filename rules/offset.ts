@@ -30,9 +30,11 @@ export const offset: Rule = {
     const error = o.output_v / stage.output_per_input;
     const limit = policy.offset_share * design.accuracy.required_v;
     const margin = limit - error;
-    const mult = stage.vos_multiplier === 1 ? "" : `${stage.vos_multiplier}·`;
-    const drift = o.drift > 0 ? ` incl. ${mv(o.drift)} drift` : "";
-    const scale = stage.output_per_input === 1 ? "" : `, ÷ ${round3(stage.output_per_input)} to the input`;
+    const mult = stage.vos_multiplier === 1 ? "" : `${round3(stage.vos_multiplier)}·`;
+    const bias = stage.bias_ohm;
+    const k = stage.output_per_input;
+    const drift = () => (o.drift > 0 ? ` incl. ${mv(o.drift)} drift` : "");
+    const scale = () => (k === 1 ? "" : `, ÷ ${round3(k)} to the input`);
     return finding("offset", {
       verdict: shareVerdict(margin, limit, policy),
       needed: limit,
@@ -40,12 +42,12 @@ export const offset: Rule = {
       margin,
       unit: "V",
       limit,
-      reason: () => `adds ${mv(error)} at the input (${mult}${mv(o.vos)} offset${drift} + ${formatSI(o.ib, "A")} × ${formatSI(stage.bias_ohm, "Ω")}${scale}); the limit is ${mv(limit)}: ${spareOrShortSmall(margin)}`,
+      reason: () => `adds ${mv(error)} at the input (${mult}${mv(o.vos)} offset${drift()} + ${formatSI(o.ib, "A")} × ${formatSI(bias, "Ω")}${scale()}); the limit is ${mv(limit)}: ${spareOrShortSmall(margin)}`,
       steps: () => [
         { label: "Vos at 25 °C", value: o.vos25, unit: "V" },
         { label: "drift × temperature span", value: o.drift, unit: "V" },
         { label: "Ib", value: o.ib, unit: "A" },
-        { label: "R through which Ib flows", value: stage.bias_ohm, unit: "Ω" },
+        { label: "R through which Ib flows", value: bias, unit: "Ω" },
         { label: `output error = ${mult}Vos + Ib·R`, value: o.output_v, unit: "V" },
         { label: "input-referred error = output error / k", value: error, unit: "V" },
         { label: "limit = offset_share × required_v", value: limit, unit: "V" },

@@ -16,7 +16,7 @@ export const propagationDelay: Rule = {
   evaluate({ part, design, rails, policy }) {
     const f = design.signal.max_frequency_hz;
     const limit = policy.timing_fraction / f;
-    const period = `${policy.timing_fraction * 100} % of the ${formatSI(1 / f, "s")} period`;
+    const period = () => `${policy.timing_fraction * 100} % of the ${formatSI(1 / f, "s")} period`;
     if (part.kind === "op-amp") {
       const swing = (outputHigh(part, rails) ?? rails.positive_v) - outputLow(part, rails);
       const slew = part.slew_v_per_us * 1e6;
@@ -30,7 +30,7 @@ export const propagationDelay: Rule = {
         margin,
         unit: "s",
         limit,
-        reason: () => `an op amp used as a comparator: about ${formatSI(delay, "s")} to slew ${formatSI(swing, "V")} at ${formatQuantity(slew, "V/s")} against a limit of ${formatSI(limit, "s")} (${period}); its overload recovery is not rated, so at best marginal`,
+        reason: () => `an op amp used as a comparator: about ${formatSI(delay, "s")} to slew ${formatSI(swing, "V")} at ${formatQuantity(slew, "V/s")} against a limit of ${formatSI(limit, "s")} (${period()}); its overload recovery is not rated, so at best marginal`,
         steps: () => [
           { label: "output swing V_OH − V_OL", value: swing, unit: "V" },
           { label: "slew rate", value: slew, unit: "V/s" },
@@ -50,7 +50,7 @@ export const propagationDelay: Rule = {
       margin,
       unit: "s",
       limit,
-      reason: () => `switches in ${formatSI(delay, "s")}; the limit is ${formatSI(limit, "s")} (${period}): ${spareOrShort(margin, "s")}`,
+      reason: () => `switches in ${formatSI(delay, "s")}; the limit is ${formatSI(limit, "s")} (${period()}): ${spareOrShort(margin, "s")}`,
       steps: () => [
         { label: "tpd", value: delay, unit: "s" },
         { label: "limit = timing_fraction / f", value: limit, unit: "s" },

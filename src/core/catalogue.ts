@@ -44,7 +44,8 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
   if (!spec) throw new Error(`unknown kind ${kind}`);
   const known = Object.keys(spec.columns);
   const problems: Problem[] = [];
-  const body = text.startsWith("\uFEFF") ? text.slice(1) : text;
+  // Lone CR line ends (old spreadsheet exports) would otherwise put every row on "line 1".
+  const body = (text.startsWith("\uFEFF") ? text.slice(1) : text).replace(/\r\n?/g, "\n");
 
   if (body.trim() === "") {
     return { value: [], lines, problems: [{ file, message: `file is empty (expected a header row: ${known.join(",")})` }] };
@@ -77,7 +78,9 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
   // The header is line 1 unless blank lines come before it.
   const headerLine = rowLines[0] ?? 1;
 
-  if (columns.length === 1 && (columns[0] ?? "").includes(";")) {
+  // A spreadsheet's "text" export uses tabs, a European one semicolons.
+  const separator = columns.length === 1 ? [";", "\t"].find((s) => (columns[0] ?? "").includes(s)) : undefined;
+  if (separator !== undefined) {
     return {
       value: [],
       lines,
@@ -85,7 +88,7 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
         {
           file,
           line: headerLine,
-          message: `header looks semicolon-separated (got '${shorten(columns[0] ?? "")}', expected comma-separated columns; export the sheet as CSV with commas)`,
+          message: `header looks ${separator === ";" ? "semicolon" : "tab"}-separated (got '${shorten(columns[0] ?? "")}', expected comma-separated columns; export the sheet as CSV with commas)`,
         },
       ],
     };

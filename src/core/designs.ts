@@ -27,15 +27,17 @@ export function issuesToProblems(file: string, issues: readonly z.core.$ZodIssue
   for (const issue of issues) {
     const path = issue.path.map(String);
     if (issue.code === "unrecognized_keys") {
-      const known = knownKeysAt(path);
+      const known = knownKeysAt(path, raw);
       for (const key of issue.keys) {
         const guess = closest(key, known);
-        problems.push({
-          file,
-          path: [...path, key].join("."),
-          message: `unknown key (got '${key}', expected ${guess ? `'${guess}'` : `one of ${known.map((k) => `'${k}'`).join(", ")}`})`,
-        });
+        const expected = guess ? `'${guess}'` : known.length > 0 ? `one of ${known.map((k) => `'${k}'`).join(", ")}` : "no other key here";
+        problems.push({ file, path: [...path, key].join("."), message: `unknown key (got '${key}', expected ${expected})` });
       }
+      continue;
+    }
+    if (issue.code === "invalid_key") {
+      // A record key's own message (e.g. an unknown BOM role) sits one level down.
+      problems.push({ file, path: path.join("."), message: issue.issues.map((i) => i.message).join("; ") });
       continue;
     }
     if (issue.code === "invalid_type") {
@@ -52,6 +54,7 @@ export function issuesToProblems(file: string, issues: readonly z.core.$ZodIssue
 function expectedName(expected: string): string {
   if (expected === "object") return "an object { … }";
   if (expected === "record") return "an object of role: part id";
+  if (expected === "boolean") return "true or false";
   return expected;
 }
 
@@ -65,21 +68,35 @@ function valueAt(raw: unknown, path: string[]): unknown {
 }
 
 // Walks the schema's shape to list the keys allowed at a path, for suggestions.
-function knownKeysAt(path: string[]): string[] {
+// The raw value rides along so a union (the negative supply) picks its variant by `kind`.
+function knownKeysAt(path: string[], raw: unknown): string[] {
   let schema: unknown = designSchema;
-  for (const key of path) {
-    const shape = shapeOf(schema);
+  for (const [i, key] of path.entries()) {
+    const shape = shapeOf(schema, valueAt(raw, path.slice(0, i)));
     if (!shape) return [];
     schema = shape[key];
   }
-  return Object.keys(shapeOf(schema) ?? {});
+  return Object.keys(shapeOf(schema, valueAt(raw, path)) ?? {});
 }
 
-function shapeOf(schema: unknown): Record<string, unknown> | undefined {
-  let s = schema as { shape?: Record<string, unknown>; def?: { innerType?: unknown; in?: unknown; out?: unknown; options?: unknown[] } } | undefined;
+type SchemaNode = {
+  shape?: Record<string, unknown>;
+  def?: { innerType?: unknown; in?: unknown; out?: unknown; options?: unknown[]; values?: unknown[] };
+};
+
+function shapeOf(schema: unknown, value: unknown): Record<string, unknown> | undefined {
+  let s = schema as SchemaNode | undefined;
   for (let i = 0; i < 6 && s; i++) {
     if (s.shape) return s.shape;
-    s = (s.def?.innerType ?? s.def?.in) as typeof s;
+    if (s.def?.options) {
+      const kind = (value as { kind?: unknown } | undefined)?.kind;
+      const options = s.def.options as SchemaNode[];
+      const match = options.find((o) => (o.shape?.kind as SchemaNode | undefined)?.def?.values?.includes(kind));
+      return match?.shape ?? Object.assign({}, ...options.map((o) => o.shape ?? {}));
+    }
+    const inner = (s.def?.innerType ?? s.def?.in) as SchemaNode | undefined;
+    // A pipe from z.unknown() keeps its structure on the output side.
+    s = inner?.shape || inner?.def?.innerType || inner?.def?.in || inner?.def?.options ? inner : ((s.def?.out as SchemaNode | undefined) ?? inner);
   }
   return undefined;
 }

@@ -15,7 +15,16 @@ export type Problem = {
 export function formatProblem(p: Problem): string {
   const where = p.line === undefined ? p.file : `${p.file}:${p.line}`;
   const what = p.column !== undefined ? ` column '${p.column}':` : p.path !== undefined && p.path !== "" ? ` ${p.path}:` : "";
-  return `${where}:${what} ${p.message}`;
+  return visible(`${where}:${what} ${p.message}`);
+}
+
+const CONTROL = /[\u0000-\u001f\u007f-\u009f\u2028\u2029]/g;
+const NAMED: Readonly<Record<string, string>> = { "\n": "\\n", "\r": "\\r", "\t": "\\t" };
+
+// Quoted cells may hold line breaks or terminal escapes; shown raw they would
+// split one problem over several lines or repaint the user's terminal.
+function visible(text: string): string {
+  return text.replace(CONTROL, (c) => NAMED[c] ?? `\\u${c.charCodeAt(0).toString(16).padStart(4, "0")}`);
 }
 
 /** Raised for input that cannot be used; carries every problem found, never a stack. */

@@ -5,23 +5,66 @@ import type { Finding, Rule, RuleContext, Stage, Verdict } from "./types.ts";
 import { severity, unratedFinding, worst } from "./verdict.ts";
 
 export type PartResult = {
-  part: Part;
-  verdict: Verdict;
-  findings: Finding[];
+  readonly part: Part;
+  readonly verdict: Verdict;
+  /** Every rule's finding, in the role's rule order. */
+  readonly findings: Finding[];
   /** Named for this role in the design's BOM. */
-  bom: boolean;
+  readonly bom: boolean;
   /** Smallest margin relative to its limit, over the findings that have one. */
-  relative: number;
+  readonly relative: number;
 };
 
-export function evaluatePart(rules: readonly Rule[], ctx: Omit<RuleContext, "part">, part: Part, bom: boolean): PartResult {
-  const findings: Finding[] = [];
-  for (const rule of rules) {
-    const needs = rule.needs[part.kind] ?? [];
-    const empty = needs.filter((c) => (part as Record<string, unknown>)[c] === undefined);
-    findings.push(empty.length > 0 ? unratedFinding(rule.id, empty, unitOf(rule.id)) : rule.evaluate({ ...ctx, part }));
+/**
+ * A part's result keeps only its verdict and ranking key; the findings are
+ * worked out again on first read. Rules are pure, so the second run gives the
+ * same findings, and a 2,000-part catalogue does not hold 30,000 findings in
+ * memory between keystrokes of the try page when a page shows only a few.
+ */
+class LazyPartResult implements PartResult {
+  readonly part: Part;
+  readonly verdict: Verdict;
+  readonly bom: boolean;
+  readonly relative: number;
+  #rules: readonly Rule[];
+  #ctx: Omit<RuleContext, "part">;
+  #findings: Finding[] | undefined;
+
+  constructor(rules: readonly Rule[], ctx: Omit<RuleContext, "part">, part: Part, bom: boolean) {
+    const findings = runRules(rules, ctx, part);
+    this.part = part;
+    this.verdict = partVerdict(findings, ctx.policy);
+    this.bom = bom;
+    this.relative = relativeMargin(findings);
+    this.#rules = rules;
+    this.#ctx = ctx;
   }
-  return { part, verdict: partVerdict(findings, ctx.policy), findings, bom, relative: relativeMargin(findings) };
+
+  get findings(): Finding[] {
+    this.#findings ??= runRules(this.#rules, this.#ctx, this.part);
+    return this.#findings;
+  }
+
+  toJSON() {
+    return { part: this.part, verdict: this.verdict, findings: this.findings, bom: this.bom, relative: this.relative };
+  }
+}
+
+function runRules(rules: readonly Rule[], ctx: Omit<RuleContext, "part">, part: Part): Finding[] {
+  const findings: Finding[] = [];
+  const partCtx: RuleContext = { ...ctx, part };
+  const cells = part as Record<string, unknown>;
+  for (const rule of rules) {
+    const needs = rule.needs[part.kind];
+    if (needs !== undefined && needs.some((c) => cells[c] === undefined)) {
+      findings.push(unratedFinding(rule.id, needs.filter((c) => cells[c] === undefined), unitOf(rule.id)));
+    } else findings.push(rule.evaluate(partCtx));
+  }
+  return findings;
+}
+
+export function evaluatePart(rules: readonly Rule[], ctx: Omit<RuleContext, "part">, part: Part, bom: boolean): PartResult {
+  return new LazyPartResult(rules, ctx, part, bom);
 }
 
 /** The worst finding; with allow_unrated an unrated finding counts as marginal. */

@@ -20,7 +20,15 @@ function describe(r: Range): string {
 export function shown(value: unknown): string {
   if (typeof value === "string") return `'${value.length > 40 ? `${value.slice(0, 37)}…` : value}'`;
   if (value === undefined) return "nothing";
-  const json = JSON.stringify(value);
+  // JSON.stringify would print a 1e400 that JSON.parse turned into Infinity as "null".
+  if (typeof value === "number" && !Number.isFinite(value)) return String(value);
+  let json: string | undefined;
+  try {
+    json = JSON.stringify(value);
+  } catch {
+    // Nested deeper than the stack allows: only a hostile or broken file does that.
+    json = Array.isArray(value) ? "[…]" : "{…}";
+  }
   return json === undefined ? String(value) : json.length > 40 ? `${json.slice(0, 37)}…` : json;
 }
 
@@ -35,7 +43,7 @@ export function si(range: Range = {}) {
       if (parsed.ok) n = parsed.value;
     }
     if (n === undefined || !Number.isFinite(n)) {
-      const what = value === undefined ? "required value is missing" : "not a number";
+      const what = value === undefined ? "required value is missing" : typeof value === "number" ? "out of range" : "not a number";
       ctx.addIssue({ code: "custom", message: `${what} (got ${shown(value)}, expected ${expected})` });
       return z.NEVER;
     }

@@ -122,6 +122,18 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
     const diode = settleDiode(r, "pump diode");
     const pumpDiode = use(diode, neg.load_a, r);
     const rail = pumpRail(neg, pumpDiode.vf_v);
+    // A drive below two diode drops makes no rail at any load; "collapse current 0 A" would hide why.
+    if (rail.collapse_a === 0) {
+      return {
+        ok: false,
+        problems: [
+          {
+            path: "supply.negative.drive_v",
+            message: `pump drive cannot make a negative rail (got ${formatVolts(neg.drive_v)}, expected more than two diode drops, 2 × ${formatVolts(pumpDiode.vf_v)} = ${formatVolts(rail.diode_drop_v)} with diode ${diode.id}); raise the drive or use a diode with a lower forward voltage`,
+          },
+        ],
+      };
+    }
     if (neg.load_a >= rail.collapse_a) {
       return {
         ok: false,
