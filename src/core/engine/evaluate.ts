@@ -67,7 +67,10 @@ function evaluateTopology(design: Design, catalogue: Catalogue, topology: Single
  */
 export function evaluateDesign(design: Design, catalogue: Catalogue, override?: Topology): Evaluation {
   const topology = override ?? design.topology;
-  const topologies = topology === "all" ? SINGLE_TOPOLOGIES : [topology];
+  // The BOM is checked against the topologies the design file names; a
+  // topology asked for on the command line just ignores the roles it lacks.
+  const expand = (t: Topology): readonly SingleTopology[] => (t === "all" ? SINGLE_TOPOLOGIES : [t]);
+  const topologies = [...new Set([...expand(design.topology), ...expand(topology)])];
   const problems = checkBom(design, catalogue, topologies);
   if (problems.length > 0) return { ok: false, problems };
   if (topology !== "all") return evaluateTopology(design, catalogue, topology);
