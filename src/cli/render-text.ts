@@ -86,10 +86,10 @@ function renderBudget(result: DesignResult): string[] {
   const out = ["", `  accuracy budget (input-referred; required ${formatSI(b.required_v, "V")})`];
   for (const t of b.terms) {
     const mark = t.name === b.dominant ? " <- largest" : "";
-    out.push(`    ${t.label.padEnd(58).slice(0, 58)} ${formatSI(t.v, "V").padStart(9)}${mark}`);
+    out.push(`    ${t.label.padEnd(54).slice(0, 54)} ${formatSI(t.v, "V").padStart(9)}${mark}`);
   }
-  out.push(`    ${"worst case (sum)".padEnd(58)} ${formatSI(b.worst_case_v, "V").padStart(9)}`);
-  out.push(`    ${"root-sum-square (JCGM 100:2008)".padEnd(58)} ${formatSI(b.rss_v, "V").padStart(9)}`);
+  out.push(`    ${"worst case (sum)".padEnd(54)} ${formatSI(b.worst_case_v, "V").padStart(9)}`);
+  out.push(`    ${"root-sum-square (JCGM 100:2008)".padEnd(54)} ${formatSI(b.rss_v, "V").padStart(9)}`);
   out.push(`    verdict: ${b.verdict}; after a one-point gain calibration: ${b.calibrated.verdict} (worst case ${formatSI(b.calibrated.worst_case_v, "V")})`);
   if (b.missing.length > 0) out.push(`    incomplete: no part for ${b.missing.join(", ")}, so its errors are unknown`);
   out.push(`    effective ADC bits used: ${b.effective_bits.toFixed(2)}`);
