@@ -90,7 +90,9 @@ function renderBudget(result: DesignResult): string[] {
   }
   out.push(`    ${"worst case (sum)".padEnd(54)} ${formatSI(b.worst_case_v, "V").padStart(9)}`);
   out.push(`    ${"root-sum-square (JCGM 100:2008)".padEnd(54)} ${formatSI(b.rss_v, "V").padStart(9)}`);
-  out.push(`    verdict: ${b.verdict}; after a one-point gain calibration: ${b.calibrated.verdict} (worst case ${formatSI(b.calibrated.worst_case_v, "V")})`);
+  out.push(
+    wrap(`verdict: ${b.verdict}; after a one-point gain calibration: ${b.calibrated.verdict} (worst case ${formatSI(b.calibrated.worst_case_v, "V")})`, WIDTH, "      ", "    "),
+  );
   if (b.missing.length > 0) out.push(`    incomplete: no part for ${b.missing.join(", ")}, so its errors are unknown`);
   out.push(`    effective ADC bits used: ${b.effective_bits.toFixed(2)}`);
   const c = result.conversion;
