@@ -108,7 +108,7 @@ function negativeNote(result: DesignResult): string {
 }
 
 function renderRole(role: RoleResult, io: Pick<Io, "color">): string[] {
-  const lines: string[] = [paint(io, "bold", `  ${role.role}`) + ` — ${role.label}`];
+  const lines: string[] = [wrap(`${paint(io, "bold", role.role)} — ${role.label}`, WIDTH + (io.color ? 8 : 0), "      ", "  ")];
   lines.push(`    fits (${role.fits.length}):${role.fits.length === 0 ? " none" : ""}`);
   role.fits.forEach((p, i) => lines.push(...renderPart(p, `${i + 1}.`, io)));
   lines.push(`    rejected (${role.rejected.length}):${role.rejected.length === 0 ? " none" : ""}`);
