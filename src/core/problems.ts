@@ -18,6 +18,7 @@ export function formatProblem(p: Problem): string {
   return visible(`${where}:${what} ${p.message}`);
 }
 
+// eslint-disable-next-line no-control-regex -- matching control characters is the point
 const CONTROL = /[\u0000-\u001f\u007f-\u009f\u2028\u2029]/g;
 const NAMED: Readonly<Record<string, string>> = { "\n": "\\n", "\r": "\\r", "\t": "\\t" };
 
