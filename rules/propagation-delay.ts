@@ -30,7 +30,7 @@ export const propagationDelay: Rule = {
         margin,
         unit: "s",
         limit,
-        reason: () => `an op amp used as a comparator: about ${formatSI(delay, "s")} to slew ${formatSI(swing, "V")} at ${formatQuantity(slew, "V/s")} against a limit of ${formatSI(limit, "s")} (${period()}); its overload recovery is not rated, so at best marginal`,
+        reason: () => `an op amp used as a comparator: about ${formatSI(delay, "s")} to slew ${formatSI(swing, "V")} at ${formatQuantity(slew, "V/s")} against a limit of ${formatSI(limit, "s")} (${period()}): ${spareOrShort(margin, "s")}; its overload recovery is not rated, so at best marginal`,
         steps: () => [
           { label: "output swing V_OH − V_OL", value: swing, unit: "V" },
           { label: "slew rate", value: slew, unit: "V/s" },

@@ -1,0 +1,368 @@
+// evaluateDesign on a small catalogue built from generic classes (test/helpers/parts.ts).
+import { describe, expect, it } from "vitest";
+import { catalogueFromParts, type Catalogue } from "../../../src/core/catalogue.ts";
+import { evaluateDesign } from "../../../src/core/engine/evaluate.ts";
+import { designHolds, type DesignResult, type RoleResult } from "../../../src/core/engine/result.ts";
+import { forwardVoltage } from "../../../src/core/math/diode.ts";
+import type { Design } from "../../../src/core/schemas/design.ts";
+import { design, type DeepPartial } from "../../helpers/designs.ts";
+import { comparator, diode, opAmp } from "../../helpers/parts.ts";
+
+const CATALOGUE: Catalogue = catalogueFromParts([
+  // Ground-sensing bipolar: to V+ − 1.5 V, 3–32 V.
+  opAmp({ id: "oa-gs", status: "stocked", cost_band: 1 }),
+  opAmp({ id: "oa-gs-approved", status: "approved", cost_band: 1 }),
+  // Wide-supply rail-to-rail: passes everything on ±5 V, with more margin.
+  opAmp({
+    id: "oa-rrio-12v",
+    status: "listed",
+    cost_band: 2,
+    supply_min_v: 2.7,
+    supply_max_v: 12,
+    icm_neg_headroom_v: -0.1,
+    icm_pos_headroom_v: -0.1,
+    out_neg_headroom_v: 0.05,
+    out_pos_headroom_v: 0.05,
+    vos_max_mv: 1,
+    ib_max_na: 0.01,
+    gbw_mhz: 10,
+    slew_v_per_us: 5,
+  }),
+  opAmp({
+    id: "oa-rrio-12v-b",
+    status: "listed",
+    cost_band: 2,
+    supply_min_v: 2.7,
+    supply_max_v: 12,
+    icm_neg_headroom_v: -0.1,
+    icm_pos_headroom_v: -0.1,
+    out_neg_headroom_v: 0.05,
+    out_pos_headroom_v: 0.05,
+    vos_max_mv: 1,
+    ib_max_na: 0.01,
+    gbw_mhz: 10,
+    slew_v_per_us: 5,
+  }),
+  // Classic split-supply class rated from 10 V.
+  opAmp({ id: "oa-classic", status: "stocked", cost_band: 1, supply_min_v: 10, supply_max_v: 36 }),
+  opAmp({ id: "oa-decomp", status: "stocked", cost_band: 1, unity_gain_stable: false }),
+  opAmp({ id: "oa-pr-unstated", status: "stocked", cost_band: 1, phase_reversal: "" }),
+  comparator({
+    id: "cmp-pp-wide",
+    status: "stocked",
+    cost_band: 1,
+    supply_min_v: 2.7,
+    supply_max_v: 36,
+    icm_neg_headroom_v: -0.2,
+    icm_pos_headroom_v: 1.5,
+    out_neg_headroom_v: 0.1,
+    out_pos_headroom_v: 0.2,
+    vos_max_mv: 2,
+    tpd_ns: 100,
+  }),
+  comparator({
+    id: "cmp-od",
+    status: "stocked",
+    cost_band: 1,
+    supply_max_v: 36,
+    output: "open-drain",
+    out_neg_headroom_v: "",
+    out_pos_headroom_v: "",
+  }),
+  diode({ id: "d-si", status: "stocked", cost_band: 1 }),
+  diode({ id: "d-si-07", status: "listed", cost_band: 2, vf_1ma_v: 0.7, vf_10ma_v: 0.7 }),
+  diode({
+    id: "d-sch",
+    status: "approved",
+    cost_band: 1,
+    type: "schottky",
+    vf_1ma_v: 0.3,
+    vf_10ma_v: 0.4,
+    ir_na: 500,
+    vr_max_v: 30,
+    trr_ns: "",
+  }),
+]);
+
+function evaluate(overrides: DeepPartial = {}): DesignResult {
+  const e = evaluateDesign(design(overrides), CATALOGUE);
+  if (!e.ok) throw new Error(e.problems.map((p) => `${p.path}: ${p.message}`).join("\n"));
+  return e.result;
+}
+
+function role(r: DesignResult, name: string): RoleResult {
+  const found = r.roles.find((x) => x.role === name);
+  if (!found) throw new Error(`no role ${name}`);
+  return found;
+}
+
+const ids = (rr: RoleResult) => ({
+  fits: rr.fits.map((p) => `${p.part.id}:${p.verdict}`),
+  rejected: rr.rejected.map((p) => `${p.part.id}:${p.verdict}`),
+});
+const problemsOf = (d: Design) => {
+  const e = evaluateDesign(d, CATALOGUE);
+  return e.ok ? [] : e.problems.map((p) => `${p.path}: ${p.message}`);
+};
+
+const PUMP = {
+  kind: "charge-pump",
+  drive_v: 5,
+  frequency_hz: 980,
+  flying_cap_f: 1e-6,
+  reservoir_cap_f: 10e-6,
+  load_a: 1e-3,
+};
+
+describe("evaluateDesign: roles and ranking", () => {
+  it("has the rectify-and-sign roles; pump and clamp diodes only when used", () => {
+    expect(evaluate().roles.map((r) => r.role)).toEqual([
+      "buffer",
+      "rectifier",
+      "sign",
+      "rectifier-diode",
+      "clamp-diode",
+    ]);
+    expect(
+      evaluate({ supply: { negative: PUMP }, logic: { level_shift: "pull-up" } }).roles.map((r) => r.role),
+    ).toEqual(["buffer", "rectifier", "sign", "pump-diode", "rectifier-diode"]);
+  });
+
+  it("ranks the buffer's fits by verdict, status, cost band, relative margin and id, and lists every rejection", () => {
+    expect(ids(role(evaluate(), "buffer"))).toEqual({
+      fits: ["oa-gs:pass", "oa-gs-approved:pass", "oa-rrio-12v:pass", "oa-rrio-12v-b:pass", "oa-classic:marginal"],
+      rejected: ["oa-pr-unstated:unrated", "oa-decomp:fail"],
+    });
+  });
+
+  it("puts every part of the role's kinds in fits or rejected, each with a finding for every rule", () => {
+    const r = evaluate({ supply: { negative: PUMP } });
+    for (const rr of r.roles) {
+      const all = [...rr.fits, ...rr.rejected];
+      const candidates = CATALOGUE.parts.filter((p) => rr.kinds.includes(p.kind));
+      expect(all.map((p) => p.part.id).sort()).toEqual(candidates.map((p) => p.id).sort());
+      for (const p of all) expect(p.findings.map((f) => f.rule)).toEqual(rr.rules);
+      for (const p of rr.rejected)
+        expect(p.findings.some((f) => f.verdict === "fail" || f.verdict === "unrated")).toBe(true);
+    }
+  });
+
+  it("allow_unrated moves an unrated part into the fits as marginal", () => {
+    expect(ids(role(evaluate({ policy: { allow_unrated: true } }), "buffer")).fits).toContain(
+      "oa-pr-unstated:marginal",
+    );
+    expect(ids(role(evaluate(), "rectifier-diode")).rejected).toContain("d-sch:unrated");
+    expect(ids(role(evaluate({ policy: { allow_unrated: true } }), "rectifier-diode")).fits).toContain(
+      "d-sch:marginal",
+    );
+  });
+});
+
+describe("evaluateDesign: issue 3 acceptance", () => {
+  it("fixed ±5 V, 2.5 V window: ground-sensing bipolar passes output-swing with 1.00 V to spare; a 10 V-minimum class is marginal on supply-range", () => {
+    const buffer = role(evaluate(), "buffer");
+    const gs = buffer.fits.find((p) => p.part.id === "oa-gs");
+    const swing = gs?.findings.find((f) => f.rule === "output-swing");
+    expect(swing).toMatchObject({ verdict: "pass", needed: 2.5, available: 3.5, margin: 1 });
+    expect(swing?.reason).toMatchInlineSnapshot(
+      `"needs the output to reach +2.50 V; at V+ = 5.00 V it reaches +3.50 V (1.50 V headroom): 1.00 V to spare"`,
+    );
+    const classic = buffer.fits.find((p) => p.part.id === "oa-classic");
+    expect(classic?.verdict).toBe("marginal");
+    expect(classic?.findings.find((f) => f.rule === "supply-range")).toMatchObject({
+      verdict: "marginal",
+      needed: 10,
+      available: 10,
+      margin: 0,
+    });
+  });
+
+  it("a ground-only design leaves the buffer with no fit: every op amp fails output-swing on the negative side", () => {
+    const r = evaluate({ supply: { negative: { kind: "ground" } } });
+    const buffer = role(r, "buffer");
+    expect(buffer.fits).toEqual([]);
+    for (const p of buffer.rejected) {
+      const swing = p.findings.find((f) => f.rule === "output-swing");
+      expect(swing?.verdict).toBe("fail");
+      expect(swing?.needed).toBe(-2.5);
+    }
+    expect(
+      buffer.rejected.find((p) => p.part.id === "oa-gs")?.findings.find((f) => f.rule === "output-swing")?.reason,
+    ).toMatchInlineSnapshot(
+      `"needs the output to reach −2.50 V; with V− = 0.00 V it reaches only +0.02 V (0.02 V headroom): 2.52 V short"`,
+    );
+    expect(designHolds(r)).toBe(false);
+  });
+
+  it("10 V peak into a 2.5 V window from E24 with a 100 kΩ target: 39 kΩ over 13 kΩ, k = 0.25", () => {
+    const r = evaluate({ signal: { peak_v: 10, source_ohm: 1000 } });
+    expect(r.derived.divider).toEqual({ top_ohm: 39000, bottom_ohm: 13000, ratio: 0.25, total_ohm: 52000 });
+    expect(r.derived.ratio).toBe(0.25);
+    expect(r.derived.window_v).toBe(2.5);
+    expect(r.derived.target_ratio).toBe(0.25);
+    // (Rs + R1) ‖ R2 = 40 kΩ ‖ 13 kΩ
+    expect(r.derived.thevenin_ohm).toBeCloseTo((40e3 * 13e3) / 53e3, 9);
+  });
+
+  it("needs no divider when the peak fits the window", () => {
+    const r = evaluate();
+    expect([r.derived.divider, r.derived.ratio, r.derived.window_v, r.derived.thevenin_ohm]).toEqual([null, 1, 2.5, 0]);
+  });
+});
+
+describe("evaluateDesign: derived values", () => {
+  // IEEE Std 1241-2010: Q = V_FS / 2^N; 10 bit at 5 V is 4.8828 mV.
+  it.each([
+    [{}, 5 / 1024],
+    [{ signal: { peak_v: 10 } }, 5 / 1024 / 0.25],
+    [{ adc: { bits: 12, reference_v: 3.3 }, supply: { positive_v: 5 } }, 0.80566e-3],
+  ])("one ADC step referred to the input (%j) is %d V", (overrides, step) => {
+    expect(evaluate(overrides).derived.adc_step_at_input_v).toBeCloseTo(step, 8);
+  });
+
+  it("10 bit at 5 V: the step is 4.8828 mV (IEEE 1241)", () => {
+    expect(evaluate().derived.adc_step_at_input_v * 1e3).toBeCloseTo(4.8828, 4);
+  });
+
+  it("a fixed negative rail is used as given", () => {
+    expect(
+      evaluate({ supply: { negative: { kind: "fixed", v: -12 }, positive_v: 12 }, logic: { vdd_v: 5 } }).derived.rails,
+    ).toEqual({ positive_v: 12, negative_v: -12 });
+  });
+
+  it("evaluates the rectifier diode at W / rectifier_load_ohm and the clamp diode at V+ / pull_down_ohm", () => {
+    const r = evaluate({ bom: { "rectifier-diode": "d-si", "clamp-diode": "d-si" } });
+    const si = { vf_1ma_v: 0.65, vf_10ma_v: 0.75 };
+    expect(r.derived.rectifier_diode).toMatchObject({
+      id: "d-si",
+      current_a: 2.5e-4,
+      vf_v: forwardVoltage(si, 2.5e-4),
+      fits: true,
+    });
+    expect(r.derived.clamp_diode).toMatchObject({ id: "d-si", current_a: 5e-4, vf_v: forwardVoltage(si, 5e-4) });
+    const rect = role(r, "rectifier").stage;
+    expect(rect).toMatchObject({
+      output: { low: -forwardVoltage(si, 2.5e-4), high: 2.5 + forwardVoltage(si, 2.5e-4) },
+      noise_gain: 2,
+      zero_crossing_v: 2 * forwardVoltage(si, 2.5e-4),
+    });
+  });
+});
+
+describe("evaluateDesign: the charge pump", () => {
+  // Worked value (REFERENCES.md, diode charge-pump inverter): 5 V, 980 Hz, 1 µF, 0.7 V, 1 mA → −2.580 V.
+  it("settles the BOM pump diode first, and every op amp is checked against the rail it gives", () => {
+    const r = evaluate({ supply: { negative: PUMP }, bom: { "pump-diode": "d-si-07" } });
+    const neg = r.derived.negative;
+    expect(neg.kind).toBe("charge-pump");
+    if (neg.kind !== "charge-pump") return;
+    expect(neg.diode).toMatchObject({ id: "d-si-07", vf_v: 0.7, current_a: 1e-3 });
+    expect(Number(neg.dc_v.toFixed(3))).toBe(-2.58);
+    expect(neg.ripple_v).toBeCloseTo(1e-3 / (980 * 10e-6), 12);
+    expect(r.derived.rails.negative_v).toBeCloseTo(neg.dc_v + neg.ripple_v / 2, 12);
+    const supply = role(r, "buffer")
+      .fits.find((p) => p.part.id === "oa-gs")
+      ?.findings.find((f) => f.rule === "supply-range");
+    expect(supply?.needed).toBeCloseTo(5 - r.derived.rails.negative_v, 12);
+  });
+
+  it("without a BOM pump diode, takes the best-ranked fitting one (the Schottky is unrated on recovery)", () => {
+    const r = evaluate({ supply: { negative: PUMP } });
+    expect(ids(role(r, "pump-diode"))).toEqual({ fits: ["d-si:pass", "d-si-07:pass"], rejected: ["d-sch:unrated"] });
+    const neg = r.derived.negative;
+    if (neg.kind !== "charge-pump") throw new Error("expected a pump");
+    expect(neg.diode.id).toBe("d-si");
+    // −(5 − 2 × 0.65) + 1 mA / (980 Hz × 1 µF), then half the ripple
+    expect(neg.worst_v).toBeCloseTo(-3.7 + 1e-3 / 980e-6 + 1e-3 / 9.8e-3 / 2, 12);
+  });
+
+  it("a BOM pump diode that fails its role is still used, and said so", () => {
+    const r = evaluate({ supply: { negative: PUMP }, bom: { "pump-diode": "d-sch" } });
+    expect(r.derived.negative).toMatchObject({ diode: { id: "d-sch", vf_v: 0.3, fits: false } });
+    expect(r.notes).toMatchInlineSnapshot(`
+      [
+        "The pump diode d-sch does not fit its role; values that depend on it use it anyway.",
+      ]
+    `);
+    expect(role(r, "pump-diode").rejected[0]).toMatchObject({ bom: true, verdict: "unrated" });
+    expect(designHolds(r)).toBe(false);
+  });
+
+  it("a load at or past the collapse current (V_d − 2V_F)·f·C is a problem at supply.negative.load_a", () => {
+    // 0.7 V flat diode: collapse at 3.6 V × 980 Hz × 1 µF = 3.53 mA.
+    expect(problemsOf(design({ supply: { negative: { ...PUMP, load_a: 4e-3 } }, bom: { "pump-diode": "d-si-07" } })))
+      .toMatchInlineSnapshot(`
+      [
+        "supply.negative.load_a: load is at or past the pump's collapse current (got 4.00 mA, expected less than (drive − 2·Vf)·f·C = 3.53 mA with diode d-si-07); raise the frequency or the flying capacitor, or lower the load",
+      ]
+    `);
+    expect(
+      problemsOf(design({ supply: { negative: { ...PUMP, load_a: 3.5e-3 } }, bom: { "pump-diode": "d-si-07" } })),
+    ).toEqual([]);
+  });
+});
+
+describe("evaluateDesign: the BOM", () => {
+  it("reports a BOM part even when it fails, and the design then does not hold", () => {
+    const r = evaluate({ bom: { buffer: "oa-decomp" } });
+    const buffer = role(r, "buffer");
+    expect(buffer.bom).toBe("oa-decomp");
+    expect(buffer.chosen).toBe("oa-decomp");
+    const bomPart = buffer.rejected.find((p) => p.part.id === "oa-decomp");
+    expect(bomPart).toMatchObject({ bom: true, verdict: "fail" });
+    expect(bomPart?.findings.find((f) => f.verdict === "fail")?.reason).toMatchInlineSnapshot(
+      `"not unity-gain stable: the buffer runs at noise gain 1, where a decompensated part may oscillate"`,
+    );
+    expect(designHolds(r)).toBe(false);
+  });
+
+  it("holds when every BOM part fits and every role has a fit", () => {
+    const r = evaluate({ bom: { buffer: "oa-gs", sign: "cmp-pp-wide" } });
+    expect(role(r, "buffer").chosen).toBe("oa-gs");
+    expect(role(r, "sign").chosen).toBe("cmp-pp-wide");
+    expect(designHolds(r)).toBe(true);
+  });
+
+  it("rejects a BOM id that names no part, a part of the wrong kind, or a role the design does not have", () => {
+    expect(
+      problemsOf(design({ bom: { buffer: "oa-missing", rectifier: "d-si", "pump-diode": "d-si", sign: "oa-gs" } })),
+    ).toMatchInlineSnapshot(`
+      [
+        "bom.buffer: names no part in the catalogue (got 'oa-missing', expected the id of an op amp such as 'oa-gs')",
+        "bom.rectifier: names a part of the wrong kind (got 'd-si', a diode, expected an op amp)",
+        "bom.pump-diode: role is not used by this design (got 'pump-diode', expected one of buffer, rectifier, sign, rectifier-diode, clamp-diode)",
+      ]
+    `);
+  });
+});
+
+describe("evaluateDesign: an op amp in the sign role", () => {
+  it("is at best marginal, ranked after the comparators that pass, with a reason saying why", () => {
+    const sign = role(evaluate(), "sign");
+    expect(ids(sign)).toMatchInlineSnapshot(`
+      {
+        "fits": [
+          "cmp-pp-wide:pass",
+          "oa-rrio-12v:marginal",
+          "oa-rrio-12v-b:marginal",
+        ],
+        "rejected": [
+          "oa-classic:fail",
+          "oa-decomp:fail",
+          "oa-gs:fail",
+          "oa-pr-unstated:fail",
+          "cmp-od:fail",
+          "oa-gs-approved:fail",
+        ],
+      }
+    `);
+    const rrio = sign.fits.find((p) => p.part.id === "oa-rrio-12v");
+    expect(rrio?.verdict).toBe("marginal");
+    expect(rrio?.findings.filter((f) => f.verdict !== "pass").map((f) => `${f.rule}: ${f.reason}`))
+      .toMatchInlineSnapshot(`
+      [
+        "propagation-delay: an op amp used as a comparator: about 1.98 µs to slew 9.90 V at 5.00 V/µs against a limit of 50.0 µs (1 % of the 5.00 ms period): 48.0 µs to spare; its overload recovery is not rated, so at best marginal",
+      ]
+    `);
+  });
+});

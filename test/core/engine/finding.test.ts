@@ -1,0 +1,89 @@
+import { describe, expect, it } from "vitest";
+import { driftSpanC, finding, railPhrase, rangeMargin } from "../../../src/core/engine/finding.ts";
+
+describe("finding", () => {
+  it("writes its reason and steps once, on first read, and keeps them in JSON", () => {
+    let calls = 0;
+    const f = finding("offset", {
+      verdict: "pass",
+      needed: 0.025,
+      available: 0.01,
+      margin: 0.015,
+      unit: "V",
+      limit: 0.025,
+      reason: () => {
+        calls++;
+        return "adds 10.0 mV";
+      },
+      steps: () => [{ label: "error", value: 0.01, unit: "V" }],
+    });
+    expect(calls).toBe(0);
+    expect(f.reason).toBe("adds 10.0 mV");
+    expect(f.reason).toBe("adds 10.0 mV");
+    expect(calls).toBe(1);
+    expect(JSON.parse(JSON.stringify(f))).toEqual({
+      rule: "offset",
+      verdict: "pass",
+      needed: 0.025,
+      available: 0.01,
+      margin: 0.015,
+      unit: "V",
+      limit: 0.025,
+      reason: "adds 10.0 mV",
+      steps: [{ label: "error", value: 0.01, unit: "V" }],
+    });
+  });
+
+  it("leaves limit out of JSON when it has none", () => {
+    const f = finding("unity-gain-stable", {
+      verdict: "pass",
+      needed: 1,
+      available: 1,
+      margin: 0,
+      unit: "",
+      reason: "ok",
+      steps: [],
+    });
+    expect(Object.keys(JSON.parse(JSON.stringify(f)))).not.toContain("limit");
+  });
+});
+
+describe("rangeMargin", () => {
+  it.each([
+    // needed, reach → side that binds
+    [
+      { low: -2.5, high: 2.5 },
+      { low: -4.98, high: 3.5 },
+      { margin: 1, side: "high", needed: 2.5, reached: 3.5 },
+    ],
+    [
+      { low: -2.5, high: 2.5 },
+      { low: 0.02, high: 3.5 },
+      { margin: -2.52, side: "low", needed: -2.5, reached: 0.02 },
+    ],
+    [
+      { low: -1, high: 1 },
+      { low: -2, high: 2 },
+      { margin: 1, side: "low", needed: -1, reached: -2 },
+    ], // a tie names the low side
+  ] as const)("needed %j within %j", (needed, reach, expected) => {
+    const m = rangeMargin(needed, reach);
+    expect({ ...m, margin: Number(m.margin.toFixed(9)) }).toEqual(expected);
+  });
+});
+
+describe("railPhrase and driftSpanC", () => {
+  it("names the rail that binds", () => {
+    expect(railPhrase("high", { positive_v: 5, negative_v: -4.18 })).toBe("at V+ = 5.00 V");
+    expect(railPhrase("low", { positive_v: 5, negative_v: -4.18 })).toBe("with V− = −4.18 V");
+  });
+
+  it.each([
+    [0, 50, 25],
+    [-40, 85, 65],
+    [25, 25, 0],
+    [30, 125, 100],
+  ])("temperature %d…%d °C is %d °C from 25 °C at its far end", (min, max, span) => {
+    expect(driftSpanC(min, max)).toBe(span);
+  });
+});

@@ -1,0 +1,97 @@
+import { describe, expect, it } from "vitest";
+import { chooseDivider, ratioDeviation, theveninOhm } from "../../../src/core/math/divider.ts";
+import { seriesValues, type SeriesName } from "../../../src/core/math/e-series.ts";
+
+// Brute force over every pair, written straight from SPEC §6, to check the search.
+function bruteForce(target: number, total: number, series: SeriesName) {
+  let best: { top_ohm: number; bottom_ohm: number; ratio: number; total_ohm: number } | undefined;
+  const values = seriesValues(series);
+  for (const r1 of values) {
+    for (const r2 of values) {
+      const sum = r1 + r2;
+      if (sum < 0.5 * total || sum > 2 * total) continue;
+      const k = r2 / sum;
+      if (k > target * (1 + 1e-12)) continue;
+      const dist = Math.abs(Math.log(sum / total));
+      if (
+        !best ||
+        k > best.ratio * (1 + 1e-12) ||
+        (Math.abs(k - best.ratio) <= best.ratio * 1e-12 && dist < Math.abs(Math.log(best.total_ohm / total)))
+      ) {
+        best = { top_ohm: r1, bottom_ohm: r2, ratio: k, total_ohm: sum };
+      }
+    }
+  }
+  return best;
+}
+
+describe("chooseDivider (SPEC §6, IEC 60063 values)", () => {
+  // Issue 3 acceptance: 10 V peak into a 2.5 V window, E24, 100 kΩ target total.
+  it("10 V into 2.5 V from E24 with a 100 kΩ target is 39 kΩ over 13 kΩ, k = 0.25", () => {
+    expect(chooseDivider(2.5 / 10, 100e3, "E24")).toEqual({
+      top_ohm: 39000,
+      bottom_ohm: 13000,
+      ratio: 0.25,
+      total_ohm: 52000,
+    });
+  });
+
+  it("needs no divider when the window already holds the peak", () => {
+    expect(chooseDivider(1, 100e3, "E24")).toBeNull();
+    expect(chooseDivider(1.5, 100e3, "E96")).toBeNull();
+  });
+
+  it("returns undefined when no pair lies between half and twice the total", () => {
+    expect(chooseDivider(0.25, 4, "E24")).toBeUndefined(); // 2 Ω … 8 Ω: below the 10 Ω table
+    expect(chooseDivider(0.25, 1e9, "E24")).toBeUndefined();
+  });
+
+  it.each([
+    [0.25, 100e3, "E24"],
+    [0.2, 100e3, "E24"],
+    [1 / 3, 10e3, "E12"],
+    [2 / 3, 100e3, "E96"],
+    [0.1, 1e6, "E96"],
+    [0.05, 20e3, "E24"],
+    [0.7, 47e3, "E12"],
+    [2.5 / 48, 1e6, "E24"],
+    [1 / 15, 220e3, "E96"],
+  ] as const)("k_t = %d, total %d Ω, %s: same as a brute-force search, k ≤ target", (target, total, series) => {
+    const chosen = chooseDivider(target, total, series);
+    expect(chosen).toEqual(bruteForce(target, total, series));
+    expect(chosen?.ratio).toBeLessThanOrEqual(target * (1 + 1e-12));
+  });
+});
+
+describe("theveninOhm ((Rs + R1) ‖ R2; REFERENCES.md, Divider)", () => {
+  it.each([
+    // REFERENCES.md, Divider: 30k/10k gives R_th = 7.5 kΩ.
+    [0, { top_ohm: 30000, bottom_ohm: 10000, ratio: 0.25, total_ohm: 40000 }, 7500],
+    // (Rs + R1) ‖ R2 = 40k · 13k / 53k
+    [1000, { top_ohm: 39000, bottom_ohm: 13000, ratio: 0.25, total_ohm: 52000 }, (40000 * 13000) / 53000],
+    [600, null, 600],
+  ])("Rs = %d Ω, divider %j → %d Ω", (rs, divider, expected) => {
+    expect(theveninOhm(rs, divider)).toBeCloseTo(expected, 9);
+  });
+});
+
+describe("ratioDeviation (exact worst case, both resistors ±t; REFERENCES.md, Divider)", () => {
+  it.each([
+    [30000, 10000, 0.01, 1.5075, -1.4925],
+    [20000, 10000, 0.05, 6.7797, -6.5574],
+  ])("%d/%d at ±%d: %d % / %d %", (r1, r2, t, high, low) => {
+    const k = r2 / (r1 + r2);
+    const d = ratioDeviation(k, t);
+    expect(d.high * 100).toBeCloseTo(high, 4);
+    expect(d.low * 100).toBeCloseTo(low, 4);
+    // The same numbers from the worst corners of the resistors themselves.
+    const kMax = (r2 * (1 + t)) / (r1 * (1 - t) + r2 * (1 + t));
+    const kMin = (r2 * (1 - t)) / (r1 * (1 + t) + r2 * (1 - t));
+    expect(d.high).toBeCloseTo(kMax / k - 1, 12);
+    expect(d.low).toBeCloseTo(kMin / k - 1, 12);
+  });
+
+  it("is zero without a divider", () => {
+    expect(ratioDeviation(1, 0.05)).toEqual({ high: 0, low: 0 });
+  });
+});
