@@ -2,7 +2,7 @@
 // only then swap it in for dist/, so a failed build never touches the last
 // good site (issue: nothing lost).
 import { spawnSync } from "node:child_process";
-import { existsSync, renameSync, rmSync } from "node:fs";
+import { existsSync, mkdirSync, readFileSync, renameSync, rmSync, writeFileSync } from "node:fs";
 import { resolve } from "node:path";
 import { formatProblem } from "../src/core/problems.ts";
 import { loadDataSet } from "../src/node/load-data.ts";
@@ -22,11 +22,15 @@ if (problems.length > 0) {
 
 rmSync(scratch, { recursive: true, force: true });
 const astro = resolve(root, "node_modules/astro/bin/astro.mjs");
+// Astro keeps intermediate files in the project's .astro/ whatever the output
+// folder, so two builds at once (tests build several sites) must take turns.
+const release = acquireLock(resolve(root, ".astro/railsieve-build.lock"));
 const run = spawnSync(process.execPath, [astro, "build", "--silent"], {
   cwd: root,
   stdio: "inherit",
   env: { ...process.env, RAILSIEVE_OUT: scratch, RAILSIEVE_DATA: dataDir, ASTRO_TELEMETRY_DISABLED: "1" },
 });
+release();
 if (run.status !== 0) {
   rmSync(scratch, { recursive: true, force: true });
   console.error("railsieve: the site build failed; the previous site in dist/ is unchanged");
@@ -37,3 +41,42 @@ if (existsSync(outDir)) renameSync(outDir, old);
 renameSync(scratch, outDir);
 rmSync(old, { recursive: true, force: true });
 console.log(`railsieve: site built in ${outDir}`);
+
+/** A lock folder holding the owner's pid; a lock whose owner has died is taken over. */
+function acquireLock(lock: string): () => void {
+  const deadline = Date.now() + 10 * 60_000;
+  const pause = new Int32Array(new SharedArrayBuffer(4));
+  mkdirSync(resolve(lock, ".."), { recursive: true });
+  for (;;) {
+    try {
+      mkdirSync(lock);
+      writeFileSync(resolve(lock, "pid"), String(process.pid));
+      return () => rmSync(lock, { recursive: true, force: true });
+    } catch {
+      if (!ownerAlive(lock)) {
+        rmSync(lock, { recursive: true, force: true });
+        continue;
+      }
+      if (Date.now() > deadline) {
+        console.error(`railsieve: another build holds ${lock}; remove it if no build is running`);
+        process.exit(1);
+      }
+      Atomics.wait(pause, 0, 0, 200);
+    }
+  }
+}
+
+function ownerAlive(lock: string): boolean {
+  let pid: number;
+  try {
+    pid = Number(readFileSync(resolve(lock, "pid"), "utf8"));
+  } catch {
+    return true; // just created, pid not written yet
+  }
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch {
+    return false;
+  }
+}

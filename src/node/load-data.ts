@@ -4,6 +4,7 @@ import { readdirSync, readFileSync, statSync } from "node:fs";
 import { basename, join, relative } from "node:path";
 import { buildCatalogue, KINDS, parseCatalogueText, type Catalogue, type ParsedFile } from "../core/catalogue.ts";
 import { checkDesignSet, parseDesignText, type DesignFile } from "../core/designs.ts";
+import { evaluateDesign } from "../core/engine/evaluate.ts";
 import type { Problem } from "../core/problems.ts";
 import { decodeUtf8 } from "../core/text-decoding.ts";
 
@@ -17,6 +18,14 @@ export function displayPath(path: string): string {
   return rel.startsWith("..") || rel === "" ? path : rel;
 }
 
+// The system's error codes, said the way a user would fix them.
+const READ_ERRORS: Readonly<Record<string, string>> = {
+  ENOENT: "file not found (expected it to exist)",
+  EISDIR: "is a folder (expected a file)",
+  ENOTDIR: "a part of this path is a file, not a folder (expected --data to name a folder)",
+  EACCES: "cannot be read (permission denied; expected a readable file)",
+};
+
 export function readText(path: string): { text?: string; problem?: Problem } {
   const file = displayPath(path);
   let bytes: Uint8Array;
@@ -25,7 +34,7 @@ export function readText(path: string): { text?: string; problem?: Problem } {
     bytes = readFileSync(path);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    return { problem: { file, message: code === "ENOENT" ? "file not found (expected it to exist)" : `cannot be read (${code ?? "unknown error"})` } };
+    return { problem: { file, message: READ_ERRORS[code ?? ""] ?? `cannot be read (${code ?? "unknown error"})` } };
   }
   const decoded = decodeUtf8(bytes, file);
   return decoded.ok ? { text: decoded.text } : { problem: decoded.problem };
@@ -80,5 +89,21 @@ export function loadDataSet(dir: string): DataSet {
       nameProblems.push({ file: d.file, path: "id", message: `id does not match the file name (got '${d.design.id}', expected '${basename(d.file, ".json")}')` });
     }
   }
-  return { catalogue, designs, problems: [...catalogueProblems, ...designProblems, ...nameProblems] };
+  const problems = [...catalogueProblems, ...designProblems, ...nameProblems];
+  // Only a clean set is worth evaluating: a row left out for its own problem would
+  // show up again as "BOM names no part".
+  return { catalogue, designs, problems: problems.length > 0 ? problems : designProblemsOf(designs, catalogue) };
+}
+
+/**
+ * What only the engine can see in otherwise valid files (a BOM id naming no part
+ * or the wrong kind, a charge pump past collapse): `check` stops on these, so
+ * `validate` and the site build must too (issue 8: the build stops before dist/).
+ */
+export function designProblemsOf(designs: readonly DesignFile[], catalogue: Catalogue): Problem[] {
+  return designs.flatMap((d) => {
+    if (!d.design) return [];
+    const evaluation = evaluateDesign(d.design, catalogue);
+    return evaluation.ok ? [] : evaluation.problems.map((p) => ({ file: d.file, path: p.path, message: p.message }));
+  });
 }

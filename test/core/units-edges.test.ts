@@ -24,12 +24,18 @@ function expectSensible(text: string): void {
 }
 
 describe("the sense check itself", () => {
-  it.each(["−0.00 V", "-0 V", "at −0 V", "NaN V", "Infinity Hz", "−∞ V", "1e-12 A", "2.5E+9 Hz", "undefined V"])("rejects %j", (text) => {
-    expect(UNSENSIBLE.some((p) => p.test(text))).toBe(true);
-  });
-  it.each(["−0.01 V", "0.00 V", "−0.0000157 V/µs", "1.00 pA", "+2.50 V", "E24 series", "10-bit"])("accepts %j", (text) => {
-    expect(UNSENSIBLE.some((p) => p.test(text))).toBe(false);
-  });
+  it.each(["−0.00 V", "-0 V", "at −0 V", "NaN V", "Infinity Hz", "−∞ V", "1e-12 A", "2.5E+9 Hz", "undefined V"])(
+    "rejects %j",
+    (text) => {
+      expect(UNSENSIBLE.some((p) => p.test(text))).toBe(true);
+    },
+  );
+  it.each(["−0.01 V", "0.00 V", "−0.0000157 V/µs", "1.00 pA", "+2.50 V", "E24 series", "10-bit"])(
+    "accepts %j",
+    (text) => {
+      expect(UNSENSIBLE.some((p) => p.test(text))).toBe(false);
+    },
+  );
 });
 
 describe("formatSI at the edges of a catalogue", () => {
@@ -130,12 +136,23 @@ describe("a whole evaluation with edge values", () => {
     slew_v_per_us: 3000,
     iq_ma: 10,
   });
-  const catalogue = catalogueFromParts([edge, opAmp({ id: "oa-plain" }), comparator(), diode({ id: "d-low-leak", ir_na: "1m" })]);
+  const catalogue = catalogueFromParts([
+    edge,
+    opAmp({ id: "oa-plain" }),
+    comparator(),
+    diode({ id: "d-low-leak", ir_na: "1m" }),
+  ]);
   const probe = design({
     id: "edge-probe",
     supply: { positive_v: 5, negative: { kind: "fixed", v: -5 } },
     signal: { peak_v: 0.5, max_frequency_hz: 5, source_ohm: "100M" },
-    front_end: { window_v: 1, divider_total_ohm: "1M", resistor_tolerance: 0.001, series: "E96", rectifier_load_ohm: "100k" },
+    front_end: {
+      window_v: 1,
+      divider_total_ohm: "1M",
+      resistor_tolerance: 0.001,
+      series: "E96",
+      rectifier_load_ohm: "100k",
+    },
     accuracy: { required_v: "1m" },
     temperature: { min_c: 15, max_c: 35 },
   });
@@ -163,8 +180,14 @@ describe("a whole evaluation with edge values", () => {
     const reason = (rule: string) => part?.findings.find((f) => f.rule === rule)?.reason;
     // 5 µV + 10 nV/°C × 10 °C = 5.10 µV, plus 1 pA × 100 MΩ = 100 µV: 105 µV (no divider, k = 1),
     // against offset_share 0.25 × 1 mV = 250 µV.
-    expect(reason("offset")).toMatchInlineSnapshot(`"adds 105 µV at the input (5.10 µV offset incl. 100 nV drift + 1.00 pA × 100 MΩ); the limit is 250 µV: 145 µV to spare"`);
-    expect(reason("bandwidth")).toMatchInlineSnapshot(`"at 5.00 Hz with fc = 1.50 GHz (GBW 1.50 GHz ÷ noise gain 1) the gain falls short by 0.00278 fV of the 500 mV peak; the limit is 250 µV: 250 µV to spare"`);
-    expect(reason("slew-rate")).toMatchInlineSnapshot(`"needs 0.0000157 V/µs (2π × 5.00 Hz × 500 mV); slews 3000 V/µs: 3000 V/µs to spare"`);
+    expect(reason("offset")).toMatchInlineSnapshot(
+      `"adds 105 µV at the input (5.10 µV offset incl. 100 nV drift + 1.00 pA × 100 MΩ); the limit is 250 µV: 145 µV to spare"`,
+    );
+    expect(reason("bandwidth")).toMatchInlineSnapshot(
+      `"at 5.00 Hz with fc = 1.50 GHz (GBW 1.50 GHz ÷ noise gain 1) the gain falls short by 0.00278 fV of the 500 mV peak; the limit is 250 µV: 250 µV to spare"`,
+    );
+    expect(reason("slew-rate")).toMatchInlineSnapshot(
+      `"needs 0.0000157 V/µs (2π × 5.00 Hz × 500 mV); slews 3000 V/µs: 3000 V/µs to spare"`,
+    );
   });
 });

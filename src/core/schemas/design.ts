@@ -3,6 +3,7 @@
 // Design the cleaned value with policy defaults filled in.
 import { z } from "zod";
 import { ID_PATTERN } from "./cells.ts";
+import { closest } from "../problems.ts";
 import { parseSI } from "../units.ts";
 
 type Range = { above?: number; min?: number; max?: number; below?: number; integer?: boolean };
@@ -161,7 +162,8 @@ const bom = z
   .record(
     z.string().transform((key, ctx): Role => {
       if ((ROLES as readonly string[]).includes(key)) return key as Role;
-      ctx.addIssue({ code: "custom", message: `unknown role (got '${key}', expected one of ${ROLES.join(", ")})` });
+      const guess = closest(key, ROLES);
+      ctx.addIssue({ code: "custom", message: `unknown role (got '${key}', expected ${guess ? `'${guess}'` : `one of ${ROLES.join(", ")}`})` });
       return z.NEVER;
     }),
     designId,

@@ -145,6 +145,18 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
         ],
       };
     }
+    // Below collapse the mean rail is negative, but ripple can still lift its worst case to 0 V or above.
+    if (rail.worst_v >= 0) {
+      return {
+        ok: false,
+        problems: [
+          {
+            path: "supply.negative.reservoir_cap_f",
+            message: `ripple lifts the pumped rail to ${formatVolts(rail.worst_v, { signed: true })} at its worst (got ${formatSI(neg.reservoir_cap_f, "F")}, expected a reservoir large enough that V−_dc + ripple/2 stays below 0 V; ripple is ${formatSI(rail.ripple_v, "V")} p-p)`,
+          },
+        ],
+      };
+    }
     negative_v = rail.worst_v;
     negativeDerived = { kind: "charge-pump", diode: pumpDiode, ...rail };
   } else if (neg.kind === "fixed") {
