@@ -10,5 +10,7 @@ export default defineConfig({
   trailingSlash: "ignore",
   build: { format: "directory", inlineStylesheets: "never" },
   devToolbar: { enabled: false },
+  // Small scripts would otherwise be inlined, and the site's CSP allows no inline script.
+  vite: { build: { assetsInlineLimit: 0 } },
   telemetry: false,
 });

@@ -145,17 +145,12 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
         ],
       };
     }
-    // Below collapse the mean rail is negative, but ripple can still lift its worst case to 0 V or above.
+    // Below collapse the mean rail is negative, but ripple can still lift its worst
+    // case to 0 V or above; every check then sees no negative rail, and says so.
     if (rail.worst_v >= 0) {
-      return {
-        ok: false,
-        problems: [
-          {
-            path: "supply.negative.reservoir_cap_f",
-            message: `ripple lifts the pumped rail to ${formatVolts(rail.worst_v, { signed: true })} at its worst (got ${formatSI(neg.reservoir_cap_f, "F")}, expected a reservoir large enough that V−_dc + ripple/2 stays below 0 V; ripple is ${formatSI(rail.ripple_v, "V")} p-p)`,
-          },
-        ],
-      };
+      notes.push(
+        `Ripple of ${formatSI(rail.ripple_v, "V")} p-p lifts the pumped rail to ${formatVolts(rail.worst_v, { signed: true })} at its worst: there is no negative rail. A larger reservoir capacitor or a lighter load would restore it.`,
+      );
     }
     negative_v = rail.worst_v;
     negativeDerived = { kind: "charge-pump", diode: pumpDiode, ...rail };
@@ -199,7 +194,7 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
       {
         stage: "diode",
         label: "the clamp diode",
-        reverse_v: Math.abs(negative_v),
+        reverse_v: Math.max(0, -negative_v),
         reverse_what: "|V−|, when the comparator output sits low",
         leakage_ohm: design.logic.pull_down_ohm,
         leakage_limit_v: design.logic.vil_v,

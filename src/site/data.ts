@@ -1,0 +1,49 @@
+// Build-time data for every page: the data folder is read and each design
+// evaluated once per build, then shared by the home, part and design pages
+// (module scope lives as long as the build's page renderer).
+import { resolve } from "node:path";
+import type { Catalogue } from "../core/catalogue.ts";
+import { evaluateDesign } from "../core/engine/evaluate.ts";
+import { formatProblem } from "../core/problems.ts";
+import { loadDataSet } from "../node/load-data.ts";
+import type { DesignEntry } from "./design-entry.ts";
+
+export type SiteData = {
+  dataDir: string;
+  catalogue: Catalogue;
+  designs: DesignEntry[];
+  builtAt: Date;
+};
+
+let cached: SiteData | undefined;
+
+/** Reads RAILSIEVE_DATA (default ./data) and evaluates every design, once. */
+export function siteData(): SiteData {
+  if (cached) return cached;
+  const dataDir = resolve(process.env.RAILSIEVE_DATA ?? "data");
+  const set = loadDataSet(dataDir);
+  if (set.problems.length > 0) {
+    // scripts/build.ts validates first; this guards `astro dev` and direct `astro build`.
+    throw new Error(
+      `railsieve: the data in ${dataDir} has ${set.problems.length} problem(s):\n${set.problems.map(formatProblem).join("\n")}`,
+    );
+  }
+  const designs: DesignEntry[] = [];
+  for (const file of set.designs) {
+    if (!file.design) continue;
+    designs.push({
+      id: file.design.id,
+      file: file.file,
+      design: file.design,
+      evaluation: evaluateDesign(file.design, set.catalogue),
+    });
+  }
+  cached = { dataDir, catalogue: set.catalogue, designs, builtAt: buildDate() };
+  return cached;
+}
+
+// SOURCE_DATE_EPOCH (reproducible-builds.org) pins the date so two builds of the same data are identical.
+function buildDate(): Date {
+  const epoch = Number(process.env.SOURCE_DATE_EPOCH);
+  return Number.isFinite(epoch) && epoch > 0 ? new Date(epoch * 1000) : new Date();
+}

@@ -1,0 +1,55 @@
+// The one-line state of a design for the home page and the design page head.
+import { designHolds } from "../core/engine/result.ts";
+import type { Role } from "../core/schemas/design.ts";
+import type { DesignEntry } from "./design-entry.ts";
+import { ROLE_NAMES } from "./roles.ts";
+
+export type RoleState = {
+  role: Role;
+  name: string;
+  fits: number;
+  total: number;
+  chosen?: string;
+  bomFails: boolean;
+  optional: boolean;
+};
+
+export type DesignSummary =
+  { ok: false; line: string } | { ok: true; holds: boolean; line: string; roles: RoleState[] };
+
+export function summarizeDesign(entry: DesignEntry): DesignSummary {
+  if (!entry.evaluation.ok) {
+    const n = entry.evaluation.problems.length;
+    return { ok: false, line: `Could not be evaluated: ${n} problem${n === 1 ? "" : "s"} in the design file.` };
+  }
+  const result = entry.evaluation.result;
+  const roles: RoleState[] = result.roles.map((r) => ({
+    role: r.role,
+    name: ROLE_NAMES[r.role],
+    fits: r.fits.length,
+    total: r.fits.length + r.rejected.length,
+    ...(r.chosen !== undefined ? { chosen: r.chosen } : {}),
+    bomFails: r.bom !== undefined && !r.fits.some((p) => p.part.id === r.bom),
+    optional: r.optional === true,
+  }));
+  const empty = roles.filter((r) => r.fits === 0 && !r.optional).map((r) => r.name.toLowerCase());
+  const bad = roles.filter((r) => r.bomFails).map((r) => `${r.chosen ?? "?"} (${r.name.toLowerCase()})`);
+  const holds = designHolds(result);
+  const problems: string[] = [];
+  if (empty.length > 0) problems.push(`no part fits the ${list(empty)}`);
+  if (bad.length > 0)
+    problems.push(`BOM part${bad.length === 1 ? "" : "s"} ${list(bad)} ${bad.length === 1 ? "does" : "do"} not fit`);
+  const line = holds
+    ? "Every role has a fit and every BOM part fits."
+    : `${capitalize(problems.join("; ") || "the design does not hold")}.`;
+  return { ok: true, holds, line, roles };
+}
+
+function list(items: string[]): string {
+  if (items.length <= 1) return items.join("");
+  return `${items.slice(0, -1).join(", ")} and ${items[items.length - 1]}`;
+}
+
+function capitalize(s: string): string {
+  return s.charAt(0).toUpperCase() + s.slice(1);
+}

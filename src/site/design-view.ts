@@ -1,0 +1,194 @@
+// What a design page lists as the design's inputs and its derived values,
+// as label/value rows, so the page stays markup and the numbers stay testable.
+import type { Derived, DesignResult } from "../core/engine/result.ts";
+import { POLICY_DEFAULTS, type Design, type Policy, type Role } from "../core/schemas/design.ts";
+import { formatSI, formatVolts } from "../core/units.ts";
+import { trimZeros } from "../render/trim-zeros.ts";
+
+export type ValueRow = { label: string; value: string; partId?: string; role?: Role };
+export type ValueGroup = { title: string; rows: ValueRow[] };
+
+/** SI with a prefix and no padding zeros: "100 kΩ", "1 µF", "19.5 mV". */
+export const si = (value: number, unit: string) => trimZeros(formatSI(value, unit));
+/** What the design file says, to six digits: a 4.096 V reference stays 4.096 V. */
+const given = (value: number, unit: string) => trimZeros(formatSI(value, unit, { digits: 6 }));
+const celsius = (c: number) => `${String(c).replace("-", "\u2212")}\u00a0°C`;
+const signed = (v: number) => formatVolts(v, { signed: true });
+const percent = (fraction: number) => `${Number((fraction * 100).toPrecision(3))} %`;
+const ratio = (k: number) => String(Number(k.toPrecision(4)));
+
+export const HIGH_VOLTAGE_V = 30;
+
+/** SPEC §9: a visible caution above extra-low-voltage levels. */
+export function needsCaution(design: Design): boolean {
+  return design.signal.peak_v > HIGH_VOLTAGE_V;
+}
+
+export const CAUTION_TEXT =
+  "Voltages above extra-low-voltage limits need isolation and protection designed to local codes and licensed practice, which this guide does not assess.";
+
+const POLICY_LABELS: Readonly<Record<keyof Policy, string>> = {
+  headroom_margin_v: "Headroom margin",
+  marginal_fraction: "Marginal fraction",
+  offset_share: "Offset share",
+  speed_share: "Speed share",
+  sign_share: "Sign share",
+  timing_fraction: "Timing fraction",
+  allow_unrated: "Allow unrated",
+};
+
+function policyValue(key: keyof Policy, value: Policy[keyof Policy]): string {
+  if (typeof value === "boolean") return value ? "yes" : "no";
+  if (key === "headroom_margin_v") return given(value, "V");
+  return `${percent(value)} (${value})`;
+}
+
+export function inputGroups(design: Design): ValueGroup[] {
+  const neg = design.supply.negative;
+  const negative =
+    neg.kind === "ground"
+      ? "ground (0 V)"
+      : neg.kind === "fixed"
+        ? `fixed ${signed(neg.v)}`
+        : `charge pump driven with ${given(neg.drive_v, "V")} at ${given(neg.frequency_hz, "Hz")}, flying ${given(neg.flying_cap_f, "F")}, reservoir ${given(neg.reservoir_cap_f, "F")}, load ${given(neg.load_a, "A")}`;
+  const groups: ValueGroup[] = [
+    {
+      title: "Signal",
+      rows: [
+        { label: "Peak", value: `±${given(design.signal.peak_v, "V")}` },
+        { label: "Highest frequency", value: given(design.signal.max_frequency_hz, "Hz") },
+        { label: "Source resistance", value: given(design.signal.source_ohm, "Ω") },
+      ],
+    },
+    {
+      title: "Supply",
+      rows: [
+        { label: "V+", value: signed(design.supply.positive_v) },
+        { label: "V−", value: negative },
+      ],
+    },
+    {
+      title: "Front end",
+      rows: [
+        { label: "ADC window asked for", value: given(design.front_end.window_v, "V") },
+        { label: "Divider total asked for", value: given(design.front_end.divider_total_ohm, "Ω") },
+        { label: "Resistor tolerance", value: percent(design.front_end.resistor_tolerance) },
+        { label: "Resistor series", value: design.front_end.series },
+        { label: "Rectifier resistors", value: given(design.front_end.rectifier_load_ohm, "Ω") },
+      ],
+    },
+    {
+      title: "ADC",
+      rows: [
+        { label: "Resolution", value: `${design.adc.bits} bits` },
+        {
+          label: "Reference",
+          value: `${given(design.adc.reference_v, "V")} ± ${percent(design.adc.reference_tolerance)}`,
+        },
+      ],
+    },
+    {
+      title: "Logic input",
+      rows: [
+        { label: "Logic supply V_DD", value: given(design.logic.vdd_v, "V") },
+        { label: "V_IH / V_IL", value: `${given(design.logic.vih_v, "V")} / ${given(design.logic.vil_v, "V")}` },
+        { label: "Level shift", value: design.logic.level_shift },
+        { label: "Pull-down", value: given(design.logic.pull_down_ohm, "Ω") },
+      ],
+    },
+    {
+      title: "Accuracy and temperature",
+      rows: [
+        { label: "Required accuracy at the input", value: given(design.accuracy.required_v, "V") },
+        {
+          label: "Temperature range",
+          value: `${celsius(design.temperature.min_c)} to ${celsius(design.temperature.max_c)}`,
+        },
+      ],
+    },
+    {
+      title: "Policy",
+      rows: (Object.keys(POLICY_DEFAULTS) as (keyof Policy)[]).map((key) => {
+        const value = design.policy[key];
+        const set = value !== POLICY_DEFAULTS[key];
+        return {
+          label: POLICY_LABELS[key],
+          value: `${policyValue(key, value)}${set ? ", set in the design" : ", default"}`,
+        };
+      }),
+    },
+  ];
+  const bom = Object.entries(design.bom) as [Role, string][];
+  if (bom.length > 0)
+    groups.push({ title: "BOM", rows: bom.map(([role, id]) => ({ label: role, value: id, partId: id, role })) });
+  return groups;
+}
+
+function railRows(derived: Derived): ValueRow[] {
+  const rows: ValueRow[] = [{ label: "V+", value: signed(derived.rails.positive_v) }];
+  const n = derived.negative;
+  if (n.kind === "charge-pump") {
+    rows.push(
+      {
+        label: "Pump diode",
+        value: `${n.diode.id}, ${formatVolts(n.diode.vf_v)} at ${si(n.diode.current_a, "A")}`,
+        partId: n.diode.id,
+        role: "pump-diode",
+      },
+      { label: "V− with no load = −(drive − 2·Vf)", value: signed(n.no_load_v) },
+      { label: "Droop = I / (f · C_flying)", value: si(n.droop_v, "V") },
+      { label: "V− at load, average", value: signed(n.dc_v) },
+      { label: "Ripple = I / (f · C_reservoir), peak to peak", value: si(n.ripple_v, "V") },
+      { label: "V− used by every check = average + ripple / 2", value: signed(n.worst_v) },
+      { label: "Load at which the pump collapses", value: si(n.collapse_a, "A") },
+    );
+  } else {
+    rows.push({
+      label: n.kind === "ground" ? "V− (ground)" : "V− (fixed supply)",
+      value: signed(derived.rails.negative_v),
+    });
+  }
+  return rows;
+}
+
+export function derivedGroups(result: DesignResult): ValueGroup[] {
+  const d = result.derived;
+  const divider: ValueRow[] = d.divider
+    ? [
+        { label: "Target ratio = window ÷ peak", value: ratio(d.target_ratio) },
+        { label: `Top resistor R1 (${result.design.front_end.series})`, value: si(d.divider.top_ohm, "Ω") },
+        { label: `Bottom resistor R2 (${result.design.front_end.series})`, value: si(d.divider.bottom_ohm, "Ω") },
+        { label: "Ratio k = R2 / (R1 + R2)", value: ratio(d.divider.ratio) },
+        { label: "Total R1 + R2", value: si(d.divider.total_ohm, "Ω") },
+      ]
+    : [{ label: "Divider", value: "none: the peak already fits the window (k = 1)" }];
+  const signal: ValueRow[] = [
+    { label: "Window used W = k · peak", value: `±${formatVolts(d.window_v)}` },
+    { label: "Resistance seen by the buffer (Rs + R1) ‖ R2", value: si(d.thevenin_ohm, "Ω") },
+    { label: "One ADC step at the input", value: si(d.adc_step_at_input_v, "V") },
+  ];
+  const diodes: ValueRow[] = [];
+  if (d.rectifier_diode) {
+    diodes.push({
+      label: "Rectifier diode drop",
+      value: `${d.rectifier_diode.id}, ${formatVolts(d.rectifier_diode.vf_v)} at ${si(d.rectifier_diode.current_a, "A")}`,
+      partId: d.rectifier_diode.id,
+      role: "rectifier-diode",
+    });
+  }
+  if (d.clamp_diode) {
+    diodes.push({
+      label: "Clamp diode drop",
+      value: `${d.clamp_diode.id}, ${formatVolts(d.clamp_diode.vf_v)} at ${si(d.clamp_diode.current_a, "A")}`,
+      partId: d.clamp_diode.id,
+      role: "clamp-diode",
+    });
+  }
+  const groups: ValueGroup[] = [
+    { title: "Rails", rows: railRows(d) },
+    { title: "Divider", rows: divider },
+    { title: "Signal at the ADC side", rows: signal },
+  ];
+  if (diodes.length > 0) groups.push({ title: "Diode drops in the signal chain", rows: diodes });
+  return groups;
+}

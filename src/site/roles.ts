@@ -1,0 +1,22 @@
+// Short names of the roles for headings and table columns.
+import type { PartKind } from "../core/catalogue.ts";
+import { RECTIFY_AND_SIGN_ROLES } from "../core/engine/topologies/rectify-and-sign.ts";
+import type { Role } from "../core/schemas/design.ts";
+
+export const ROLE_NAMES: Readonly<Record<Role, string>> = {
+  buffer: "Buffer",
+  rectifier: "Rectifier",
+  sign: "Sign comparator",
+  "pump-diode": "Pump diode",
+  "rectifier-diode": "Rectifier diode",
+  "clamp-diode": "Clamp diode",
+  "level-shift": "Level shift",
+  "reference-buffer": "Reference buffer",
+};
+
+/** Roles of the topologies the engine knows that take a part of this kind, in page order. */
+export function rolesTaking(kind: PartKind): Role[] {
+  return (Object.entries(RECTIFY_AND_SIGN_ROLES) as [Role, { kinds: PartKind[] }][])
+    .filter(([, spec]) => spec.kinds.includes(kind))
+    .map(([role]) => role);
+}

@@ -1,0 +1,147 @@
+// Inputs and derived values as the design page lists them. Expected numbers are
+// the worked values of REFERENCES.md (../shared), recomputed in the comments.
+import { describe, expect, it } from "vitest";
+import { catalogueFromParts } from "../../src/core/catalogue.ts";
+import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import type { DesignResult } from "../../src/core/engine/result.ts";
+import type { Design } from "../../src/core/schemas/design.ts";
+import { CAUTION_TEXT, derivedGroups, inputGroups, needsCaution, type ValueGroup } from "../../src/site/design-view.ts";
+import { design } from "../helpers/designs.ts";
+import { comparator, diode, opAmp } from "../helpers/parts.ts";
+
+// A diode of exactly 0.7 V at 1 mA, the silicon drop of the worked charge-pump example.
+const catalogue = catalogueFromParts([
+  opAmp(),
+  comparator({ supply_max_v: 36 }),
+  diode({ id: "d-07", vf_1ma_v: 0.7, vf_10ma_v: 0.8 }),
+]);
+
+function evaluate(d: Design): DesignResult {
+  const e = evaluateDesign(d, catalogue);
+  if (!e.ok) throw new Error(JSON.stringify(e.problems));
+  return e.result;
+}
+
+const rows = (groups: ValueGroup[], title: string) =>
+  Object.fromEntries(groups.find((g) => g.title === title)?.rows.map((r) => [r.label, r.value]) ?? []);
+
+describe("derivedGroups", () => {
+  it("shows the 30k/10k divider: k 0.25, R_th 7.5 kΩ (REFERENCES.md, Divider) and one ADC step at the input", () => {
+    const result = evaluate(design({ signal: { peak_v: 10, source_ohm: 0 }, front_end: { divider_total_ohm: 40000 } }));
+    const groups = derivedGroups(result);
+    expect(rows(groups, "Divider")).toEqual({
+      "Target ratio = window ÷ peak": "0.25",
+      "Top resistor R1 (E24)": "30 kΩ",
+      "Bottom resistor R2 (E24)": "10 kΩ",
+      "Ratio k = R2 / (R1 + R2)": "0.25",
+      "Total R1 + R2": "40 kΩ",
+    });
+    // IEEE Std 1241-2010: Q = 5 V / 2^10 = 4.8828 mV, ÷ k 0.25 = 19.53 mV at the input.
+    expect(rows(groups, "Signal at the ADC side")).toEqual({
+      "Window used W = k · peak": "±2.50 V",
+      "Resistance seen by the buffer (Rs + R1) ‖ R2": "7.5 kΩ",
+      "One ADC step at the input": "19.5 mV",
+    });
+  });
+
+  it("says there is no divider when the peak already fits the window", () => {
+    expect(rows(derivedGroups(evaluate(design())), "Divider")).toEqual({
+      Divider: "none: the peak already fits the window (k = 1)",
+    });
+  });
+
+  it("shows the pumped rail of the worked example: 5 V drive, 980 Hz, 1 µF, 0.7 V diodes, 1 mA (REFERENCES.md, charge pump)", () => {
+    const pump = {
+      kind: "charge-pump",
+      drive_v: 5,
+      frequency_hz: 980,
+      flying_cap_f: 1e-6,
+      reservoir_cap_f: 10e-6,
+      load_a: 0.001,
+    };
+    const result = evaluate(design({ supply: { negative: pump }, bom: { "pump-diode": "d-07" } }));
+    const rails = derivedGroups(result).find((g) => g.title === "Rails");
+    // No load −(5 − 1.4) = −3.60 V; droop 1 mA / (980 Hz · 1 µF) = 1.020 V; loaded −2.580 V;
+    // ripple 1 mA / (980 Hz · 10 µF) = 102 mV p-p; worst −2.580 + 0.051 = −2.529 V;
+    // collapse (5 − 1.4) · 980 · 1 µF = 3.528 mA.
+    expect(rails?.rows.map((r) => [r.label, r.value])).toEqual([
+      ["V+", "+5.00 V"],
+      ["Pump diode", "d-07, 0.70 V at 1 mA"],
+      ["V− with no load = −(drive − 2·Vf)", "−3.60 V"],
+      ["Droop = I / (f · C_flying)", "1.02 V"],
+      ["V− at load, average", "−2.58 V"],
+      ["Ripple = I / (f · C_reservoir), peak to peak", "102 mV"],
+      ["V− used by every check = average + ripple / 2", "−2.53 V"],
+      ["Load at which the pump collapses", "3.53 mA"],
+    ]);
+    expect(rails?.rows[1]).toEqual(expect.objectContaining({ partId: "d-07", role: "pump-diode" }));
+  });
+
+  it("names the diodes in the signal chain with their drop at the operating current", () => {
+    // Vf(250 µA) = 0.7 + 0.1 · log10(0.25) = 0.640 V; Vf(500 µA) = 0.670 V (SPEC §4 two-point model).
+    expect(rows(derivedGroups(evaluate(design())), "Diode drops in the signal chain")).toEqual({
+      "Rectifier diode drop": "d-07, 0.64 V at 250 µA",
+      "Clamp diode drop": "d-07, 0.67 V at 500 µA",
+    });
+  });
+});
+
+describe("inputGroups", () => {
+  it("lists the signal and the supply in SI", () => {
+    const groups = inputGroups(design({ signal: { peak_v: 48, max_frequency_hz: 200, source_ohm: 100 } }));
+    expect(rows(groups, "Signal")).toEqual({
+      Peak: "±48 V",
+      "Highest frequency": "200 Hz",
+      "Source resistance": "100 Ω",
+    });
+    expect(rows(groups, "Supply")).toEqual({ "V+": "+5.00 V", "V−": "fixed −5.00 V" });
+  });
+
+  it("shows what the file says to six digits, with a true minus sign", () => {
+    const groups = inputGroups(
+      design({
+        adc: { bits: 12, reference_v: 4.096, reference_tolerance: 0.001 },
+        temperature: { min_c: -20, max_c: 70 },
+      }),
+    );
+    expect(rows(groups, "ADC")).toEqual({ Resolution: "12 bits", Reference: "4.096 V ± 0.1 %" });
+    expect(rows(groups, "Accuracy and temperature")["Temperature range"]).toBe("−20\u00a0°C to 70\u00a0°C");
+  });
+
+  it("marks which policy values the design sets and which are defaults", () => {
+    const policy = rows(inputGroups(design({ policy: { headroom_margin_v: 0.2, allow_unrated: true } })), "Policy");
+    expect(policy).toEqual({
+      "Headroom margin": "200 mV, set in the design",
+      "Marginal fraction": "20 % (0.2), default",
+      "Offset share": "25 % (0.25), default",
+      "Speed share": "25 % (0.25), default",
+      "Sign share": "50 % (0.5), default",
+      "Timing fraction": "1 % (0.01), default",
+      "Allow unrated": "yes, set in the design",
+    });
+  });
+
+  it("lists the BOM with links to the parts only when there is one", () => {
+    expect(inputGroups(design()).some((g) => g.title === "BOM")).toBe(false);
+    const bom = inputGroups(design({ bom: { buffer: "oa-test" } })).find((g) => g.title === "BOM");
+    expect(bom?.rows).toEqual([{ label: "buffer", value: "oa-test", partId: "oa-test", role: "buffer" }]);
+  });
+});
+
+describe("needsCaution", () => {
+  // SPEC §9: a caution for designs whose peak_v exceeds 30 V.
+  it.each([
+    [29.9, false],
+    [30, false],
+    [30.1, true],
+    [48, true],
+  ])("peak %d V → %s", (peak, expected) => {
+    expect(needsCaution(design({ signal: { peak_v: peak } }))).toBe(expected);
+  });
+
+  it("words the caution as the spec does", () => {
+    expect(CAUTION_TEXT).toMatchInlineSnapshot(
+      `"Voltages above extra-low-voltage limits need isolation and protection designed to local codes and licensed practice, which this guide does not assess."`,
+    );
+  });
+});

@@ -1,0 +1,339 @@
+// The built site (issue 4 acceptance): one build of the demo data per run, under
+// a sub-folder base path, then every file is read back. No broken internal link
+// or fragment, no reference to another host, nothing the Content-Security-Policy
+// would block (inline script, style attribute, <style>), one h1 per page, and the
+// pages the issue asks for with the numbers the engine computed.
+import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join, relative, resolve, sep } from "node:path";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import type { RoleResult } from "../../src/core/engine/result.ts";
+import { loadDataSet } from "../../src/node/load-data.ts";
+import { escapeHtml } from "../../src/render/escape.ts";
+import { CAUTION_TEXT } from "../../src/site/design-view.ts";
+import { RULES } from "../../rules/index.ts";
+import { buildSite } from "../e2e/harness/build-site.ts";
+
+const BASE = "/guide/";
+const ORIGIN = "http://railsieve.test";
+const DATA = resolve(import.meta.dirname, "../../data");
+const CSP =
+  "default-src 'self'; script-src 'self'; style-src 'self'; img-src 'self' data:; connect-src 'self'; object-src 'none'; base-uri 'self'; form-action 'self'";
+
+type Site = { dir: string; files: string[]; html: Map<string, string> };
+let tmp: string;
+let site: Site;
+const data = loadDataSet(DATA);
+
+/** The few entities Astro writes inside attribute values. */
+function decode(text: string): string {
+  return text
+    .replace(/&quot;/g, '"')
+    .replace(/&#39;/g, "'")
+    .replace(/&#x27;/g, "'")
+    .replace(/&lt;/g, "<")
+    .replace(/&gt;/g, ">")
+    .replace(/&amp;/g, "&");
+}
+
+function walk(dir: string): string[] {
+  return readdirSync(dir, { withFileTypes: true }).flatMap((e) =>
+    e.isDirectory() ? walk(join(dir, e.name)) : [join(dir, e.name)],
+  );
+}
+
+/** The address a file is served at: dist/parts/x/index.html → /guide/parts/x/. */
+function addressOf(file: string): string {
+  const rel = relative(site.dir, file).split(sep).join("/");
+  return BASE + rel.replace(/(^|\/)index\.html$/, "$1");
+}
+
+/** The file a local address serves, as a plain static server would (directory → index.html). */
+function fileFor(pathname: string): string | undefined {
+  const rel = decodeURIComponent(pathname.slice(BASE.length));
+  const candidates = rel === "" || rel.endsWith("/") ? [`${rel}index.html`] : [rel, `${rel}/index.html`];
+  return candidates.map((c) => join(site.dir, c)).find((f) => existsSync(f) && !f.endsWith(sep));
+}
+
+/** Every URL a page or stylesheet asks for or links to. */
+function referencesIn(file: string, text: string): string[] {
+  if (file.endsWith(".css"))
+    return [...text.matchAll(/url\(\s*(['"]?)([^'")]*)\1\s*\)|@import\s+(['"])([^'"]*)\3/g)].map(
+      (m) => m[2] ?? m[4] ?? "",
+    );
+  const attrs = [...text.matchAll(/\s(?:href|src|action|formaction|poster|xlink:href|srcset)\s*=\s*"([^"]*)"/g)].map(
+    (m) => decode(m[1] ?? ""),
+  );
+  return attrs.flatMap((v) => v.split(",").map((s) => s.trim().split(/\s+/)[0] ?? "")).filter((v) => v !== "");
+}
+
+function ids(html: string): Set<string> {
+  return new Set([...html.matchAll(/\sid="([^"]*)"/g)].map((m) => decode(m[1] ?? "")));
+}
+
+function page(address: string): string {
+  const html = site.html.get(address);
+  if (html === undefined)
+    throw new Error(`no page at ${address}; pages: ${[...site.html.keys()].slice(0, 5).join(", ")}…`);
+  return html;
+}
+
+beforeAll(async () => {
+  expect(data.problems).toEqual([]);
+  tmp = mkdtempSync(join(tmpdir(), "railsieve-site-"));
+  const dir = join(tmp, "site");
+  await buildSite({ dataDir: DATA, outDir: dir, base: BASE });
+  const files = walk(dir);
+  site = { dir, files, html: new Map() };
+  for (const f of files.filter((f) => f.endsWith(".html"))) site.html.set(addressOf(f), readFileSync(f, "utf8"));
+}, 120_000);
+
+afterAll(() => {
+  if (tmp) rmSync(tmp, { recursive: true, force: true });
+});
+
+describe("the built site", () => {
+  it("has a page for every part class and every design, the catalogue, the rules and the home page", () => {
+    const expected = [
+      BASE,
+      `${BASE}catalogue/`,
+      `${BASE}rules/`,
+      ...data.catalogue.parts.map((p) => `${BASE}parts/${p.id}/`),
+      ...data.designs.map((d) => `${BASE}designs/${d.design?.id}/`),
+    ];
+    expect(expected.filter((a) => !site.html.has(a))).toEqual([]);
+  });
+
+  it("has no broken internal link, asset or fragment, and stays under its base path", () => {
+    const broken: string[] = [];
+    const idsOf = new Map<string, Set<string>>();
+    for (const file of site.files.filter((f) => f.endsWith(".html") || f.endsWith(".css"))) {
+      const from = file.endsWith(".html") ? addressOf(file) : `/${relative(site.dir, file).split(sep).join("/")}`;
+      const base = new URL(
+        file.endsWith(".css") ? `${BASE}${relative(site.dir, file).split(sep).join("/")}` : from,
+        ORIGIN,
+      );
+      for (const ref of referencesIn(file, readFileSync(file, "utf8"))) {
+        const url = new URL(ref, base);
+        if (url.origin !== ORIGIN || url.protocol === "data:") continue; // other hosts: next test
+        if (!url.pathname.startsWith(BASE)) {
+          broken.push(`${from}: ${ref} leaves the base path ${BASE}`);
+          continue;
+        }
+        const target = fileFor(url.pathname);
+        if (!target) {
+          broken.push(`${from}: ${ref} (no file)`);
+          continue;
+        }
+        if (url.hash !== "" && target.endsWith(".html")) {
+          const known = idsOf.get(target) ?? ids(readFileSync(target, "utf8"));
+          idsOf.set(target, known);
+          if (!known.has(decodeURIComponent(url.hash.slice(1))))
+            broken.push(`${from}: ${ref} (no element with that id)`);
+        }
+      }
+    }
+    expect(broken, broken.join("\n")).toEqual([]);
+  });
+
+  it("refers to no other host in any src, href, action or CSS url()", () => {
+    const external: string[] = [];
+    for (const file of site.files.filter((f) => f.endsWith(".html") || f.endsWith(".css"))) {
+      for (const ref of referencesIn(file, readFileSync(file, "utf8"))) {
+        const url = new URL(ref, `${ORIGIN}${BASE}`);
+        const runs = /^(javascript|vbscript):/i.test(ref);
+        const inline = url.protocol === "data:" && !/^data:image\//i.test(ref);
+        if (url.origin !== ORIGIN || runs || inline) {
+          if (url.protocol === "data:" && !inline) continue;
+          external.push(`${relative(site.dir, file)}: ${ref}`);
+        }
+      }
+    }
+    expect(external).toEqual([]);
+  });
+
+  it("has nothing its Content-Security-Policy would block: no inline script, style attribute, <style> or on… handler", () => {
+    const found: string[] = [];
+    for (const [address, html] of site.html) {
+      for (const m of html.matchAll(/<script\b([^>]*)>([\s\S]*?)<\/script>/g)) {
+        const attrs = m[1] ?? "";
+        if (/type="application\/(ld\+)?json"/.test(attrs)) continue;
+        if (!/\ssrc="/.test(attrs) || (m[2] ?? "").trim() !== "") found.push(`${address}: inline <script${attrs}>`);
+      }
+      for (const m of html.matchAll(/<[a-z][^>]*\sstyle\s*=\s*["'][^>]*>/gi))
+        found.push(`${address}: ${m[0].slice(0, 80)}`);
+      for (const m of html.matchAll(/<style\b/gi)) found.push(`${address}: ${m[0]}`);
+      for (const m of html.matchAll(/<[a-z][^>]*\son[a-z]+\s*=\s*["'][^>]*>/gi))
+        found.push(`${address}: ${m[0].slice(0, 80)}`);
+    }
+    expect(found).toEqual([]);
+  });
+
+  it("declares the policy, the language and one h1 on every page", () => {
+    const wrong: string[] = [];
+    for (const [address, html] of site.html) {
+      const meta = /<meta http-equiv="Content-Security-Policy" content="([^"]*)"/.exec(html);
+      if (!meta || decode(meta[1] ?? "") !== CSP) wrong.push(`${address}: policy ${meta?.[1] ?? "missing"}`);
+      if (!html.includes('<html lang="en"')) wrong.push(`${address}: no lang="en"`);
+      const h1 = html.match(/<h1\b/g)?.length ?? 0;
+      if (h1 !== 1) wrong.push(`${address}: ${h1} h1`);
+      if (!/<a class="skip-link" href="#main">/.test(html) || !html.includes('<main id="main"'))
+        wrong.push(`${address}: no skip link to main`);
+      for (const bad of ["undefined", "NaN", "[object Object]"])
+        if (html.replace(/<[^>]*>/g, " ").includes(bad)) wrong.push(`${address}: shows ${bad}`);
+    }
+    expect(wrong).toEqual([]);
+  });
+
+  it("gives every table header a scope and every form field a label", () => {
+    const wrong: string[] = [];
+    for (const [address, html] of site.html) {
+      for (const m of html.matchAll(/<th\b[^>]*>/g))
+        if (!/\sscope="(col|row)"/.test(m[0])) wrong.push(`${address}: ${m[0]}`);
+      for (const m of html.matchAll(/<(input|select)\b[^>]*\sid="([^"]*)"/g)) {
+        if (!html.includes(`<label for="${m[2]}"`)) wrong.push(`${address}: #${m[2]} has no label`);
+      }
+    }
+    expect(wrong).toEqual([]);
+  });
+});
+
+describe("a demo design page: bridge-10v-5v-adc", () => {
+  const entry = data.designs.find((d) => d.design?.id === "bridge-10v-5v-adc")?.design;
+  if (!entry) throw new Error("demo design bridge-10v-5v-adc is missing from data/designs");
+  const evaluation = evaluateDesign(entry, data.catalogue);
+  if (!evaluation.ok) throw new Error("demo design does not evaluate");
+  const role = (name: string) => evaluation.result.roles.find((r) => r.role === name) as RoleResult;
+  const section = (name: string) => {
+    const html = page(`${BASE}designs/bridge-10v-5v-adc/`);
+    const start = html.indexOf(`<section class="role" id="role-${name}"`);
+    expect(start).toBeGreaterThan(0);
+    return html.slice(start, html.indexOf("</section>", start));
+  };
+  const entryOf = (html: string, id: string) => {
+    const at = html.indexOf(`id="buffer--${id}"`);
+    const start = html.lastIndexOf("<li", at);
+    return at < 0 ? "" : html.slice(start, html.indexOf("</li>", at));
+  };
+
+  it("draws one rail diagram per op amp in the buffer role", () => {
+    const buffer = section("buffer");
+    expect(buffer.match(/<svg class="rail-diagram"/g)?.length).toBe(data.catalogue.opAmps.length);
+    expect(data.catalogue.opAmps.length).toBe(role("buffer").fits.length + role("buffer").rejected.length);
+  });
+
+  it("lists the buffer's fits in ranked order, then every rejection", () => {
+    const buffer = section("buffer");
+    const [fitsHtml, rejectedHtml] = buffer.split('<details class="rejections"');
+    const listed = (html = "") =>
+      [...html.matchAll(/<li class="result result-[a-z]+" id="buffer--([a-z0-9-]+)"/g)].map((m) => m[1]);
+    expect(role("buffer").fits.length).toBeGreaterThan(0);
+    expect(role("buffer").rejected.length).toBeGreaterThan(0);
+    expect(listed(fitsHtml)).toEqual(role("buffer").fits.map((p) => p.part.id));
+    expect(listed(rejectedHtml)).toEqual(role("buffer").rejected.map((p) => p.part.id));
+  });
+
+  it("gives every rejection all its reasons, each failing measured one with a number and a unit", () => {
+    const buffer = section("buffer");
+    for (const r of role("buffer").rejected) {
+      const html = entryOf(buffer, r.part.id);
+      for (const f of r.findings) expect(html, `${r.part.id} ${f.rule}`).toContain(escapeHtml(f.reason));
+      const failing = r.findings.filter((f) => f.verdict !== "pass");
+      expect(failing.length, r.part.id).toBeGreaterThan(0);
+      for (const f of failing.filter((x) => x.unit !== ""))
+        expect(f.reason, `${r.part.id} ${f.rule}`).toMatch(
+          /\d(\.\d+)? ?(V|mV|µV|nV|A|mA|µA|nA|pA|s|ms|µs|ns|Hz|kHz|MHz|V\/µs|mV\/µs|Ω|kΩ)\b|'[a-z_]+'/,
+        );
+    }
+  });
+
+  it("makes a headroom failure obvious: the split-supply class falls 1.34 V short of −2.50 V", () => {
+    // SPEC §6: Vf(0.5 mA) of d-si-switch = 0.70 + 0.16·log10(0.5) = 0.652 V; V− = −(5 − 1.304)
+    // + 0.5 mA/(980 Hz · 1 µF) + ½ · 0.5 mA/(980 Hz · 10 µF) = −3.161 V. With 2 V input and
+    // output headroom the part reaches −1.16 V against the −2.50 V window: 1.34 V short.
+    const html = entryOf(section("buffer"), "oa-bip-split-gp");
+    expect(html).toContain('class="result result-fail"');
+    expect(html).toContain(">1.34 V short</text>");
+    expect(html).toContain("V− −3.16 V</text>");
+    expect(html).toContain("1.34 V short</td>");
+  });
+
+  it("shows the derived values: pumped rail with droop and ripple, divider, window, ADC step", () => {
+    const html = page(`${BASE}designs/bridge-10v-5v-adc/`);
+    // Droop 0.5 mA/(980 Hz · 1 µF) = 510 mV, ripple 0.5 mA/(980 Hz · 10 µF) = 51.0 mV; E24 39k/13k = 0.25;
+    // ADC step (5 V / 1024) / 0.25 = 19.5 mV (IEEE Std 1241-2010, Q = V_FS / 2^N).
+    for (const text of [
+      "<dd>510 mV</dd>",
+      "<dd>51 mV</dd>",
+      "<dd>−3.16 V</dd>",
+      "<dd>39 kΩ</dd>",
+      "<dd>13 kΩ</dd>",
+      "<dd>0.25</dd>",
+      "<dd>±2.50 V</dd>",
+      "<dd>19.5 mV</dd>",
+    ]) {
+      expect(html).toContain(text);
+    }
+  });
+
+  it("carries the safety caution only above 30 V", () => {
+    expect(page(`${BASE}designs/bus-48v/`)).toContain(CAUTION_TEXT);
+    expect(page(`${BASE}designs/bridge-10v-5v-adc/`)).not.toContain(CAUTION_TEXT);
+  });
+});
+
+describe("the other pages", () => {
+  it("lists every class in the catalogue tables, units in the headers, with JavaScript off", () => {
+    const html = page(`${BASE}catalogue/`);
+    expect(html.match(/<tr data-id="/g)?.length).toBe(data.catalogue.parts.length);
+    for (const header of [
+      "Offset max (mV)",
+      "Bias current max (nA)",
+      "Gain-bandwidth (MHz)",
+      "Slew rate (V/µs)",
+      "Propagation delay (ns)",
+      "Reverse leakage (nA)",
+    ]) {
+      expect(html).toContain(`>${header}</th>`);
+    }
+    expect(html).toMatch(/<form class="filters" id="catalogue-filters"[^>]*hidden/);
+    expect(html).toMatch(/<script type="module" src="\/guide\/_astro\/[^"]+\.js"><\/script>/);
+  });
+
+  it("shows a part's parameters in SI and its verdict in every design", () => {
+    const html = page(`${BASE}parts/oa-cmos-rrio-1m/`);
+    for (const text of [
+      "<dd>1 MHz</dd>",
+      "<dd>10 pA</dd>",
+      "<dd>−0.1 V beyond the rail</dd>",
+      "<dd>0.02 V inside the rail</dd>",
+      "<dd>0.6 V/µs</dd>",
+      "<dd>100 µA</dd>",
+    ]) {
+      expect(html).toContain(text);
+    }
+    const rows = html.slice(html.indexOf('<table class="matrix"')).match(/<th scope="row">/g)?.length;
+    expect(rows).toBe(data.designs.length);
+  });
+
+  it("explains every rule with its formula, columns, policy knob and source", () => {
+    const html = page(`${BASE}rules/`);
+    for (const rule of RULES) {
+      const start = html.indexOf(`id="rule-${rule.id}"`);
+      expect(start, rule.id).toBeGreaterThan(0);
+      const part = html.slice(start, html.indexOf("</section>", start));
+      expect(part).toContain(escapeHtml(rule.formula));
+      expect(part).toContain(escapeHtml(rule.source));
+      expect(part).toContain(escapeHtml(rule.checks));
+      if (rule.policy) expect(part).toContain(`<code>${rule.policy}</code>`);
+    }
+  });
+
+  it("states each design's state and the catalogue counts on the home page", () => {
+    const html = page(BASE);
+    for (const d of data.designs) expect(html).toContain(`href="${BASE}designs/${d.design?.id}/"`);
+    expect(html).toMatch(/<td class="num">\d+<\/td>/);
+    expect(html).toMatch(/Built on <time datetime="\d{4}-\d\d-\d\dT[^"]+">\d{4}-\d\d-\d\d<\/time>/);
+  });
+});
