@@ -32,7 +32,7 @@ function renderComparison(result: DesignResult, io: Pick<Io, "color">): string {
       ),
     );
   }
-  out.push(wrap(`recommendation: ${c.reason}`, WIDTH, "    ", "  "));
+  out.push(wrap(`recommendation: ${c.recommended}, because ${c.reason}`, WIDTH, "    ", "  "));
   return `${out.join("\n")}\n`;
 }
 

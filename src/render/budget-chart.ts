@@ -29,7 +29,7 @@ export function renderBudgetChart(budget: Budget, idPrefix = "budget"): string {
     const y = i * ROW_H + 4;
     const dominant = t.name === budget.dominant;
     parts.push(
-      `<text class="budget-label" x="${LABEL_W - 8}" y="${y + 15}" text-anchor="end">${escapeHtml(truncate(t.label, 40))}</text>`,
+      `<text class="budget-label" x="${LABEL_W - 8}" y="${y + 15}" text-anchor="end">${escapeHtml(truncate(t.label, 36))}</text>`,
       `<rect class="budget-bar${dominant ? " budget-bar-dominant" : ""}${t.calibrates_out ? " budget-bar-calibrated" : ""}" x="${LABEL_W}" y="${y + 3}" width="${(x(t.v) - LABEL_W).toFixed(1)}" height="${ROW_H - 8}"/>`,
       `<text class="budget-value" x="${(x(t.v) + 6).toFixed(1)}" y="${y + 15}">${escapeHtml(formatSI(t.v, "V"))}${dominant ? " ◆ largest" : ""}</text>`,
     );

@@ -1,5 +1,6 @@
 // The one-line state of a design for the home page and the design page head.
 import { designHolds } from "../core/engine/result.ts";
+import { formatSI } from "../core/units.ts";
 import type { Role } from "../core/schemas/design.ts";
 import type { DesignEntry } from "./design-entry.ts";
 import { ROLE_NAMES } from "./roles.ts";
@@ -39,9 +40,12 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
   if (empty.length > 0) problems.push(`no part fits the ${list(empty)}`);
   if (bad.length > 0)
     problems.push(`BOM part${bad.length === 1 ? "" : "s"} ${list(bad)} ${bad.length === 1 ? "does" : "do"} not fit`);
-  const line = holds
-    ? "Every role has a fit and every BOM part fits."
-    : `${capitalize(problems.join("; ") || "the design does not hold")}.`;
+  const b = result.budget;
+  const budget = `Accuracy budget ${b.verdict === "pass" ? "passes" : b.verdict === "marginal" ? "is marginal" : "fails"} (worst case ${formatSI(b.worst_case_v, "V")} against ${formatSI(b.required_v, "V")}).`;
+  const compared = result.comparison ? ` Both topologies compared: ${result.comparison.recommended} recommended.` : "";
+  const line = `${
+    holds ? "Every role has a fit and every BOM part fits." : `${capitalize(problems.join("; ") || "the design does not hold")}.`
+  } ${budget}${compared}`;
   return { ok: true, holds, line, roles };
 }
 

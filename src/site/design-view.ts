@@ -153,7 +153,17 @@ function railRows(derived: Derived): ValueRow[] {
 
 export function derivedGroups(result: DesignResult): ValueGroup[] {
   const d = result.derived;
-  const divider: ValueRow[] = d.divider
+  const n = d.level_shift;
+  const divider: ValueRow[] = n
+    ? [
+        { label: "R1 from the signal", value: si(n.r1_ohm, "Ω") },
+        { label: "R2 from the ADC reference", value: si(n.r2_ohm, "Ω") },
+        { label: "R3 to ground", value: n.r3_ohm === null ? "none (a = 1/2)" : si(n.r3_ohm, "Ω") },
+        { label: "Gain a = G / R1, G = R1 ‖ R2 ‖ R3 (Millman)", value: ratio(n.gain) },
+        { label: "Output at zero signal b = V_ref · G / R2", value: formatVolts(n.offset_v) },
+        { label: "Output span for ±peak", value: `${formatVolts(n.output_low_v)} … ${formatVolts(n.output_high_v)}` },
+      ]
+    : d.divider
     ? [
         { label: "Target ratio = window ÷ peak", value: ratio(d.target_ratio) },
         { label: `Top resistor R1 (${result.design.front_end.series})`, value: si(d.divider.top_ohm, "Ω") },
@@ -163,8 +173,12 @@ export function derivedGroups(result: DesignResult): ValueGroup[] {
       ]
     : [{ label: "Divider", value: "none: the peak already fits the window (k = 1)" }];
   const signal: ValueRow[] = [
-    { label: "Window used W = k · peak", value: `±${formatVolts(d.window_v)}` },
-    { label: "Resistance seen by the buffer (Rs + R1) ‖ R2", value: si(d.thevenin_ohm, "Ω") },
+    n
+      ? { label: "Swing about mid-rail a · peak", value: `±${formatVolts(d.window_v)}` }
+      : { label: "Window used W = k · peak", value: `±${formatVolts(d.window_v)}` },
+    n
+      ? { label: "Resistance seen by the level shifter R1 ‖ R2 ‖ R3", value: si(d.thevenin_ohm, "Ω") }
+      : { label: "Resistance seen by the buffer (Rs + R1) ‖ R2", value: si(d.thevenin_ohm, "Ω") },
     { label: "One ADC step at the input", value: si(d.adc_step_at_input_v, "V") },
   ];
   const diodes: ValueRow[] = [];
@@ -186,7 +200,7 @@ export function derivedGroups(result: DesignResult): ValueGroup[] {
   }
   const groups: ValueGroup[] = [
     { title: "Rails", rows: railRows(d) },
-    { title: "Divider", rows: divider },
+    { title: n ? "Level-shift network" : "Divider", rows: divider },
     { title: "Signal at the ADC side", rows: signal },
   ];
   if (diodes.length > 0) groups.push({ title: "Diode drops in the signal chain", rows: diodes });

@@ -44,13 +44,13 @@ export function compare(results: DesignResult[], catalogue: Catalogue): Comparis
 }
 
 function reasonFor(best: ComparisonRow, other: ComparisonRow | undefined): string {
-  if (!other) return `${best.topology} is the only topology evaluated`;
-  if (best.holds !== other.holds) return `${best.topology}: every role has a fit, while ${other.topology} leaves a role without one`;
+  if (!other) return "it is the only topology evaluated";
+  if (best.holds !== other.holds) return `every role has a fit, while ${other.topology} leaves a role without one`;
   if (best.budget_verdict !== other.budget_verdict) {
-    return `${best.topology}: its budget ${best.budget_verdict === "pass" ? "passes" : "is marginal"} (worst case ${formatSI(best.budget_worst_case_v, "V")}), while ${other.topology}'s ${other.budget_verdict === "fail" ? "fails" : "is only marginal"}, decided by its ${other.dominant ?? "largest"} term (worst case ${formatSI(other.budget_worst_case_v, "V")})`;
+    return `its budget ${best.budget_verdict === "pass" ? "passes" : "is marginal"} (worst case ${formatSI(best.budget_worst_case_v, "V")}), while ${other.topology}'s ${other.budget_verdict === "fail" ? "fails" : "is only marginal"}, decided by its ${other.dominant ?? "largest"} term (worst case ${formatSI(other.budget_worst_case_v, "V")})`;
   }
   if (best.cost_total !== other.cost_total) {
-    return `${best.topology}: both budgets ${best.budget_verdict === "pass" ? "pass" : best.budget_verdict === "marginal" ? "are marginal" : "fail"}, and it costs less (cost bands ${best.cost_total} against ${other.cost_total}, ${best.part_count} parts against ${other.part_count})`;
+    return `both budgets ${best.budget_verdict === "pass" ? "pass" : best.budget_verdict === "marginal" ? "are marginal" : "fail"}, and it costs less (cost bands ${best.cost_total} against ${other.cost_total}, ${best.part_count} parts against ${other.part_count})`;
   }
-  return `${best.topology}: as good on budget and cost, and it uses ${best.effective_bits.toFixed(1)} effective bits against ${other.effective_bits.toFixed(1)}`;
+  return `as good on budget and cost, and it uses ${best.effective_bits.toFixed(1)} effective bits against ${other.effective_bits.toFixed(1)}`;
 }

@@ -80,6 +80,7 @@ export type ComparisonRow = {
 export type Comparison = {
   rows: ComparisonRow[];
   recommended: Exclude<Design["topology"], "all">;
+  /** Why the recommended topology wins, as a clause ("its budget passes …"). */
   reason: string;
   /** Every topology's full result, in row order. */
   results: DesignResult[];

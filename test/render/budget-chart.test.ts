@@ -1,0 +1,41 @@
+// The budget bar chart: escaped text, bars to scale, the requirement marked.
+import { describe, expect, it } from "vitest";
+import type { Budget } from "../../src/core/engine/budget.ts";
+import { renderBudgetChart } from "../../src/render/budget-chart.ts";
+
+const budget: Budget = {
+  terms: [
+    { name: "quantization", label: "quantization <b>&", v: 0.01, calibrates_out: false },
+    { name: "reference", label: "reference", v: 0.04, calibrates_out: true },
+  ],
+  worst_case_v: 0.05,
+  rss_v: Math.hypot(0.01, 0.04),
+  required_v: 0.1,
+  verdict: "pass",
+  dominant: "reference",
+  calibrated: { worst_case_v: 0.01, rss_v: 0.01, verdict: "pass", dominant: "quantization" },
+  effective_bits: 10,
+  missing: [],
+};
+
+describe("renderBudgetChart", () => {
+  const svg = renderBudgetChart(budget);
+
+  it("escapes term labels", () => {
+    expect(svg).toContain("quantization &lt;b&gt;&amp;");
+    expect(svg).not.toContain("<b>");
+  });
+
+  it("draws bars in proportion, scaled to the larger of requirement and worst case", () => {
+    const widths = [...svg.matchAll(/<rect class="budget-bar[^"]*"[^>]*width="([\d.]+)"/g)].map((m) => Number(m[1]));
+    // Sorted largest first: reference 0.04, quantization 0.01, then the sums 0.05 and rss.
+    expect(widths[0]! / widths[1]!).toBeCloseTo(4, 1);
+    expect(widths[2]! / widths[0]!).toBeCloseTo(1.25, 1);
+    expect(svg).toContain("required 100 mV");
+    expect(svg).toContain("◆ largest");
+  });
+
+  it("uses no style attribute (the CSP allows none)", () => {
+    expect(svg).not.toMatch(/\sstyle=/);
+  });
+});
