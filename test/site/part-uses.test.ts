@@ -25,7 +25,7 @@ describe("partUses", () => {
   ];
 
   it("has a column for each role that takes the kind", () => {
-    expect(partUses(good, designs).roles).toEqual(["buffer", "rectifier", "sign"]);
+    expect(partUses(good, designs).roles).toEqual(["buffer", "rectifier", "sign", "level-shift", "reference-buffer"]);
     expect(partUses(catalogue.byId.get("cmp-test")!, designs).roles).toEqual(["sign"]);
     expect(partUses(catalogue.byId.get("d-test")!, designs).roles).toEqual([
       "pump-diode",

@@ -1,0 +1,209 @@
+// Every editable field of a design file (SPEC §5), in file order. One table
+// serves the page's markup (built at build time), the URL codec and the form
+// script, so a field's name, label and unit are written once.
+import { LEVEL_SHIFTS, POLICY_DEFAULTS, SERIES, TOPOLOGIES, type Role } from "../../core/schemas/design.ts";
+
+export type FieldGroup = { id: string; legend: string; hint?: string };
+
+export const GROUPS = [
+  { id: "design", legend: "Design" },
+  { id: "supply", legend: "Rails and charge pump" },
+  { id: "signal", legend: "Signal" },
+  { id: "front_end", legend: "Window and divider" },
+  { id: "adc", legend: "ADC" },
+  { id: "logic", legend: "Logic levels and level shift" },
+  { id: "accuracy", legend: "Accuracy and temperature" },
+  { id: "policy", legend: "Policy", hint: "Leave a box empty to keep the default shown in it." },
+  { id: "bom", legend: "Parts already chosen (BOM)", hint: "Leave a role on “best fit” to let the engine pick." },
+] as const satisfies readonly FieldGroup[];
+
+export type GroupId = (typeof GROUPS)[number]["id"];
+
+/**
+ * How a number reads back in the box: "si" writes 1e-6 as "1u" and 100000 as
+ * "100k"; "plain" keeps fractions, bit counts and temperatures as decimals.
+ */
+export type NumberStyle = "si" | "plain";
+
+type Base = {
+  path: string;
+  group: GroupId;
+  label: string;
+  /** Extra words for screen readers and the hint line. */
+  hint?: string;
+  /** Only part of the design when this holds (a charge pump's capacitors, a fixed rail's voltage). */
+  when?: (draft: Readonly<Record<string, string>>) => boolean;
+  /** May be left empty (policy overrides, BOM). */
+  optional?: boolean;
+};
+
+export type NumberField = Base & { type: "number"; unit: string; style: NumberStyle; placeholder?: string };
+export type TextField = Base & { type: "text"; maxLength: number };
+export type ChoiceField = Base & { type: "choice"; choices: readonly { value: string; label: string }[] };
+/** A BOM role: its choices are the catalogue's parts, filled in once the catalogue arrives. */
+export type PartField = Base & { type: "part"; role: Role };
+
+export type Field = NumberField | TextField | ChoiceField | PartField;
+
+const isPump = (d: Readonly<Record<string, string>>) => d["supply.negative.kind"] === "charge-pump";
+const isFixed = (d: Readonly<Record<string, string>>) => d["supply.negative.kind"] === "fixed";
+const isClamp = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] === "diode-clamp";
+// Roles per topology as the engine's rolesOf has them; "all" compares both front ends.
+const rectifies = (d: Readonly<Record<string, string>>) => d["topology"] !== "offset-to-mid-rail";
+const shifts = (d: Readonly<Record<string, string>>) =>
+  d["topology"] === "offset-to-mid-rail" || d["topology"] === "all";
+
+const num = (
+  path: string,
+  group: GroupId,
+  label: string,
+  unit: string,
+  more: Partial<NumberField> = {},
+): NumberField => ({
+  path,
+  group,
+  label,
+  unit,
+  type: "number",
+  style: "si",
+  ...more,
+});
+
+const plain = { style: "plain" } as const;
+
+const policyNumber = (
+  key: Exclude<keyof typeof POLICY_DEFAULTS, "allow_unrated">,
+  label: string,
+  unit: string,
+): NumberField =>
+  num(`policy.${key}`, "policy", label, unit, {
+    style: "plain",
+    optional: true,
+    placeholder: String(POLICY_DEFAULTS[key]),
+  });
+
+const bomRole = (role: Role, label: string, when?: Base["when"]): PartField => ({
+  path: `bom.${role}`,
+  group: "bom",
+  label,
+  type: "part",
+  role,
+  optional: true,
+  ...(when ? { when } : {}),
+});
+
+export const FIELDS: readonly Field[] = [
+  {
+    path: "id",
+    group: "design",
+    label: "Id (also the file name)",
+    type: "text",
+    maxLength: 80,
+    hint: "lower-case letters, digits and -",
+  },
+  { path: "title", group: "design", label: "Title", type: "text", maxLength: 200 },
+  {
+    path: "topology",
+    group: "design",
+    label: "Topology",
+    type: "choice",
+    choices: TOPOLOGIES.map((t) => ({ value: t, label: t })),
+  },
+
+  num("supply.positive_v", "supply", "Positive rail V+", "V"),
+  {
+    path: "supply.negative.kind",
+    group: "supply",
+    label: "Negative rail",
+    type: "choice",
+    choices: [
+      { value: "ground", label: "ground (0 V)" },
+      { value: "fixed", label: "fixed negative rail" },
+      { value: "charge-pump", label: "diode charge pump" },
+    ],
+  },
+  num("supply.negative.v", "supply", "Negative rail V−", "V", { when: isFixed, hint: "below 0" }),
+  num("supply.negative.drive_v", "supply", "Pump drive amplitude", "V", { when: isPump }),
+  num("supply.negative.frequency_hz", "supply", "Pump frequency", "Hz", { when: isPump }),
+  num("supply.negative.flying_cap_f", "supply", "Flying capacitor", "F", { when: isPump }),
+  num("supply.negative.reservoir_cap_f", "supply", "Reservoir capacitor", "F", { when: isPump }),
+  num("supply.negative.load_a", "supply", "Load on V−", "A", { when: isPump }),
+
+  num("signal.peak_v", "signal", "Peak signal (±)", "V"),
+  num("signal.max_frequency_hz", "signal", "Highest signal frequency", "Hz"),
+  num("signal.source_ohm", "signal", "Source resistance", "Ω"),
+
+  num("front_end.window_v", "front_end", "Window at the ADC (±)", "V"),
+  num("front_end.divider_total_ohm", "front_end", "Divider total resistance", "Ω"),
+  num("front_end.resistor_tolerance", "front_end", "Resistor tolerance", "fraction", { ...plain, hint: "0.01 = 1 %" }),
+  {
+    path: "front_end.series",
+    group: "front_end",
+    label: "Resistor series",
+    type: "choice",
+    choices: SERIES.map((s) => ({ value: s, label: s })),
+  },
+  num("front_end.rectifier_load_ohm", "front_end", "Rectifier resistors", "Ω"),
+
+  num("adc.bits", "adc", "ADC resolution", "bits", plain),
+  num("adc.reference_v", "adc", "ADC reference", "V"),
+  num("adc.reference_tolerance", "adc", "Reference tolerance", "fraction", { ...plain, hint: "0.002 = 0.2 %" }),
+
+  num("logic.vdd_v", "logic", "Logic supply VDD", "V"),
+  num("logic.vih_v", "logic", "Logic-high threshold V_IH", "V"),
+  num("logic.vil_v", "logic", "Logic-low threshold V_IL", "V"),
+  {
+    path: "logic.level_shift",
+    group: "logic",
+    label: "Level shift",
+    type: "choice",
+    choices: LEVEL_SHIFTS.map((s) => ({ value: s, label: s })),
+  },
+  num("logic.pull_down_ohm", "logic", "Pull-down resistor", "Ω"),
+
+  num("accuracy.required_v", "accuracy", "Required accuracy (input-referred)", "V"),
+  num("temperature.min_c", "accuracy", "Lowest temperature", "°C", plain),
+  num("temperature.max_c", "accuracy", "Highest temperature", "°C", plain),
+
+  policyNumber("headroom_margin_v", "Headroom margin", "V"),
+  policyNumber("marginal_fraction", "Marginal fraction", "fraction"),
+  policyNumber("offset_share", "Offset share of the accuracy", "fraction"),
+  policyNumber("speed_share", "Bandwidth-error share of the accuracy", "fraction"),
+  policyNumber("sign_share", "Dead-band share of the accuracy", "fraction"),
+  policyNumber("timing_fraction", "Timing share of the signal period", "fraction"),
+  {
+    path: "policy.allow_unrated",
+    group: "policy",
+    label: "Accept unrated parts as marginal",
+    type: "choice",
+    optional: true,
+    choices: [
+      { value: "", label: `default (${POLICY_DEFAULTS.allow_unrated ? "yes" : "no"})` },
+      { value: "true", label: "yes" },
+      { value: "false", label: "no" },
+    ],
+  },
+
+  bomRole("buffer", "Buffer op amp", rectifies),
+  bomRole("rectifier", "Rectifier op amp", rectifies),
+  bomRole("sign", "Sign comparator", rectifies),
+  bomRole("pump-diode", "Pump diode", (d) => rectifies(d) && isPump(d)),
+  bomRole("rectifier-diode", "Rectifier diode", rectifies),
+  bomRole("clamp-diode", "Clamp diode", (d) => rectifies(d) && isClamp(d)),
+  bomRole("level-shift", "Level-shift op amp", shifts),
+  bomRole("reference-buffer", "Reference buffer op amp", shifts),
+];
+
+export const FIELD_BY_PATH: ReadonlyMap<string, Field> = new Map(FIELDS.map((f) => [f.path, f]));
+
+/** Text of every field, keyed by path: what the form shows and the URL carries. */
+export type Draft = Record<string, string>;
+
+export function applies(field: Field, draft: Readonly<Draft>): boolean {
+  return field.when === undefined || field.when(draft);
+}
+
+/** Field ids are their paths; these name the helper elements around each box. */
+export const messageId = (path: string) => `${path}--message`;
+export const unitId = (path: string) => `${path}--unit`;
+export const parsedId = (path: string) => `${path}--parsed`;

@@ -1,0 +1,315 @@
+// The try page's script: fetch the catalogue once, then on every edit run the
+// same engine the site and the CLI use, redraw the results and keep the design
+// in the address bar. Nothing here throws to the console: a failed fetch or a
+// bad link becomes a message on the page.
+import type { Catalogue } from "../../core/catalogue.ts";
+import { evaluateDesign } from "../../core/engine/evaluate.ts";
+import type { DesignResult, Evaluation } from "../../core/engine/result.ts";
+import { formatProblem, type Problem } from "../../core/problems.ts";
+import type { Design } from "../../core/schemas/design.ts";
+import { needsCaution } from "../../site/design-view.ts";
+import { joinBase } from "../../site/links.ts";
+import { shortlistCsv, shortlistCsvName } from "./csv-export.ts";
+import { DEFAULT_DRAFT } from "./defaults.ts";
+import { designFileFromDraft } from "./design-file.ts";
+import { checkDraft, draftFromInput } from "./draft.ts";
+import { FIELD_BY_PATH, type Draft } from "./fields.ts";
+import { fillPartLists, readField, showApplicable, showParsed, showProblems, writeDraft } from "./form.ts";
+import { renderTry } from "./render.ts";
+import { holdsLine } from "./render-results.ts";
+import { catalogueOf, readTryData, TRY_DATA_PATH, type TryData } from "./try-data.ts";
+import { encodeDraft, stateFromUrl, type UrlState } from "./url-state.ts";
+
+type Page = {
+  root: HTMLElement;
+  form: HTMLFormElement;
+  formProblems: HTMLElement;
+  linkProblems: HTMLElement;
+  status: HTMLElement;
+  results: HTMLElement;
+  caution: HTMLElement;
+  start: HTMLSelectElement;
+  load: HTMLButtonElement;
+  downloadDesign: HTMLButtonElement;
+  downloadCsv: HTMLButtonElement;
+  downloadMessage: HTMLElement;
+};
+
+function find(doc: Document): Page | undefined {
+  const get = <T extends HTMLElement>(id: string, type: new () => T): T | undefined => {
+    const el = doc.getElementById(id);
+    return el instanceof type ? el : undefined;
+  };
+  const page = {
+    root: get("try", HTMLElement),
+    form: get("try-form", HTMLFormElement),
+    formProblems: get("try-form-problems", HTMLElement),
+    linkProblems: get("try-link-problems", HTMLElement),
+    status: get("try-status", HTMLElement),
+    results: get("try-results", HTMLElement),
+    caution: get("try-caution", HTMLElement),
+    start: get("try-start", HTMLSelectElement),
+    load: get("try-load", HTMLButtonElement),
+    downloadDesign: get("try-download-design", HTMLButtonElement),
+    downloadCsv: get("try-download-csv", HTMLButtonElement),
+    downloadMessage: get("try-download-message", HTMLElement),
+  };
+  return Object.values(page).every((v) => v !== undefined) ? (page as Page) : undefined;
+}
+
+function say(el: HTMLElement, text: string): void {
+  if (el.textContent !== text) el.textContent = text;
+}
+
+function download(doc: Document, name: string, text: string, type: string): void {
+  const href = URL.createObjectURL(new Blob([text], { type }));
+  const a = doc.createElement("a");
+  a.href = href;
+  a.download = name;
+  a.hidden = true;
+  doc.body.append(a);
+  a.click();
+  a.remove();
+  // The browser has started reading the blob by now; a late revoke keeps slow downloads safe.
+  setTimeout(() => URL.revokeObjectURL(href), 60_000);
+}
+
+async function fetchData(url: string): Promise<TryData | string> {
+  try {
+    const response = await fetch(url);
+    if (!response.ok) return `the catalogue could not be loaded (${response.status} ${response.statusText} for ${url})`;
+    return readTryData(await response.json());
+  } catch (e) {
+    return `the catalogue could not be loaded (${e instanceof Error ? e.message : String(e)})`;
+  }
+}
+
+class TryPage {
+  readonly page: Page;
+  readonly doc: Document;
+  readonly data: TryData;
+  readonly catalogue: Catalogue;
+  draft: Draft = { ...DEFAULT_DRAFT };
+  result: DesignResult | undefined;
+  expanded = new Set<string>();
+  /** The next address change gets its own history entry (set after each committed edit). */
+  pushNext = false;
+  scheduled = 0;
+  // The link check evaluates a design once; the update that follows reuses that evaluation.
+  cached: { key: string; evaluation: Evaluation } | undefined;
+
+  constructor(doc: Document, page: Page, data: TryData) {
+    this.doc = doc;
+    this.page = page;
+    this.data = data;
+    this.catalogue = catalogueOf(data.parts);
+  }
+
+  evaluate(design: Design): Evaluation {
+    const key = JSON.stringify(design);
+    if (this.cached?.key === key) return this.cached.evaluation;
+    const evaluation = evaluateDesign(design, this.catalogue);
+    this.cached = { key, evaluation };
+    return evaluation;
+  }
+
+  start(): void {
+    const { page, doc } = this;
+    fillPartLists(doc, this.data.parts);
+    for (const d of this.data.designs) {
+      const option = doc.createElement("option");
+      option.value = d.id;
+      option.textContent = `${d.id}: ${d.title}`;
+      page.start.append(option);
+    }
+    page.form.addEventListener("input", (e) => this.onInput(e));
+    page.form.addEventListener("change", (e) => {
+      this.onInput(e);
+      this.pushNext = true;
+    });
+    page.form.addEventListener("submit", (e) => e.preventDefault());
+    page.load.addEventListener("click", () => this.loadDemo());
+    page.results.addEventListener("click", (e) => this.onResultsClick(e));
+    page.downloadDesign.addEventListener("click", () => this.downloadDesign());
+    page.downloadCsv.addEventListener("click", () => this.downloadCsv());
+    window.addEventListener("popstate", () => this.fromUrl(false));
+    this.fromUrl(true);
+    page.root.removeAttribute("aria-busy");
+    page.form.querySelectorAll("fieldset").forEach((f) => (f.disabled = false));
+  }
+
+  /** Reads the address; a repaired or replaced link is written back so address and page agree. */
+  fromUrl(first: boolean): void {
+    const state = stateFromUrl(this.doc.location.search, DEFAULT_DRAFT, (design) => {
+      const evaluation = this.evaluate(design);
+      return evaluation.ok ? [] : evaluation.problems;
+    });
+    this.showLinkProblems(state);
+    this.draft = state.draft;
+    writeDraft(this.doc, this.draft);
+    this.update({ writeUrl: state.problems.length > 0 ? "replace" : "none" });
+    this.pushNext = true;
+    if (!first) say(this.page.downloadMessage, "");
+  }
+
+  showLinkProblems(state: UrlState): void {
+    const box = this.page.linkProblems;
+    if (state.problems.length === 0) {
+      box.hidden = true;
+      box.replaceChildren();
+      return;
+    }
+    const doc = this.doc;
+    const head = doc.createElement("p");
+    head.textContent =
+      state.fallback === "defaults"
+        ? "This link does not hold a usable design, so the page starts from the defaults. What was wrong:"
+        : state.fallback === "fields"
+          ? `Part of this link could not be used; ${state.replaced.length === 1 ? `${state.replaced[0]} shows its default` : `${state.replaced.length} fields show their defaults`}. What was wrong:`
+          : "Part of this link was ignored:";
+    const list = doc.createElement("ul");
+    for (const p of state.problems) {
+      const li = doc.createElement("li");
+      li.textContent = formatProblem(p);
+      list.append(li);
+    }
+    box.replaceChildren(head, list);
+    box.hidden = false;
+  }
+
+  loadDemo(): void {
+    const id = this.page.start.value;
+    const demo = this.data.designs.find((d) => d.id === id);
+    this.draft = demo ? draftFromInput(demo.input, DEFAULT_DRAFT) : { ...DEFAULT_DRAFT };
+    writeDraft(this.doc, this.draft);
+    this.page.linkProblems.hidden = true;
+    this.pushNext = true;
+    this.update({ writeUrl: "auto" });
+    this.pushNext = true;
+  }
+
+  onInput(e: Event): void {
+    const target = e.target;
+    if (!(target instanceof HTMLInputElement || target instanceof HTMLSelectElement)) return;
+    const field = FIELD_BY_PATH.get(target.id);
+    if (!field) return;
+    const text = readField(this.doc, field.path) ?? "";
+    if (this.draft[field.path] === text) return;
+    this.draft = { ...this.draft, [field.path]: text };
+    showParsed(this.doc, field, text);
+    if (field.type === "choice") showApplicable(this.doc, this.draft);
+    // Several events in one frame (typing fast, a paste) cost one evaluation.
+    if (this.scheduled === 0) {
+      this.scheduled = requestAnimationFrame(() => {
+        this.scheduled = 0;
+        this.update({ writeUrl: "auto" });
+      });
+    }
+  }
+
+  onResultsClick(e: Event): void {
+    const button = e.target instanceof Element ? e.target.closest<HTMLElement>("[data-toggle]") : null;
+    const key = button?.dataset.toggle;
+    if (key === undefined || !this.result) return;
+    if (this.expanded.has(key)) this.expanded.delete(key);
+    else this.expanded.add(key);
+    renderTry(this.page.results, this.result, { expanded: this.expanded });
+  }
+
+  /** Checks the draft, evaluates it, redraws, and (when valid) moves the address along. */
+  update({ writeUrl }: { writeUrl: "auto" | "replace" | "none" }): void {
+    const started = performance.now();
+    const { page, doc } = this;
+    const checked = checkDraft(this.draft);
+    let problems: Problem[] = checked.problems;
+    let result: DesignResult | undefined;
+    if (checked.design) {
+      const evaluation = this.evaluate(checked.design);
+      if (evaluation.ok) result = evaluation.result;
+      else problems = evaluation.problems.map((p) => ({ file: "form", path: p.path, message: p.message }));
+    }
+    const evaluated = performance.now();
+    showProblems(doc, problems, page.formProblems);
+
+    if (!result) {
+      page.results.classList.add("try-stale");
+      page.downloadDesign.disabled = checked.design === undefined;
+      page.downloadCsv.disabled = true;
+      const n = problems.length;
+      say(
+        page.status,
+        `${n === 1 ? "One field needs" : `${n} fields need`} attention (marked in the form). ${this.result ? "The results below are for the last design that could be evaluated." : ""}`.trim(),
+      );
+      return;
+    }
+    this.result = result;
+    renderTry(page.results, result, { expanded: this.expanded });
+    page.results.classList.remove("try-stale");
+    page.downloadDesign.disabled = false;
+    page.downloadCsv.disabled = false;
+    page.caution.hidden = !needsCaution(result.design);
+    const { holds, line } = holdsLine(result);
+    say(page.status, `${line} ${this.catalogue.parts.length} parts checked.`);
+    page.status.classList.toggle("try-holds", holds);
+    page.status.classList.toggle("try-fails", !holds);
+    if (writeUrl !== "none") this.writeUrl(writeUrl === "replace");
+    // For benchmarks and the browser tests: schema check + engine, and the DOM update, in ms.
+    const done = performance.now();
+    // Only the latest pair is kept, so a long session does not grow the timeline.
+    performance.clearMeasures("railsieve:try-evaluate");
+    performance.clearMeasures("railsieve:try-render");
+    performance.measure("railsieve:try-evaluate", { start: started, end: evaluated });
+    performance.measure("railsieve:try-render", { start: evaluated, end: done });
+    page.root.dataset.updateMs = (done - started).toFixed(1);
+  }
+
+  writeUrl(replace: boolean): void {
+    const query = encodeDraft(this.draft);
+    const href = `${this.doc.location.pathname}?${query}${this.doc.location.hash}`;
+    if (`?${query}` === this.doc.location.search) return;
+    if (this.pushNext && !replace) history.pushState(null, "", href);
+    else history.replaceState(null, "", href);
+    this.pushNext = false;
+  }
+
+  downloadDesign(): void {
+    const out = designFileFromDraft(this.draft);
+    if (!out.ok) {
+      say(
+        this.page.downloadMessage,
+        `The design file cannot be written yet: ${out.problems.length} field${out.problems.length === 1 ? "" : "s"} need attention.`,
+      );
+      return;
+    }
+    download(this.doc, out.name, out.text, "application/json");
+    say(this.page.downloadMessage, `Saved ${out.name}: put it in data/designs/ and run railsieve validate.`);
+  }
+
+  downloadCsv(): void {
+    if (!this.result) return;
+    download(this.doc, shortlistCsvName(this.result), shortlistCsv(this.result), "text/csv;charset=utf-8");
+    say(this.page.downloadMessage, `Saved ${shortlistCsvName(this.result)}.`);
+  }
+}
+
+/** Starts the page; safe to call on a page without the try markup. */
+export async function startTry(doc: Document = document): Promise<void> {
+  const page = find(doc);
+  if (!page) return;
+  const url = joinBase(import.meta.env.BASE_URL, TRY_DATA_PATH);
+  const data = await fetchData(url);
+  if (typeof data === "string") {
+    say(page.status, `The try page cannot start: ${data}. The design pages show the demo designs without it.`);
+    page.root.removeAttribute("aria-busy");
+    return;
+  }
+  try {
+    new TryPage(doc, page, data).start();
+  } catch (e) {
+    // A bug must not leave a half-working page that looks fine.
+    say(
+      page.status,
+      `The try page stopped: ${e instanceof Error ? e.message : String(e)}. Please report this with the address of the page.`,
+    );
+  }
+}

@@ -1,0 +1,119 @@
+import { describe, expect, it } from "vitest";
+import { catalogueFromParts, type Part } from "../../../src/core/catalogue.ts";
+import { evaluateDesign } from "../../../src/core/engine/evaluate.ts";
+import type { DesignResult } from "../../../src/core/engine/result.ts";
+import { loadCatalogue } from "../../../src/node/load-data.ts";
+import { DEFAULT_DRAFT } from "../../../src/client/try/defaults.ts";
+import { checkDraft } from "../../../src/client/try/draft.ts";
+import { FIRST_ROWS, holdsLine, renderResults, renderRole } from "../../../src/client/try/render-results.ts";
+
+const { catalogue } = loadCatalogue("data");
+
+function evaluate(draft: Record<string, string>, parts: readonly Part[] = catalogue.parts): DesignResult {
+  const design = checkDraft(draft).design;
+  if (!design) throw new Error("draft does not validate");
+  const e = evaluateDesign(design, catalogueFromParts([...parts]));
+  if (!e.ok) throw new Error(e.problems.map((p) => p.message).join("\n"));
+  return e.result;
+}
+
+const closed = { expanded: new Set<string>() };
+const rowsOf = (html: string) =>
+  [...html.matchAll(/<tr data-part="([^"]*)" data-verdict="([^"]*)">/g)].map((m) => [m[1], m[2]]);
+
+describe("renderRole", () => {
+  // 12 V rails on fixed ±12 V: most op amps fit the buffer, so both lists are long enough to cut.
+  const result = evaluate({
+    ...DEFAULT_DRAFT,
+    "supply.positive_v": "12",
+    "supply.negative.kind": "fixed",
+    "supply.negative.v": "-12",
+  });
+  const buffer = result.roles.find((r) => r.role === "buffer");
+  if (!buffer) throw new Error("no buffer role");
+
+  it("marks every shown part with its id and verdict, fits first in rank order", () => {
+    const html = renderRole(buffer, result, closed);
+    const shown = rowsOf(html);
+    const expected = [...buffer.fits.slice(0, FIRST_ROWS), ...buffer.rejected.slice(0, FIRST_ROWS)].map((p) => [
+      p.part.id,
+      p.verdict,
+    ]);
+    expect(shown).toEqual(expected);
+  });
+
+  it("cuts long lists after the first rows and offers the rest behind a button", () => {
+    expect(buffer.fits.length).toBeGreaterThan(FIRST_ROWS);
+    const html = renderRole(buffer, result, closed);
+    const more = buffer.fits.length - FIRST_ROWS;
+    expect(html).toContain(
+      `data-toggle="buffer:fits" aria-expanded="false">Show all ${buffer.fits.length} fits (${more} more)</button>`,
+    );
+    const open = renderRole(buffer, result, { expanded: new Set(["buffer:fits"]) });
+    expect(rowsOf(open).length).toBe(buffer.fits.length + Math.min(FIRST_ROWS, buffer.rejected.length));
+    expect(open).toContain(`aria-expanded="true">Show the first ${FIRST_ROWS} fits only</button>`);
+  });
+
+  it("counts fits and names the part the design uses", () => {
+    const html = renderRole(buffer, result, closed);
+    expect(html).toContain(
+      `<strong>${buffer.fits.length}</strong> of ${buffer.fits.length + buffer.rejected.length} fit. Best fit: ${buffer.chosen}.`,
+    );
+  });
+
+  it("draws the rail diagram of the chosen op amp", () => {
+    expect(renderRole(buffer, result, closed)).toMatch(
+      /<figure class="try-diagram"><svg class="rail-diagram"[^>]*aria-labelledby="try-rd-buffer-t try-rd-buffer-d"/,
+    );
+  });
+});
+
+describe("renderResults with hostile catalogue text", () => {
+  const template = catalogue.opAmps[0] as Part;
+  const hostile: Part = {
+    ...template,
+    id: "oa-hostile",
+    name: `"><img src=x onerror=alert(1)><script>alert(2)</script>`,
+    status: "stocked",
+    cost_band: 1,
+  };
+  const result = evaluate(
+    { ...DEFAULT_DRAFT, "supply.positive_v": "12", "supply.negative.kind": "fixed", "supply.negative.v": "-12" },
+    [hostile, ...catalogue.parts],
+  );
+  const html = renderResults(result, {
+    expanded: new Set(result.roles.flatMap((r) => [`${r.role}:fits`, `${r.role}:rejected`])),
+  });
+
+  it("shows the name as text, never as markup", () => {
+    expect(html).toContain("&quot;&gt;&lt;img src=x onerror=alert(1)&gt;&lt;script&gt;alert(2)&lt;/script&gt;");
+    expect(html).not.toMatch(/<img|<script|onerror=alert\(1\)>/);
+  });
+
+  it("has no inline style or script anywhere (the page's CSP forbids both)", () => {
+    expect(html).not.toMatch(/<[^>]*\sstyle=|<script|<[^>]*\son[a-z]+=/i);
+  });
+});
+
+describe("holdsLine", () => {
+  // Worded by the design pages' summary (src/site/design-summary.ts); here, that the page states the right case.
+  it.each([
+    ["the default design", {}, true, /^Every role has a fit and every BOM part fits\.$/],
+    [
+      "a BOM buffer that cannot reach the window",
+      { "bom.buffer": "oa-bip-gs-dual" },
+      false,
+      /oa-bip-gs-dual \(buffer\) does not fit/,
+    ],
+    [
+      "a 12 V rail that lifts every comparator output above the logic supply",
+      { "supply.positive_v": "12" },
+      false,
+      /^No part fits the sign comparator\.$/,
+    ],
+  ] as const)("%s", (_label, change, holds, line) => {
+    const result = holdsLine(evaluate({ ...DEFAULT_DRAFT, ...change }));
+    expect(result.holds).toBe(holds);
+    expect(result.line).toMatch(line);
+  });
+});
