@@ -41,7 +41,10 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
   if (bad.length > 0)
     problems.push(`BOM part${bad.length === 1 ? "" : "s"} ${list(bad)} ${bad.length === 1 ? "does" : "do"} not fit`);
   const b = result.budget;
-  const budget = `Accuracy budget ${b.verdict === "pass" ? "passes" : b.verdict === "marginal" ? "is marginal" : "fails"} (worst case ${formatSI(b.worst_case_v, "V")} against ${formatSI(b.required_v, "V")}).`;
+  const budget =
+    b.missing.length > 0
+      ? `Accuracy budget incomplete: no part for the ${list(b.missing.map((r) => ROLE_NAMES[r as Role].toLowerCase()))}.`
+      : `Accuracy budget ${b.verdict === "pass" ? "passes" : b.verdict === "marginal" ? "is marginal" : "fails"} (worst case ${formatSI(b.worst_case_v, "V")} against ${formatSI(b.required_v, "V")}).`;
   const compared = result.comparison ? ` Both topologies compared: ${result.comparison.recommended} recommended.` : "";
   const line = `${
     holds ? "Every role has a fit and every BOM part fits." : `${capitalize(problems.join("; ") || "the design does not hold")}.`
