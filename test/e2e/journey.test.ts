@@ -1,0 +1,224 @@
+// A reader's way through the demo site (issue 7 §2): home → catalogue → fuzzy
+// search with a typo → part page → design page → try page (change V+, a verdict
+// flips, the address follows, a reload restores it) → download the design file
+// and validate it with the CLI. The steps share one page and run in order.
+import { spawnSync } from "node:child_process";
+import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join, resolve } from "node:path";
+import type { Browser, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { parseDesignValue } from "../../src/core/designs.ts";
+import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import { loadDataSet, type DataSet } from "../../src/node/load-data.ts";
+import { buildSearchIndex } from "../../src/site/search-index.ts";
+import { projectNode, ROOT } from "./harness/build-site.ts";
+import { browserReady, openBrowser, openTracked, site, troubles, type Tracked } from "./harness/session.ts";
+import { screenshot, tryPageReady, visibleCatalogueRows } from "./harness/steps.ts";
+
+const TYPO = "rial to rial";
+const DESIGN = "bridge-10v-5v-adc";
+// In the try page's default design (the bridge design, pumped V− ≈ −3.16 V) this
+// class fits as buffer at V+ = 5 V (total 8.16 V); at V+ = 12 V the total of
+// 15.16 V exceeds its 12 V supply_max_v (data/op-amps.csv), a supply-range fail.
+const FLIPS = { part: "oa-nanopower-rro-12v", before: "pass", after: "fail", rule: "supply-range" };
+
+describe.skipIf(!browserReady)("a reader's journey through the demo site", () => {
+  let browser: Browser;
+  let t: Tracked;
+  let page: Page;
+  let data: DataSet;
+  let firstHit: string;
+  let downloaded: { name: string; text: string };
+
+  beforeAll(async () => {
+    data = loadDataSet(site("demo").dataDir);
+    browser = await openBrowser();
+    t = await openTracked(browser, "demo");
+    page = t.page;
+  });
+  afterAll(async () => browser?.close());
+
+  const h1 = () => page.getByRole("heading", { level: 1 }).textContent();
+  const mainNav = () => page.getByRole("navigation", { name: "Main" });
+
+  it("goes from the home page to the catalogue", async () => {
+    await page.goto(t.url());
+    expect(await h1()).toBe("railsieve");
+    await mainNav().getByRole("link", { name: "Catalogue" }).click();
+    await page.waitForURL(t.url("catalogue/"));
+    expect(await h1()).toBe("Catalogue");
+  });
+
+  it(`finds every rail-to-rail class from the typo "${TYPO}", best match first, and keeps the query in the address`, async () => {
+    await page.getByRole("searchbox", { name: "Search" }).pressSequentially(TYPO, { delay: 15 });
+    await page.locator("#catalogue-status-line", { hasText: `matching “${TYPO}”` }).waitFor();
+    const shown = await visibleCatalogueRows(page);
+    // The rail-to-rail classes are the ones the catalogue tags so (data/*.csv), 23 in the demo data.
+    const railToRail = data.catalogue.parts.filter((p) => p.tags.includes("rail-to-rail")).map((p) => p.id);
+    expect(railToRail).toHaveLength(23);
+    expect([...shown].sort()).toEqual([...railToRail].sort());
+    // Within each table the rows follow the search index's ranking.
+    const index = buildSearchIndex(data.catalogue.parts);
+    const kindOf = (id: string) => data.catalogue.byId.get(id)?.kind;
+    const ranked = index.search(TYPO).map((h) => h.id);
+    for (const kind of ["op-amp", "comparator"]) {
+      expect(shown.filter((id) => kindOf(id) === kind)).toEqual(ranked.filter((id) => kindOf(id) === kind));
+    }
+    expect(new URL(page.url()).searchParams.get("q")).toBe(TYPO);
+    firstHit = shown[0]!;
+    expect(kindOf(firstHit)).toBe("op-amp");
+  });
+
+  it("opens the best match's part page with its parameters in SI units and its fit in each design", async () => {
+    const part = data.catalogue.byId.get(firstHit)!;
+    await page.locator(`tr[data-id="${firstHit}"]`).getByRole("link", { name: part.name }).click();
+    await page.waitForURL(t.url(`parts/${firstHit}/`));
+    expect(await h1()).toBe(part.name);
+    const value = (column: string) => page.locator(`dl.values dt:has(code:text-is("${column}")) + dd`).textContent();
+    // oa-cmos-rrio-3m in data/op-amps.csv: gbw_mhz 3, ib_max_na 0.01 (= 10 pA), slew 2 V/µs.
+    expect(firstHit).toBe("oa-cmos-rrio-3m");
+    expect(await value("gbw_mhz")).toMatch(/^3(\.0+)? MHz$/);
+    expect(await value("ib_max_na")).toMatch(/^10(\.0+)? pA$/);
+    expect(await value("slew_v_per_us")).toMatch(/^2(\.0+)? V\/µs$/);
+    const cell = page.locator(`table.matrix a[href$="designs/${DESIGN}/#buffer--${firstHit}"]`);
+    expect(await cell.textContent()).toBe("rejected");
+    await cell.click();
+    await page.waitForURL(t.url(`designs/${DESIGN}/#buffer--${firstHit}`));
+  });
+
+  it("shows the design's buffer shortlist, every rejection with its reasons and numbers, and the rail diagrams", async () => {
+    const evaluation = evaluateDesign(data.designs.find((d) => d.design?.id === DESIGN)!.design!, data.catalogue);
+    if (!evaluation.ok) throw new Error(`${DESIGN} does not evaluate`);
+    const buffer = evaluation.result.roles.find((r) => r.role === "buffer")!;
+    const role = page.locator("#role-buffer");
+
+    // The link from the part page lands on its rejection, opened and in view.
+    const target = page.locator(`#buffer--${firstHit}`);
+    expect(await target.isVisible()).toBe(true);
+    const rejection = buffer.rejected.find((p) => p.part.id === firstHit)!;
+    const failing = rejection.findings.find((f) => f.rule === "supply-range")!;
+    expect(failing.verdict).toBe("fail");
+    const row = target.locator("table.findings tr", { has: page.locator(`th a:text-is("supply-range")`) });
+    expect(await row.locator("td").last().textContent()).toBe(failing.reason);
+    expect(failing.reason).toMatch(/\d\.\d+ V/);
+
+    // Shortlist: as many fits as the engine finds, best first, every reason with a number.
+    const fits = role.locator("ol.results > li");
+    expect(await fits.count()).toBe(buffer.fits.length);
+    expect(buffer.fits.length).toBeGreaterThan(0);
+    expect(await fits.first().locator("h4 a").textContent()).toBe(buffer.fits[0]!.part.name);
+    const fitReasons = await fits.locator("table.findings > tbody > tr > td:last-child").allInnerTexts();
+    // SPEC §7: unity-gain-stable and phase-reversal are yes/no; every other rule states numbers.
+    const numeric = buffer.fits.flatMap((p) =>
+      p.findings.filter((f) => !["unity-gain-stable", "phase-reversal"].includes(f.rule)),
+    );
+    expect(numeric.length).toBeGreaterThanOrEqual(buffer.fits.length * 5);
+    for (const f of numeric) {
+      expect(fitReasons).toContain(f.reason);
+      expect(f.reason).toMatch(/\d/);
+    }
+
+    // Rejections: all of them, each failing finding's reason on the page with its numbers.
+    // Arriving at a rejection's anchor opened the list already; a reader would not click it shut.
+    const details = role.locator("details.rejections");
+    expect(await details.evaluate((d) => (d as HTMLDetailsElement).open)).toBe(true);
+    const rejected = role.locator("details.rejections li.result");
+    expect(await rejected.count()).toBe(buffer.rejected.length);
+    const rejectionReasons = await rejected.locator("table.findings > tbody > tr > td:last-child").allInnerTexts();
+    for (const p of buffer.rejected) {
+      for (const f of p.findings.filter((f) => f.verdict === "fail")) expect(rejectionReasons).toContain(f.reason);
+    }
+
+    // One rail diagram per op amp in the role, drawing both rails.
+    const diagrams = role.locator("svg.rail-diagram");
+    const opAmps = [...buffer.fits, ...buffer.rejected].filter((p) => p.part.kind === "op-amp").length;
+    expect(await diagrams.count()).toBe(opAmps);
+    const first = diagrams.first();
+    expect(await first.getAttribute("role")).toBe("img");
+    expect(await first.locator("title").textContent()).toBe(
+      `Rail diagram: ${buffer.fits[0]!.part.name} as ${buffer.stage.label}`,
+    );
+    const labels = (await first.locator("text").allTextContents()).join(" ");
+    expect(labels).toMatch(/V− −3\.\d+ V/);
+    expect(labels).toMatch(/V\+ \+5\.00 V/);
+
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await screenshot(page, "design-page");
+    await screenshot(fits.first(), "design-page-buffer-best-fit");
+  });
+
+  const verdictOf = async (partId: string): Promise<string | null> => {
+    const row = page.locator(`#try-role-buffer tr[data-part="${partId}"]`);
+    if ((await row.count()) === 0) {
+      // Long lists show their first rows; open the rest as a reader would.
+      for (const more of await page.locator('#try-role-buffer button.try-more[aria-expanded="false"]').all())
+        await more.click();
+    }
+    return row.getAttribute("data-verdict");
+  };
+  const positiveRail = () => page.getByLabel("Positive rail V+");
+  const vPlusInAddress = () => new URL(page.url()).searchParams.get("supply.positive_v");
+
+  it("on the try page, changing V+ flips a verdict and puts the design in the address; a reload restores it", async () => {
+    await mainNav().getByRole("link", { name: "Try a design" }).click();
+    await tryPageReady(page);
+    expect(await positiveRail().inputValue()).toBe("5");
+    expect(await verdictOf(FLIPS.part)).toBe(FLIPS.before);
+
+    await positiveRail().fill("12");
+    // The page redraws the results before it writes the address, so once the address moved the results are new.
+    await page.waitForURL((url) => url.searchParams.get("supply.positive_v") === "12");
+    expect(await verdictOf(FLIPS.part)).toBe(FLIPS.after);
+    expect(await page.locator(`#try-role-buffer tr[data-part="${FLIPS.part}"] .try-reasons`).textContent()).toContain(
+      FLIPS.rule,
+    );
+
+    await page.reload();
+    await tryPageReady(page);
+    expect(vPlusInAddress()).toBe("12");
+    expect(await positiveRail().inputValue()).toBe("12");
+    expect(await verdictOf(FLIPS.part)).toBe(FLIPS.after);
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await screenshot(page, "try-page");
+  });
+
+  it("downloads the design file, which railsieve validate accepts in a copy of the data folder", async () => {
+    const [download] = await Promise.all([
+      page.waitForEvent("download"),
+      page.getByRole("button", { name: "Download design file" }).click(),
+    ]);
+    downloaded = { name: download.suggestedFilename(), text: readFileSync((await download.path())!, "utf8") };
+    const raw: unknown = JSON.parse(downloaded.text);
+    const parsed = parseDesignValue(downloaded.name, raw);
+    expect(parsed.problems).toEqual([]);
+    expect(parsed.design?.supply.positive_v).toBe(12);
+    expect(downloaded.name).toBe(`${parsed.design!.id}.json`);
+
+    const dir = mkdtempSync(join(tmpdir(), "railsieve-e2e-data-"));
+    try {
+      cpSync(site("demo").dataDir, dir, { recursive: true });
+      writeFileSync(join(dir, "designs", downloaded.name), downloaded.text);
+      const cli = spawnSync(projectNode(), [resolve(ROOT, "bin/railsieve.ts"), "validate", "--data", dir], {
+        cwd: ROOT,
+        encoding: "utf8",
+      });
+      expect({ status: cli.status, stderr: cli.stderr }).toEqual({ status: 0, stderr: "" });
+      expect(cli.stdout).toMatch(new RegExp(`valid: .*\\b${data.designs.length + 1} designs`));
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+
+  it("goes back to V+ = 5 V with the browser's back button", async () => {
+    await page.goBack();
+    await page.waitForURL((url) => url.searchParams.get("supply.positive_v") !== "12");
+    expect(await positiveRail().inputValue()).toBe("5");
+    expect(await verdictOf(FLIPS.part)).toBe(FLIPS.before);
+  });
+
+  it("fetched nothing from another host and met no broken link, console error or CSP violation on the way", () => {
+    expect(t.requests.length).toBeGreaterThan(5);
+    expect(troubles(t)).toEqual([]);
+  });
+});
