@@ -6,6 +6,11 @@ export default tseslint.config(
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
+    // Config files run in Node.
+    files: ["*.mjs", "*.js"],
+    languageOptions: { globals: { process: "readonly" } },
+  },
+  {
     files: ["**/*.ts"],
     rules: {
       // Unused arguments named with a leading underscore document an interface.
@@ -18,7 +23,14 @@ export default tseslint.config(
     rules: {
       "no-restricted-imports": [
         "error",
-        { patterns: [{ group: ["node:*", "astro", "astro:*", "fs", "path"], message: "src/core and rules/ stay pure: no Node, Astro or DOM imports." }] },
+        {
+          patterns: [
+            {
+              group: ["node:*", "astro", "astro:*", "fs", "path"],
+              message: "src/core and rules/ stay pure: no Node, Astro or DOM imports.",
+            },
+          ],
+        },
       ],
     },
   },

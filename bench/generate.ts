@@ -33,7 +33,9 @@ export function catalogueCsv(catalogue: Catalogue): Record<string, string> {
   const files: Record<string, string> = {};
   for (const spec of KINDS) {
     const columns = Object.keys(spec.columns);
-    const rows = catalogue.parts.filter((p) => p.kind === spec.kind).map((p) => columns.map((c) => cell((p as Record<string, unknown>)[c])).join(","));
+    const rows = catalogue.parts
+      .filter((p) => p.kind === spec.kind)
+      .map((p) => columns.map((c) => cell((p as Record<string, unknown>)[c])).join(","));
     files[spec.file] = `${[columns.join(","), ...rows].join("\n")}\n`;
   }
   return files;

@@ -23,7 +23,8 @@ function time(catalogue: Catalogue, design: Design, runs: number): { median: num
     const t0 = performance.now();
     const e = evaluateDesign(edited, catalogue);
     // Read what a page shows first: the top fits' reasons.
-    if (e.ok) for (const r of e.result.roles) for (const p of r.fits.slice(0, 5)) for (const f of p.findings) void f.reason;
+    if (e.ok)
+      for (const r of e.result.roles) for (const p of r.fits.slice(0, 5)) for (const f of p.findings) void f.reason;
     samples.push(performance.now() - t0);
   }
   samples.sort((a, b) => a - b);
@@ -59,4 +60,7 @@ rows.push(mem);
 
 const outDir = resolve(root, "bench/out");
 mkdirSync(outDir, { recursive: true });
-writeFileSync(resolve(outDir, "engine.txt"), `${new Date().toISOString()} node ${process.version}\n${rows.join("\n")}\n`);
+writeFileSync(
+  resolve(outDir, "engine.txt"),
+  `${new Date().toISOString()} node ${process.version}\n${rows.join("\n")}\n`,
+);

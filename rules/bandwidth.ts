@@ -16,9 +16,11 @@ export function singlePoleError(f: number, fc: number): number {
 
 export const bandwidth: Rule = {
   id: "bandwidth",
-  checks: "The closed-loop bandwidth keeps the gain error at the highest signal frequency inside this stage's share of the accuracy.",
+  checks:
+    "The closed-loop bandwidth keeps the gain error at the highest signal frequency inside this stage's share of the accuracy.",
   formula: "fc = gbw / noise_gain; error = (1 − 1/√(1 + (f/fc)²)) · peak_v; limit = speed_share · required_v",
-  source: "Single-pole response |H| = 1/√(1+(f/fc)²) (T. Fiore, Operational Amplifiers & Linear Integrated Circuits, ch. 5).",
+  source:
+    "Single-pole response |H| = 1/√(1+(f/fc)²) (T. Fiore, Operational Amplifiers & Linear Integrated Circuits, ch. 5).",
   policy: "speed_share",
   kinds: ["op-amp"],
   needs: { "op-amp": ["gbw_mhz"] },
@@ -39,7 +41,8 @@ export const bandwidth: Rule = {
       margin,
       unit: "V",
       limit,
-      reason: () => `at ${formatSI(f, "Hz")} with fc = ${formatSI(fc, "Hz")} (GBW ${formatSI(gbw, "Hz")} ÷ noise gain ${stage.noise_gain}) the gain falls short by ${formatSI(error, "V")} of the ${formatSI(stage.bandwidth_peak_v, "V")} peak; the limit is ${formatSI(limit, "V")}: ${spareOrShortSmall(margin)}`,
+      reason: () =>
+        `at ${formatSI(f, "Hz")} with fc = ${formatSI(fc, "Hz")} (GBW ${formatSI(gbw, "Hz")} ÷ noise gain ${stage.noise_gain}) the gain falls short by ${formatSI(error, "V")} of the ${formatSI(stage.bandwidth_peak_v, "V")} peak; the limit is ${formatSI(limit, "V")}: ${spareOrShortSmall(margin)}`,
       steps: () => [
         { label: "GBW", value: gbw, unit: "Hz" },
         { label: "fc = GBW / noise gain", value: fc, unit: "Hz" },

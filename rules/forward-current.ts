@@ -16,7 +16,8 @@ export const forwardCurrent: Rule = {
   needs: { diode: ["if_max_ma"] },
   evaluate({ part, stage, policy }) {
     const d = part as Diode;
-    if (stage.stage !== "diode" || stage.forward_a === undefined) throw new Error("forward-current needs a diode stage with a current");
+    if (stage.stage !== "diode" || stage.forward_a === undefined)
+      throw new Error("forward-current needs a diode stage with a current");
     const needed = stage.forward_a;
     const rated = d.if_max_ma * 1e-3;
     const margin = rated - needed;
@@ -27,7 +28,8 @@ export const forwardCurrent: Rule = {
       margin,
       unit: "A",
       limit: needed,
-      reason: () => `carries ${formatSI(needed, "A")} while conducting (twice the load); rated ${formatSI(rated, "A")}: ${spareOrShort(margin, "A")}`,
+      reason: () =>
+        `carries ${formatSI(needed, "A")} while conducting (twice the load); rated ${formatSI(rated, "A")}: ${spareOrShort(margin, "A")}`,
       steps: () => [
         { label: "needed = 2 × load_a", value: needed, unit: "A" },
         { label: "if_max", value: rated, unit: "A" },

@@ -15,11 +15,15 @@ export function commonModeMargin({ part, rails, stage }: RuleContext) {
 export const inputCommonMode: Rule = {
   id: "input-common-mode",
   checks: "The inputs stay inside the part's common-mode range over the whole signal window.",
-  formula: "low = V− + icm_neg_headroom_v, high = V+ − icm_pos_headroom_v; margin = min(needed low − low, high − needed high); needed is ±W for rectify-and-sign, b ± a·peak for the offset-to-mid-rail level shifter and V_ref for its reference buffer",
+  formula:
+    "low = V− + icm_neg_headroom_v, high = V+ − icm_pos_headroom_v; margin = min(needed low − low, high − needed high); needed is ±W for rectify-and-sign, b ± a·peak for the offset-to-mid-rail level shifter and V_ref for its reference buffer",
   source: "Datasheet input common-mode range, read inward from each rail (common practice).",
   policy: "headroom_margin_v",
   kinds: ["op-amp", "comparator"],
-  needs: { "op-amp": ["icm_neg_headroom_v", "icm_pos_headroom_v"], comparator: ["icm_neg_headroom_v", "icm_pos_headroom_v"] },
+  needs: {
+    "op-amp": ["icm_neg_headroom_v", "icm_pos_headroom_v"],
+    comparator: ["icm_neg_headroom_v", "icm_pos_headroom_v"],
+  },
   evaluate(ctx) {
     const m = commonModeMargin(ctx);
     return finding("input-common-mode", {
@@ -29,7 +33,8 @@ export const inputCommonMode: Rule = {
       margin: m.margin,
       unit: "V",
       limit: Math.max(Math.abs(m.needed), ctx.policy.headroom_margin_v),
-      reason: () => `needs inputs from ${volts(m.range.low)} to ${volts(m.range.high)}; with V− = ${volts(ctx.rails.negative_v)} and V+ = ${volts(ctx.rails.positive_v)} it accepts ${volts(m.reach.low)} to ${volts(m.reach.high)}: ${spareOrShort(m.margin, "V")}`,
+      reason: () =>
+        `needs inputs from ${volts(m.range.low)} to ${volts(m.range.high)}; with V− = ${volts(ctx.rails.negative_v)} and V+ = ${volts(ctx.rails.positive_v)} it accepts ${volts(m.reach.low)} to ${volts(m.reach.high)}: ${spareOrShort(m.margin, "V")}`,
       steps: () => [
         { label: "lowest input = V− + icm_neg_headroom_v", value: m.reach.low, unit: "V" },
         { label: "highest input = V+ − icm_pos_headroom_v", value: m.reach.high, unit: "V" },

@@ -17,7 +17,8 @@ export function leakageAt(d: Diode, maxC: number): number {
 
 export const leakage: Rule = {
   id: "leakage",
-  checks: "Reverse leakage at the hottest temperature, flowing through the resistance around the diode, stays inside its share of the error.",
+  checks:
+    "Reverse leakage at the hottest temperature, flowing through the resistance around the diode, stays inside its share of the error.",
   formula:
     "ir(T) = ir_na × 2^((T_max − 25)/10) (silicon, low-leakage) or × 10^((T_max − 25)/25) (Schottky); rectifier diode: ir(T) · rectifier_load_ohm / k ≤ offset_share · required_v; clamp diode: ir(T) · pull_down_ohm ≤ vil_v",
   source: "Leakage doubling per 10 °C and Schottky ×10 per 25 °C: common practice [M].",
@@ -44,7 +45,8 @@ export const leakage: Rule = {
       margin,
       unit: "V",
       limit,
-      reason: () => `leaks ${formatSI(ir, "A")} at ${hot} °C (${formatSI(d.ir_na * 1e-9, "A")} at 25 °C), × ${formatSI(ohm, "Ω")}${scale()} = ${formatSI(error, "V")}; the limit is ${formatSI(limit, "V")} (${stage.leakage_what ?? "error share"}): ${spareOrShortSmall(margin)}`,
+      reason: () =>
+        `leaks ${formatSI(ir, "A")} at ${hot} °C (${formatSI(d.ir_na * 1e-9, "A")} at 25 °C), × ${formatSI(ohm, "Ω")}${scale()} = ${formatSI(error, "V")}; the limit is ${formatSI(limit, "V")} (${stage.leakage_what ?? "error share"}): ${spareOrShortSmall(margin)}`,
       steps: () => [
         { label: "ir at 25 °C", value: d.ir_na * 1e-9, unit: "A" },
         { label: `ir at ${hot} °C`, value: ir, unit: "A" },

@@ -10,7 +10,8 @@ export const logicHigh: Rule = {
   checks: "When the signal is positive, the logic input sees a level above V_IH and not above its own supply.",
   formula:
     "diode-clamp: V_high = (V+ − out_pos_headroom_v) − Vf_clamp(V_OH / pull_down_ohm), margin = min(V_high − vih_v, vdd_v + 0.3 − V_high); pull-up: open-drain V_high = vdd_v, push-pull as diode-clamp without the diode; npn-inverter: output low must stay below 0.4 V to keep the NPN off, then V_high = vdd_v",
-  source: "Logic thresholds per the logic family (JEDEC JESD8C.01 for 3.3 V LVCMOS); input limits −0.3 V … V_DD + 0.3 V (common practice).",
+  source:
+    "Logic thresholds per the logic family (JEDEC JESD8C.01 for 3.3 V LVCMOS); input limits −0.3 V … V_DD + 0.3 V (common practice).",
   policy: "headroom_margin_v",
   kinds: ["comparator", "op-amp"],
   needs: {},
@@ -19,7 +20,16 @@ export const logicHigh: Rule = {
     const top = vdd + INPUT_CLAMP_V;
     const high = outputHigh(part, rails);
     const fail = (reason: string) =>
-      finding("logic-high", { verdict: "fail", needed: vih, available: 0, margin: -vih, unit: "V", limit: vih, reason, steps: [] });
+      finding("logic-high", {
+        verdict: "fail",
+        needed: vih,
+        available: 0,
+        margin: -vih,
+        unit: "V",
+        limit: vih,
+        reason,
+        steps: [],
+      });
 
     if (shift === "npn-inverter") {
       const low = outputLow(part, rails);
@@ -31,7 +41,8 @@ export const logicHigh: Rule = {
         margin,
         unit: "V",
         limit: vih,
-        reason: () => `the output low of ${volts(low)} must stay below ${formatVolts(NPN_OFF_BELOW_V)} to turn the NPN off, so the pull-up gives ${formatVolts(vdd)} against V_IH ${formatVolts(vih)}: ${spareOrShort(margin, "V")}`,
+        reason: () =>
+          `the output low of ${volts(low)} must stay below ${formatVolts(NPN_OFF_BELOW_V)} to turn the NPN off, so the pull-up gives ${formatVolts(vdd)} against V_IH ${formatVolts(vih)}: ${spareOrShort(margin, "V")}`,
         steps: () => [
           { label: "output low = V− + out_neg_headroom_v", value: low, unit: "V" },
           { label: "margin = min(0.4 V − output low, vdd − vih)", value: margin, unit: "V" },
@@ -48,11 +59,14 @@ export const logicHigh: Rule = {
           margin,
           unit: "V",
           limit: vih,
-          reason: () => `the open-drain output lets the pull-up lift the input to ${formatVolts(vdd)} against V_IH ${formatVolts(vih)}: ${spareOrShort(margin, "V")}`,
+          reason: () =>
+            `the open-drain output lets the pull-up lift the input to ${formatVolts(vdd)} against V_IH ${formatVolts(vih)}: ${spareOrShort(margin, "V")}`,
           steps: () => [{ label: "V_high = vdd", value: vdd, unit: "V" }],
         });
       }
-      return fail("an open-drain output cannot drive the clamp diode high; use a push-pull output or the pull-up level shift");
+      return fail(
+        "an open-drain output cannot drive the clamp diode high; use a push-pull output or the pull-up level shift",
+      );
     }
     let vf = 0;
     let current = 0;
@@ -63,8 +77,12 @@ export const logicHigh: Rule = {
     const level = high - vf;
     const margin = Math.min(level - vih, top - level);
     const tooHigh = top - level < level - vih;
-    const diode = () => (vf > 0 ? `, minus ${formatVolts(vf)} across the clamp diode at ${formatSI(current, "A")} = ${formatVolts(level)}` : "");
-    const bound = () => (tooHigh ? `needs at most ${formatVolts(top)} (V_DD + 0.3 V)` : `needs at least V_IH ${formatVolts(vih)}`);
+    const diode = () =>
+      vf > 0
+        ? `, minus ${formatVolts(vf)} across the clamp diode at ${formatSI(current, "A")} = ${formatVolts(level)}`
+        : "";
+    const bound = () =>
+      tooHigh ? `needs at most ${formatVolts(top)} (V_DD + 0.3 V)` : `needs at least V_IH ${formatVolts(vih)}`;
     return finding("logic-high", {
       verdict: voltageVerdict(margin, policy),
       needed: tooHigh ? top : vih,

@@ -9,7 +9,8 @@ export const logicLow: Rule = {
   checks: "When the signal is negative, the logic input sees a level below V_IL and not below −0.3 V.",
   formula:
     "diode-clamp: V_low = ir · pull_down_ohm, margin = vil_v − V_low; pull-up: V_low = V− + out_neg_headroom_v, margin = min(vil_v − V_low, V_low + 0.3); npn-inverter: V_OH must exceed 0.7 V + 0.3 V to saturate the NPN, V_low = 0.2 V",
-  source: "Logic thresholds per the logic family (JEDEC JESD8C.01 for 3.3 V LVCMOS); input limits −0.3 V … V_DD + 0.3 V (common practice).",
+  source:
+    "Logic thresholds per the logic family (JEDEC JESD8C.01 for 3.3 V LVCMOS); input limits −0.3 V … V_DD + 0.3 V (common practice).",
   policy: "headroom_margin_v",
   kinds: ["comparator", "op-amp"],
   needs: {},
@@ -26,7 +27,8 @@ export const logicLow: Rule = {
         margin,
         unit: "V",
         limit: vil,
-        reason: () => `with the output low the clamp diode blocks, and its leakage of ${formatSI(ir, "A")} × ${formatSI(pull, "Ω")} holds the input at ${formatSI(level, "V")}; needs at most V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
+        reason: () =>
+          `with the output low the clamp diode blocks, and its leakage of ${formatSI(ir, "A")} × ${formatSI(pull, "Ω")} holds the input at ${formatSI(level, "V")}; needs at most V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
         steps: () => [
           { label: "clamp diode leakage ir", value: ir, unit: "A" },
           { label: "V_low = ir × pull_down_ohm", value: level, unit: "V" },
@@ -57,7 +59,8 @@ export const logicLow: Rule = {
         margin,
         unit: "V",
         limit: vil,
-        reason: () => `the output high of ${volts(high)} must exceed ${formatVolts(drive)} to saturate the NPN, which then pulls the input to ${formatVolts(NPN_VCE_SAT_V)} against V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
+        reason: () =>
+          `the output high of ${volts(high)} must exceed ${formatVolts(drive)} to saturate the NPN, which then pulls the input to ${formatVolts(NPN_VCE_SAT_V)} against V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
         steps: () => [
           { label: "V_OH", value: high, unit: "V" },
           { label: "margin = min(V_OH − 1.0 V, vil − 0.2 V)", value: margin, unit: "V" },
@@ -74,7 +77,8 @@ export const logicLow: Rule = {
       margin,
       unit: "V",
       limit: vil,
-      reason: () => `the output low of ${volts(low)} reaches the input directly; ${tooLow ? "needs at least −0.30 V (below that the input's protection conducts)" : `needs at most V_IL ${formatVolts(vil)}`}: ${spareOrShort(margin, "V")}`,
+      reason: () =>
+        `the output low of ${volts(low)} reaches the input directly; ${tooLow ? "needs at least −0.30 V (below that the input's protection conducts)" : `needs at most V_IL ${formatVolts(vil)}`}: ${spareOrShort(margin, "V")}`,
       steps: () => [
         { label: "V_low = V− + out_neg_headroom_v", value: low, unit: "V" },
         { label: "vil − V_low", value: vil - low, unit: "V" },

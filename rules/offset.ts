@@ -16,10 +16,12 @@ export function stageOffset(p: OpAmp, vosMultiplier: number, biasOhm: number, mi
 
 export const offset: Rule = {
   id: "offset",
-  checks: "Input offset voltage and bias current through the source resistance stay inside this stage's share of the accuracy.",
+  checks:
+    "Input offset voltage and bias current through the source resistance stay inside this stage's share of the accuracy.",
   formula:
     "buffer: (Vos + Ib·R_th) / k; rectifier: (2·Vos + Ib·R_load) / k; Vos grows by drift × the largest distance of the temperature range from 25 °C; limit = offset_share · required_v; offset-to-mid-rail level shifter: (Vos + Ib·(R1‖R2‖R3)) / a; its reference buffer: Vos·(G/R2) / a",
-  source: "V_err = V_OS + I_B·R_S (op-amp error analysis, e.g. Fiore, Operational Amplifiers & Linear Integrated Circuits, ch. 5).",
+  source:
+    "V_err = V_OS + I_B·R_S (op-amp error analysis, e.g. Fiore, Operational Amplifiers & Linear Integrated Circuits, ch. 5).",
   policy: "offset_share",
   kinds: ["op-amp"],
   needs: { "op-amp": ["vos_max_mv", "ib_max_na"] },
@@ -42,7 +44,8 @@ export const offset: Rule = {
       margin,
       unit: "V",
       limit,
-      reason: () => `adds ${mv(error)} at the input (${mult}${mv(o.vos)} offset${drift()} + ${formatSI(o.ib, "A")} × ${formatSI(bias, "Ω")}${scale()}); the limit is ${mv(limit)}: ${spareOrShortSmall(margin)}`,
+      reason: () =>
+        `adds ${mv(error)} at the input (${mult}${mv(o.vos)} offset${drift()} + ${formatSI(o.ib, "A")} × ${formatSI(bias, "Ω")}${scale()}); the limit is ${mv(limit)}: ${spareOrShortSmall(margin)}`,
       steps: () => [
         { label: "Vos at 25 °C", value: o.vos25, unit: "V" },
         { label: "drift × temperature span", value: o.drift, unit: "V" },

@@ -27,7 +27,8 @@ export const outputSwing: Rule = {
       margin: m.margin,
       unit: "V",
       limit: Math.max(Math.abs(m.needed), policy.headroom_margin_v),
-      reason: () => `needs the output to reach ${volts(m.needed)}; ${railPhrase(m.side, rails)} it reaches ${only}${volts(m.reached)} (${formatVolts(headroom)} headroom): ${spareOrShort(m.margin, "V")}`,
+      reason: () =>
+        `needs the output to reach ${volts(m.needed)}; ${railPhrase(m.side, rails)} it reaches ${only}${volts(m.reached)} (${formatVolts(headroom)} headroom): ${spareOrShort(m.margin, "V")}`,
       steps: () => [
         { label: "lowest output = V− + out_neg_headroom_v", value: reach.low, unit: "V" },
         { label: "highest output = V+ − out_pos_headroom_v", value: reach.high, unit: "V" },

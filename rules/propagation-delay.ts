@@ -30,7 +30,8 @@ export const propagationDelay: Rule = {
         margin,
         unit: "s",
         limit,
-        reason: () => `an op amp used as a comparator: about ${formatSI(delay, "s")} to slew ${formatSI(swing, "V")} at ${formatQuantity(slew, "V/s")} against a limit of ${formatSI(limit, "s")} (${period()}): ${spareOrShort(margin, "s")}; its overload recovery is not rated, so at best marginal`,
+        reason: () =>
+          `an op amp used as a comparator: about ${formatSI(delay, "s")} to slew ${formatSI(swing, "V")} at ${formatQuantity(slew, "V/s")} against a limit of ${formatSI(limit, "s")} (${period()}): ${spareOrShort(margin, "s")}; its overload recovery is not rated, so at best marginal`,
         steps: () => [
           { label: "output swing V_OH − V_OL", value: swing, unit: "V" },
           { label: "slew rate", value: slew, unit: "V/s" },
@@ -50,7 +51,8 @@ export const propagationDelay: Rule = {
       margin,
       unit: "s",
       limit,
-      reason: () => `switches in ${formatSI(delay, "s")}; the limit is ${formatSI(limit, "s")} (${period()}): ${spareOrShort(margin, "s")}`,
+      reason: () =>
+        `switches in ${formatSI(delay, "s")}; the limit is ${formatSI(limit, "s")} (${period()}): ${spareOrShort(margin, "s")}`,
       steps: () => [
         { label: "tpd", value: delay, unit: "s" },
         { label: "limit = timing_fraction / f", value: limit, unit: "s" },

@@ -17,7 +17,8 @@ export const recovery: Rule = {
   needs: { diode: ["trr_ns"] },
   evaluate({ part, stage, policy }) {
     const d = part as Diode;
-    if (stage.stage !== "diode" || stage.recovery_limit_s === undefined) throw new Error("recovery needs a diode stage with a time limit");
+    if (stage.stage !== "diode" || stage.recovery_limit_s === undefined)
+      throw new Error("recovery needs a diode stage with a time limit");
     const trr = (d.trr_ns ?? 0) * 1e-9;
     const limit = stage.recovery_limit_s;
     const margin = limit - trr;
@@ -28,7 +29,8 @@ export const recovery: Rule = {
       margin,
       unit: "s",
       limit,
-      reason: () => `recovers in ${formatSI(trr, "s")}; the limit is ${formatSI(limit, "s")} (${stage.recovery_what ?? "timing allowance"}): ${spareOrShort(margin, "s")}`,
+      reason: () =>
+        `recovers in ${formatSI(trr, "s")}; the limit is ${formatSI(limit, "s")} (${stage.recovery_what ?? "timing allowance"}): ${spareOrShort(margin, "s")}`,
       steps: () => [
         { label: "trr", value: trr, unit: "s" },
         { label: `limit (${stage.recovery_what ?? "timing allowance"})`, value: limit, unit: "s" },

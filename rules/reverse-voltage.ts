@@ -23,7 +23,8 @@ export const reverseVoltage: Rule = {
       margin,
       unit: "V",
       limit: stage.reverse_v,
-      reason: () => `must block ${formatVolts(stage.reverse_v)} (${stage.reverse_what ?? "reverse"}); rated ${formatVolts(d.vr_max_v)}: ${spareOrShort(margin, "V")}`,
+      reason: () =>
+        `must block ${formatVolts(stage.reverse_v)} (${stage.reverse_what ?? "reverse"}); rated ${formatVolts(d.vr_max_v)}: ${spareOrShort(margin, "V")}`,
       steps: () => [
         { label: `needed = ${stage.reverse_what ?? "reverse voltage"}`, value: stage.reverse_v, unit: "V" },
         { label: "vr_max_v", value: d.vr_max_v, unit: "V" },

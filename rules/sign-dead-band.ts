@@ -27,7 +27,8 @@ export const signDeadBand: Rule = {
       margin,
       unit: "V",
       limit,
-      reason: () => `the sign can be wrong within ${formatSI(band, "V")} of zero at the input (2 × ${formatSI(vos, "V")} ÷ ${Number(k.toPrecision(3))}); the limit is ${formatSI(limit, "V")}: ${spareOrShortSmall(margin)}`,
+      reason: () =>
+        `the sign can be wrong within ${formatSI(band, "V")} of zero at the input (2 × ${formatSI(vos, "V")} ÷ ${Number(k.toPrecision(3))}); the limit is ${formatSI(limit, "V")}: ${spareOrShortSmall(margin)}`,
       steps: () => [
         { label: "Vos", value: vos, unit: "V" },
         { label: "k", value: k, unit: "" },

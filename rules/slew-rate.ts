@@ -7,7 +7,8 @@ import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 export const slewRate: Rule = {
   id: "slew-rate",
   checks: "The op amp slews fast enough to follow a full-scale sine at the highest signal frequency.",
-  formula: "needed = 2π · f · W (rectifier: 2π · f · (W + Vf); level shifter: 2π · f · a · peak); margin = slew − needed",
+  formula:
+    "needed = 2π · f · W (rectifier: 2π · f · (W + Vf); level shifter: 2π · f · a · peak); margin = slew − needed",
   source: "Full-power bandwidth f = SR / (2π·Vp) (worked example, NPTEL course 117107094, lecture 7).",
   policy: "marginal_fraction",
   kinds: ["op-amp"],
@@ -26,7 +27,8 @@ export const slewRate: Rule = {
       margin,
       unit: "V/s",
       limit: needed,
-      reason: () => `needs ${formatQuantity(needed, "V/s")} (2π × ${formatSI(f, "Hz")} × ${formatSI(stage.slew_amplitude_v, "V")}); slews ${formatQuantity(slew, "V/s")}: ${spareOrShort(margin, "V/s")}`,
+      reason: () =>
+        `needs ${formatQuantity(needed, "V/s")} (2π × ${formatSI(f, "Hz")} × ${formatSI(stage.slew_amplitude_v, "V")}); slews ${formatQuantity(slew, "V/s")}: ${spareOrShort(margin, "V/s")}`,
       steps: () => [
         { label: "amplitude to follow", value: stage.slew_amplitude_v, unit: "V" },
         { label: "needed = 2π·f·amplitude", value: needed, unit: "V/s" },

@@ -27,7 +27,8 @@ export const supplyRange: Rule = {
       margin,
       unit: "V",
       limit: vs,
-      reason: () => `needs a supply of ${formatVolts(vs)} (V+ ${formatVolts(rails.positive_v)}, V− ${formatVolts(rails.negative_v)}); rated ${formatVolts(p.supply_min_v)} to ${formatVolts(p.supply_max_v)}: ${spareOrShort(margin, "V")}`,
+      reason: () =>
+        `needs a supply of ${formatVolts(vs)} (V+ ${formatVolts(rails.positive_v)}, V− ${formatVolts(rails.negative_v)}); rated ${formatVolts(p.supply_min_v)} to ${formatVolts(p.supply_max_v)}: ${spareOrShort(margin, "V")}`,
       steps: () => [
         { label: "Vs = V+ − V−", value: vs, unit: "V" },
         { label: "Vs − supply_min_v", value: aboveMin, unit: "V" },

@@ -28,7 +28,8 @@ export const zeroCrossing: Rule = {
       margin,
       unit: "s",
       limit,
-      reason: () => `jumps ${formatSI(jump, "V")} (two diode drops) at ${formatQuantity(slew, "V/s")} in ${formatSI(time, "s")}; the limit is ${formatSI(limit, "s")} (${policy.timing_fraction * 100} % of the ${formatSI(1 / f, "s")} period): ${spareOrShort(margin, "s")}`,
+      reason: () =>
+        `jumps ${formatSI(jump, "V")} (two diode drops) at ${formatQuantity(slew, "V/s")} in ${formatSI(time, "s")}; the limit is ${formatSI(limit, "s")} (${policy.timing_fraction * 100} % of the ${formatSI(1 / f, "s")} period): ${spareOrShort(margin, "s")}`,
       steps: () => [
         { label: "jump = 2·Vf", value: jump, unit: "V" },
         { label: "slew rate", value: slew, unit: "V/s" },

@@ -16,7 +16,9 @@ const old = `${outDir}.old`;
 const { problems } = loadDataSet(dataDir);
 if (problems.length > 0) {
   for (const p of problems) console.error(formatProblem(p));
-  console.error(`railsieve: build stopped: ${problems.length} problem${problems.length === 1 ? "" : "s"} in ${dataDir}; ${existsSync(outDir) ? "the previous site in dist/ is unchanged" : "nothing was written"}`);
+  console.error(
+    `railsieve: build stopped: ${problems.length} problem${problems.length === 1 ? "" : "s"} in ${dataDir}; ${existsSync(outDir) ? "the previous site in dist/ is unchanged" : "nothing was written"}`,
+  );
   process.exit(2);
 }
 

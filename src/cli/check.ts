@@ -35,7 +35,8 @@ export function evaluateFiles(args: ParsedArgs, data: string): DesignResult[] {
 
 export function runCheck(args: ParsedArgs, data: string, io: Io): number {
   const format = flag(args, "format") ?? "text";
-  if (!(FORMATS as readonly string[]).includes(format)) throw new UsageError(`unknown format '${format}' (expected text, json or csv)`);
+  if (!(FORMATS as readonly string[]).includes(format))
+    throw new UsageError(`unknown format '${format}' (expected text, json or csv)`);
   const results = evaluateFiles(args, data);
   if (format === "json") io.out(renderJson(results));
   else if (format === "csv") io.out(renderCsv(results));

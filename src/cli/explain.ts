@@ -18,7 +18,9 @@ export function runExplain(args: ParsedArgs, data: string, io: Io): number {
   const wanted = flag(args, "role");
   const roles = result.roles.filter((r) => wanted === undefined || r.role === wanted);
   if (wanted !== undefined && roles.length === 0) {
-    throw new UsageError(`design ${result.design.id} has no role '${wanted}' (expected one of ${result.roles.map((r) => r.role).join(", ")})`);
+    throw new UsageError(
+      `design ${result.design.id} has no role '${wanted}' (expected one of ${result.roles.map((r) => r.role).join(", ")})`,
+    );
   }
   const entries = roles.flatMap((role) => {
     const p = [...role.fits, ...role.rejected].find((x) => x.part.id === partId);
@@ -37,7 +39,11 @@ export function runExplain(args: ParsedArgs, data: string, io: Io): number {
 }
 
 export function renderExplain(role: RoleResult, p: PartResult, io: Pick<Io, "color">): string {
-  const lines = [paint(io, "bold", `${p.part.id} as ${role.role} (${role.label})`), `  ${p.part.name}`, `  verdict: ${paint(io, p.verdict, p.verdict)}`];
+  const lines = [
+    paint(io, "bold", `${p.part.id} as ${role.role} (${role.label})`),
+    `  ${p.part.name}`,
+    `  verdict: ${paint(io, p.verdict, p.verdict)}`,
+  ];
   for (const f of p.findings) {
     lines.push("", `  ${VERDICT_MARK[f.verdict]} ${paint(io, f.verdict, f.rule)}: ${f.verdict}`);
     for (const s of f.steps) lines.push(`      ${s.label.padEnd(46)} ${formatStep(s.value, s.unit)}`);

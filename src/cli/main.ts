@@ -19,7 +19,8 @@ export async function main(argv: readonly string[], io: Io): Promise<number> {
     const data = dataDir(flag(args, "data"));
     switch (args.command) {
       case "validate":
-        if (args.positional.length > 0) throw new UsageError(`validate takes no file names (got '${args.positional[0]}'); use --data DIR`);
+        if (args.positional.length > 0)
+          throw new UsageError(`validate takes no file names (got '${args.positional[0]}'); use --data DIR`);
         return runValidate(data, io);
       case "check":
         return runCheck(args, data, io);
@@ -42,7 +43,9 @@ export async function main(argv: readonly string[], io: Io): Promise<number> {
     }
     // A bug, not bad input: say so plainly, and keep the trace for a bug report.
     const message = e instanceof Error ? e.message : String(e);
-    io.err(`railsieve: internal error: ${message}\nPlease report this with the files you ran it on.${process.env.RAILSIEVE_DEBUG && e instanceof Error ? `\n${e.stack}` : " (set RAILSIEVE_DEBUG=1 for details)"}\n`);
+    io.err(
+      `railsieve: internal error: ${message}\nPlease report this with the files you ran it on.${process.env.RAILSIEVE_DEBUG && e instanceof Error ? `\n${e.stack}` : " (set RAILSIEVE_DEBUG=1 for details)"}\n`,
+    );
     return 70;
   }
 }

@@ -28,7 +28,9 @@ export function designJson(result: DesignResult): Record<string, unknown> {
     topology: result.topology,
     holds: designHolds(result),
     rails: { positive_v: x.rails.positive_v, negative_v: x.rails.negative_v },
-    divider: x.divider ? { top_ohm: x.divider.top_ohm, bottom_ohm: x.divider.bottom_ohm, ratio: x.divider.ratio } : null,
+    divider: x.divider
+      ? { top_ohm: x.divider.top_ohm, bottom_ohm: x.divider.bottom_ohm, ratio: x.divider.ratio }
+      : null,
     window_v: x.window_v,
     roles: result.roles.map((r) => ({
       role: r.role,
@@ -66,7 +68,9 @@ function comparisonJson(result: DesignResult) {
     recommended: c.recommended,
     reason: c.reason,
     rows: c.rows,
-    topologies: c.results.filter((r) => r.topology !== result.topology).map((r) => designJson({ ...r, comparison: undefined })),
+    topologies: c.results
+      .filter((r) => r.topology !== result.topology)
+      .map((r) => designJson({ ...r, comparison: undefined })),
   };
 }
 

@@ -22,7 +22,14 @@ function renderComparison(result: DesignResult, io: Pick<Io, "color">): string {
   const out = [paint(io, "bold", wrap(`${result.design.id} — both topologies compared`, WIDTH, "  ", ""))];
   for (const row of c.rows) {
     out.push(`  ${row.topology}${row.topology === c.recommended ? "  (recommended)" : ""}`);
-    out.push(wrap(`roles: ${row.roles.map((r) => `${r.role} ${r.fits} fit${r.fits === 1 ? "" : "s"}${r.chosen ? ` (${r.chosen})` : ""}`).join("; ")}`, WIDTH, "      ", "    "));
+    out.push(
+      wrap(
+        `roles: ${row.roles.map((r) => `${r.role} ${r.fits} fit${r.fits === 1 ? "" : "s"}${r.chosen ? ` (${r.chosen})` : ""}`).join("; ")}`,
+        WIDTH,
+        "      ",
+        "    ",
+      ),
+    );
     out.push(
       wrap(
         `budget ${row.budget_verdict} (worst case ${formatSI(row.budget_worst_case_v, "V")}, largest term ${row.dominant ?? "none"}); ${row.effective_bits.toFixed(1)} effective bits; ${row.part_count} parts, cost bands ${row.cost_total}`,
@@ -42,14 +49,23 @@ function renderSingle(result: DesignResult, io: Pick<Io, "color">): string {
   const out: string[] = [];
   out.push(paint(io, "bold", wrap(`${d.id} — ${d.title}`, WIDTH, "  ", "")));
   out.push(`  topology   ${result.topology}`);
-  out.push(wrap(`V+ ${formatVolts(x.rails.positive_v)}, V− ${formatVolts(x.rails.negative_v)}${negativeNote(result)}`, WIDTH, "             ", "  rails      "));
+  out.push(
+    wrap(
+      `V+ ${formatVolts(x.rails.positive_v)}, V− ${formatVolts(x.rails.negative_v)}${negativeNote(result)}`,
+      WIDTH,
+      "             ",
+      "  rails      ",
+    ),
+  );
   out.push(
     x.divider
       ? `  divider    ${formatSI(x.divider.top_ohm, "Ω")} over ${formatSI(x.divider.bottom_ohm, "Ω")} (${d.front_end.series}), k = ${x.ratio.toFixed(4)}`
       : "  divider    none (the signal already fits the window), k = 1",
   );
   out.push(`  window     ±${formatVolts(x.window_v)}; source seen by the buffer ${formatSI(x.thevenin_ohm, "Ω")}`);
-  out.push(`  ADC step   ${formatSI(x.adc_step_at_input_v, "V")} at the input (${d.adc.bits} bits, ${formatVolts(d.adc.reference_v)} reference)`);
+  out.push(
+    `  ADC step   ${formatSI(x.adc_step_at_input_v, "V")} at the input (${d.adc.bits} bits, ${formatVolts(d.adc.reference_v)} reference)`,
+  );
   for (const note of result.notes) out.push(wrap(`note: ${note}`, WIDTH, "    ", "  "));
   if (d.signal.peak_v > 30) {
     out.push(
@@ -91,12 +107,22 @@ function renderBudget(result: DesignResult): string[] {
   out.push(`    ${"worst case (sum)".padEnd(54)} ${formatSI(b.worst_case_v, "V").padStart(9)}`);
   out.push(`    ${"root-sum-square (JCGM 100:2008)".padEnd(54)} ${formatSI(b.rss_v, "V").padStart(9)}`);
   out.push(
-    wrap(`verdict: ${b.verdict}; after a one-point gain calibration: ${b.calibrated.verdict} (worst case ${formatSI(b.calibrated.worst_case_v, "V")})`, WIDTH, "      ", "    "),
+    wrap(
+      `verdict: ${b.verdict}; after a one-point gain calibration: ${b.calibrated.verdict} (worst case ${formatSI(b.calibrated.worst_case_v, "V")})`,
+      WIDTH,
+      "      ",
+      "    ",
+    ),
   );
   if (b.missing.length > 0) out.push(`    incomplete: no part for ${b.missing.join(", ")}, so its errors are unknown`);
   out.push(`    effective ADC bits used: ${b.effective_bits.toFixed(2)}`);
   const c = result.conversion;
-  out.push("", "  firmware conversion", wrap(c.formula, WIDTH, "      ", "    "), wrap(c.sign, WIDTH, "      ", "    "));
+  out.push(
+    "",
+    "  firmware conversion",
+    wrap(c.formula, WIDTH, "      ", "    "),
+    wrap(c.sign, WIDTH, "      ", "    "),
+  );
   return out;
 }
 
@@ -108,7 +134,9 @@ function negativeNote(result: DesignResult): string {
 }
 
 function renderRole(role: RoleResult, io: Pick<Io, "color">): string[] {
-  const lines: string[] = [wrap(`${paint(io, "bold", role.role)} — ${role.label}`, WIDTH + (io.color ? 8 : 0), "      ", "  ")];
+  const lines: string[] = [
+    wrap(`${paint(io, "bold", role.role)} — ${role.label}`, WIDTH + (io.color ? 8 : 0), "      ", "  "),
+  ];
   lines.push(`    fits (${role.fits.length}):${role.fits.length === 0 ? " none" : ""}`);
   role.fits.forEach((p, i) => lines.push(...renderPart(p, `${i + 1}.`, io)));
   lines.push(`    rejected (${role.rejected.length}):${role.rejected.length === 0 ? " none" : ""}`);
@@ -117,7 +145,11 @@ function renderRole(role: RoleResult, io: Pick<Io, "color">): string[] {
 }
 
 function renderPart(p: PartResult, bullet: string, io: Pick<Io, "color">): string[] {
-  const marks = [p.part.status, p.part.cost_band !== undefined ? `cost ${p.part.cost_band}` : "cost ?", ...(p.bom ? ["BOM"] : [])];
+  const marks = [
+    p.part.status,
+    p.part.cost_band !== undefined ? `cost ${p.part.cost_band}` : "cost ?",
+    ...(p.bom ? ["BOM"] : []),
+  ];
   const verdict = paint(io, p.verdict, `${VERDICT_MARK[p.verdict]} ${p.verdict}`);
   const lines = [`    ${bullet} ${verdict}  ${p.part.id}  [${marks.join(", ")}]`];
   for (const f of p.findings) {

@@ -12,7 +12,13 @@ export type PartKind = Part["kind"];
 
 export const KINDS = [
   { kind: "op-amp", file: "op-amps.csv", plural: "op amps", columns: opAmpColumns, row: opAmpRow },
-  { kind: "comparator", file: "comparators.csv", plural: "comparators", columns: comparatorColumns, row: comparatorRow },
+  {
+    kind: "comparator",
+    file: "comparators.csv",
+    plural: "comparators",
+    columns: comparatorColumns,
+    row: comparatorRow,
+  },
   { kind: "diode", file: "diodes.csv", plural: "diodes", columns: diodeColumns, row: diodeRow },
 ] as const;
 
@@ -48,7 +54,11 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
   const body = (text.startsWith("\uFEFF") ? text.slice(1) : text).replace(/\r\n?/g, "\n");
 
   if (body.trim() === "") {
-    return { value: [], lines, problems: [{ file, message: `file is empty (expected a header row: ${known.join(",")})` }] };
+    return {
+      value: [],
+      lines,
+      problems: [{ file, message: `file is empty (expected a header row: ${known.join(",")})` }],
+    };
   }
   const longLine = findLongLine(body);
   if (longLine) {
@@ -98,7 +108,12 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
   columns.forEach((c, i) => {
     if (known.includes(c)) {
       if (columns.indexOf(c) !== i) {
-        problems.push({ file, line: headerLine, column: c, message: "column appears twice (expected each column once)" });
+        problems.push({
+          file,
+          line: headerLine,
+          column: c,
+          message: "column appears twice (expected each column once)",
+        });
         headerOk = false;
       }
       return;
@@ -114,7 +129,12 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
   });
   for (const required of requiredColumns(spec.columns)) {
     if (!columns.includes(required)) {
-      problems.push({ file, line: headerLine, column: required, message: "required column is missing (expected it in the header)" });
+      problems.push({
+        file,
+        line: headerLine,
+        column: required,
+        message: "required column is missing (expected it in the header)",
+      });
       headerOk = false;
     }
   }

@@ -30,8 +30,16 @@ export function issuesToProblems(file: string, issues: readonly z.core.$ZodIssue
       const known = knownKeysAt(path, raw);
       for (const key of issue.keys) {
         const guess = closest(key, known);
-        const expected = guess ? `'${guess}'` : known.length > 0 ? `one of ${known.map((k) => `'${k}'`).join(", ")}` : "no other key here";
-        problems.push({ file, path: [...path, key].join("."), message: `unknown key (got '${key}', expected ${expected})` });
+        const expected = guess
+          ? `'${guess}'`
+          : known.length > 0
+            ? `one of ${known.map((k) => `'${k}'`).join(", ")}`
+            : "no other key here";
+        problems.push({
+          file,
+          path: [...path, key].join("."),
+          message: `unknown key (got '${key}', expected ${expected})`,
+        });
       }
       continue;
     }
@@ -43,7 +51,11 @@ export function issuesToProblems(file: string, issues: readonly z.core.$ZodIssue
     if (issue.code === "invalid_type") {
       const value = valueAt(raw, path);
       const what = value === undefined ? "required value is missing" : "wrong type";
-      problems.push({ file, path: path.join("."), message: `${what} (got ${shown(value)}, expected ${expectedName(issue.expected)})` });
+      problems.push({
+        file,
+        path: path.join("."),
+        message: `${what} (got ${shown(value)}, expected ${expectedName(issue.expected)})`,
+      });
       continue;
     }
     problems.push({ file, path: path.join("."), message: issue.message });
@@ -96,7 +108,10 @@ function shapeOf(schema: unknown, value: unknown): Record<string, unknown> | und
     }
     const inner = (s.def?.innerType ?? s.def?.in) as SchemaNode | undefined;
     // A pipe from z.unknown() keeps its structure on the output side.
-    s = inner?.shape || inner?.def?.innerType || inner?.def?.in || inner?.def?.options ? inner : ((s.def?.out as SchemaNode | undefined) ?? inner);
+    s =
+      inner?.shape || inner?.def?.innerType || inner?.def?.in || inner?.def?.options
+        ? inner
+        : ((s.def?.out as SchemaNode | undefined) ?? inner);
   }
   return undefined;
 }
@@ -108,7 +123,10 @@ function jsonProblem(file: string, text: string, e: unknown): Problem {
   let line: number | undefined;
   if (lineCol) line = Number(lineCol[1]);
   else if (at) line = text.slice(0, Number(at[1])).split("\n").length;
-  const reason = message.replace(/^JSON\.parse: /, "").replace(/ in JSON at position \d+.*$/, "").replace(/ \(line \d+ column \d+\)$/, "");
+  const reason = message
+    .replace(/^JSON\.parse: /, "")
+    .replace(/ in JSON at position \d+.*$/, "")
+    .replace(/ \(line \d+ column \d+\)$/, "");
   return {
     file,
     ...(line !== undefined ? { line } : {}),
@@ -124,7 +142,11 @@ export function checkDesignSet(files: DesignFile[]): Problem[] {
     if (!f.design) continue;
     const first = seen.get(f.design.id);
     if (first !== undefined) {
-      problems.push({ file: f.file, path: "id", message: `duplicate design id (got '${f.design.id}', expected an id not already used in ${first})` });
+      problems.push({
+        file: f.file,
+        path: "id",
+        message: `duplicate design id (got '${f.design.id}', expected an id not already used in ${first})`,
+      });
     } else seen.set(f.design.id, f.file);
   }
   return problems;

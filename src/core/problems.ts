@@ -14,7 +14,8 @@ export type Problem = {
 
 export function formatProblem(p: Problem): string {
   const where = p.line === undefined ? p.file : `${p.file}:${p.line}`;
-  const what = p.column !== undefined ? ` column '${p.column}':` : p.path !== undefined && p.path !== "" ? ` ${p.path}:` : "";
+  const what =
+    p.column !== undefined ? ` column '${p.column}':` : p.path !== undefined && p.path !== "" ? ` ${p.path}:` : "";
   return visible(`${where}:${what} ${p.message}`);
 }
 

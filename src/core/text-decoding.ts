@@ -45,7 +45,8 @@ function firstInvalidUtf8(bytes: Uint8Array): { line: number; offset: number } {
   while (i < bytes.length) {
     const b = bytes[i] ?? 0;
     if (b === 0x0a) line++;
-    const extra = b < 0x80 ? 0 : b >= 0xc2 && b <= 0xdf ? 1 : b >= 0xe0 && b <= 0xef ? 2 : b >= 0xf0 && b <= 0xf4 ? 3 : -1;
+    const extra =
+      b < 0x80 ? 0 : b >= 0xc2 && b <= 0xdf ? 1 : b >= 0xe0 && b <= 0xef ? 2 : b >= 0xf0 && b <= 0xf4 ? 3 : -1;
     if (extra < 0) return { line, offset: i };
     for (let k = 1; k <= extra; k++) {
       const c = bytes[i + k];

@@ -30,7 +30,13 @@ export function readText(path: string): { text?: string; problem?: Problem } {
   const file = displayPath(path);
   let bytes: Uint8Array;
   try {
-    if (statSync(path).size > MAX_FILE_BYTES) return { problem: { file, message: `file is larger than ${MAX_FILE_BYTES / 1024 / 1024} MB (expected a catalogue or design file)` } };
+    if (statSync(path).size > MAX_FILE_BYTES)
+      return {
+        problem: {
+          file,
+          message: `file is larger than ${MAX_FILE_BYTES / 1024 / 1024} MB (expected a catalogue or design file)`,
+        },
+      };
     bytes = readFileSync(path);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
@@ -86,7 +92,11 @@ export function loadDataSet(dir: string): DataSet {
   const nameProblems: Problem[] = [];
   for (const d of designs) {
     if (d.design && basename(d.file, ".json") !== d.design.id) {
-      nameProblems.push({ file: d.file, path: "id", message: `id does not match the file name (got '${d.design.id}', expected '${basename(d.file, ".json")}')` });
+      nameProblems.push({
+        file: d.file,
+        path: "id",
+        message: `id does not match the file name (got '${d.design.id}', expected '${basename(d.file, ".json")}')`,
+      });
     }
   }
   const problems = [...catalogueProblems, ...designProblems, ...nameProblems];

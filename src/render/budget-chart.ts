@@ -35,10 +35,12 @@ export function renderBudgetChart(budget: Budget, idPrefix = "budget"): string {
     );
   });
   const yTotals = rows.length * ROW_H + 8;
-  for (const [i, [label, v, cls]] of ([
-    ["worst case (sum)", budget.worst_case_v, "budget-bar-total"],
-    ["root-sum-square", budget.rss_v, "budget-bar-rss"],
-  ] as const).entries()) {
+  for (const [i, [label, v, cls]] of (
+    [
+      ["worst case (sum)", budget.worst_case_v, "budget-bar-total"],
+      ["root-sum-square", budget.rss_v, "budget-bar-rss"],
+    ] as const
+  ).entries()) {
     const y = yTotals + i * ROW_H;
     parts.push(
       `<text class="budget-label budget-total-label" x="${LABEL_W - 8}" y="${y + 15}" text-anchor="end">${label}</text>`,

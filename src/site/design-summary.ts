@@ -47,7 +47,9 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
       : `Accuracy budget ${b.verdict === "pass" ? "passes" : b.verdict === "marginal" ? "is marginal" : "fails"} (worst case ${formatSI(b.worst_case_v, "V")} against ${formatSI(b.required_v, "V")}).`;
   const compared = result.comparison ? ` Both topologies compared: ${result.comparison.recommended} recommended.` : "";
   const line = `${
-    holds ? "Every role has a fit and every BOM part fits." : `${capitalize(problems.join("; ") || "the design does not hold")}.`
+    holds
+      ? "Every role has a fit and every BOM part fits."
+      : `${capitalize(problems.join("; ") || "the design does not hold")}.`
   } ${budget}${compared}`;
   return { ok: true, holds, line, roles };
 }

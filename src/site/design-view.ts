@@ -164,14 +164,14 @@ export function derivedGroups(result: DesignResult): ValueGroup[] {
         { label: "Output span for ±peak", value: `${formatVolts(n.output_low_v)} … ${formatVolts(n.output_high_v)}` },
       ]
     : d.divider
-    ? [
-        { label: "Target ratio = window ÷ peak", value: ratio(d.target_ratio) },
-        { label: `Top resistor R1 (${result.design.front_end.series})`, value: si(d.divider.top_ohm, "Ω") },
-        { label: `Bottom resistor R2 (${result.design.front_end.series})`, value: si(d.divider.bottom_ohm, "Ω") },
-        { label: "Ratio k = R2 / (R1 + R2)", value: ratio(d.divider.ratio) },
-        { label: "Total R1 + R2", value: si(d.divider.total_ohm, "Ω") },
-      ]
-    : [{ label: "Divider", value: "none: the peak already fits the window (k = 1)" }];
+      ? [
+          { label: "Target ratio = window ÷ peak", value: ratio(d.target_ratio) },
+          { label: `Top resistor R1 (${result.design.front_end.series})`, value: si(d.divider.top_ohm, "Ω") },
+          { label: `Bottom resistor R2 (${result.design.front_end.series})`, value: si(d.divider.bottom_ohm, "Ω") },
+          { label: "Ratio k = R2 / (R1 + R2)", value: ratio(d.divider.ratio) },
+          { label: "Total R1 + R2", value: si(d.divider.total_ohm, "Ω") },
+        ]
+      : [{ label: "Divider", value: "none: the peak already fits the window (k = 1)" }];
   const signal: ValueRow[] = [
     n
       ? { label: "Swing about mid-rail a · peak", value: `±${formatVolts(d.window_v)}` }

@@ -23,7 +23,13 @@ const baseDesign = {
   topology: "rectify-and-sign",
   supply: { positive_v: 5, negative: { kind: "fixed", v: -5 } },
   signal: { peak_v: 10, max_frequency_hz: 200, source_ohm: 1000 },
-  front_end: { window_v: 2.5, divider_total_ohm: 100000, resistor_tolerance: 0.01, series: "E24", rectifier_load_ohm: 10000 },
+  front_end: {
+    window_v: 2.5,
+    divider_total_ohm: 100000,
+    resistor_tolerance: 0.01,
+    series: "E24",
+    rectifier_load_ohm: 10000,
+  },
   adc: { bits: 10, reference_v: 5, reference_tolerance: 0.01 },
   logic: { vdd_v: 5, vih_v: 3.0, vil_v: 1.5, level_shift: "diode-clamp", pull_down_ohm: 10000 },
   accuracy: { required_v: 0.1 },
@@ -42,10 +48,19 @@ describe("check --format json", () => {
     for (const d of json.designs) {
       expect(Object.keys(d)).toEqual(expect.arrayContaining(["id", "rails", "divider", "window_v", "roles", "budget"]));
       const budget = d.budget as Record<string, unknown>;
-      expect(Object.keys(budget)).toEqual(expect.arrayContaining(["terms", "worst_case_v", "rss_v", "required_v", "verdict"]));
-      for (const role of d.roles as { kind: string; fits: { part: string; findings: unknown[] }[]; rejected: { part: string; verdict: string; findings: { margin: number | null; verdict: string }[] }[] }[]) {
+      expect(Object.keys(budget)).toEqual(
+        expect.arrayContaining(["terms", "worst_case_v", "rss_v", "required_v", "verdict"]),
+      );
+      for (const role of d.roles as {
+        kind: string;
+        fits: { part: string; findings: unknown[] }[];
+        rejected: { part: string; verdict: string; findings: { margin: number | null; verdict: string }[] }[];
+      }[]) {
         const kinds = role.kind === "comparator" ? ["comparator", "op-amp"] : [role.kind];
-        const expected = catalogue.parts.filter((p) => kinds.includes(p.kind)).map((p) => p.id).sort();
+        const expected = catalogue.parts
+          .filter((p) => kinds.includes(p.kind))
+          .map((p) => p.id)
+          .sort();
         const seen = [...role.fits, ...role.rejected].map((p) => p.part).sort();
         expect(seen).toEqual(expected);
         for (const r of role.rejected) {
@@ -66,7 +81,12 @@ describe("check --format json", () => {
 
 describe("issue 3 acceptance", () => {
   it("chooses 39 kΩ over 13 kΩ for 10 V into 2.5 V from E24 at 100 kΩ", async () => {
-    const { out } = await run("check", tempDesign(() => undefined), "--format", "json");
+    const { out } = await run(
+      "check",
+      tempDesign(() => undefined),
+      "--format",
+      "json",
+    );
     expect(JSON.parse(out).designs[0].divider).toEqual({ top_ohm: 39000, bottom_ohm: 13000, ratio: 0.25 });
   });
 
@@ -78,7 +98,9 @@ describe("issue 3 acceptance", () => {
     const { code, out } = await run("check", file);
     expect(code).toBe(1);
     const flat = out.replace(/\n\s+/g, " ");
-    expect(flat).toMatch(/result: buffer: no part fits; every candidate fails output-swing, e\.g\. [a-z0-9-]+: needs the output to reach −2\.50 V; with V− = 0\.00 V it reaches only/);
+    expect(flat).toMatch(
+      /result: buffer: no part fits; every candidate fails output-swing, e\.g\. [a-z0-9-]+: needs the output to reach −2\.50 V; with V− = 0\.00 V it reaches only/,
+    );
   });
 });
 
@@ -91,7 +113,9 @@ describe("check, text and csv", () => {
   it("writes one CSV row per design, role, part and rule, neutralising formula cells", async () => {
     const { out } = await run("check", "data/designs/bridge-10v-5v-adc.json", "--format", "csv");
     const lines = out.trimEnd().split("\r\n");
-    expect(lines[0]).toBe("design,topology,role,part,part_verdict,fits,bom,rule,verdict,needed,available,margin,unit,reason");
+    expect(lines[0]).toBe(
+      "design,topology,role,part,part_verdict,fits,bom,rule,verdict,needed,available,margin,unit,reason",
+    );
     expect(lines.some((l) => l.startsWith("bridge-10v-5v-adc,rectify-and-sign,buffer,"))).toBe(true);
     expect(lines.some((l) => l.includes(",budget,") && l.includes(",quantization,"))).toBe(true);
   });
@@ -105,9 +129,25 @@ describe("check, text and csv", () => {
 
 describe("explain", () => {
   it("shows every rule's arithmetic step by step", async () => {
-    const { code, out } = await run("explain", "oa-bip-gs-lowoffset", "data/designs/bridge-10v-5v-adc.json", "--role", "rectifier");
+    const { code, out } = await run(
+      "explain",
+      "oa-bip-gs-lowoffset",
+      "data/designs/bridge-10v-5v-adc.json",
+      "--role",
+      "rectifier",
+    );
     expect(code).toBe(0);
-    for (const rule of ["supply-range", "input-common-mode", "output-swing", "unity-gain-stable", "phase-reversal", "offset", "bandwidth", "slew-rate", "zero-crossing"]) {
+    for (const rule of [
+      "supply-range",
+      "input-common-mode",
+      "output-swing",
+      "unity-gain-stable",
+      "phase-reversal",
+      "offset",
+      "bandwidth",
+      "slew-rate",
+      "zero-crossing",
+    ]) {
       expect(out).toContain(`${rule}:`);
     }
     expect(out).toContain("margin = min(needed low − lowest, highest − needed high)");
@@ -116,7 +156,9 @@ describe("explain", () => {
   it("names an unknown part clearly", async () => {
     const { code, err } = await run("explain", "no-such-part", "data/designs/bridge-10v-5v-adc.json");
     expect(code).toBe(2);
-    expect(err.split("\n")[0]).toMatchInlineSnapshot(`"railsieve: no part 'no-such-part' in the catalogue takes a role in bridge-10v-5v-adc (check the id with 'railsieve validate')"`);
+    expect(err.split("\n")[0]).toMatchInlineSnapshot(
+      `"railsieve: no part 'no-such-part' in the catalogue takes a role in bridge-10v-5v-adc (check the id with 'railsieve validate')"`,
+    );
   });
 });
 

@@ -19,7 +19,13 @@ describe("summarizeDesign", () => {
   it("holds when every role has a fit and every BOM part fits", () => {
     const s = summarizeDesign(entry());
     expect(s).toEqual(
-      expect.objectContaining({ ok: true, holds: true, line: expect.stringMatching(/^Every role has a fit and every BOM part fits\. Accuracy budget (passes|is marginal|fails) \(worst case /) }),
+      expect.objectContaining({
+        ok: true,
+        holds: true,
+        line: expect.stringMatching(
+          /^Every role has a fit and every BOM part fits\. Accuracy budget (passes|is marginal|fails) \(worst case /,
+        ),
+      }),
     );
     expect(s.ok && s.roles.map((r) => `${r.name} ${r.fits}/${r.total}`)).toEqual([
       "Buffer 1/2",
@@ -40,7 +46,9 @@ describe("summarizeDesign", () => {
     // A ±10 V signal through a 0.25 divider makes both op amps' offset too large (SPEC §7 offset rule).
     const s = summarizeDesign(entry({ signal: { peak_v: 10 }, front_end: { divider_total_ohm: 40000 } }));
     expect(s).toEqual(expect.objectContaining({ ok: true, holds: false }));
-    expect(s.line).toMatchInlineSnapshot(`"No part fits the buffer and rectifier. Accuracy budget incomplete: no part for the buffer and rectifier."`);
+    expect(s.line).toMatchInlineSnapshot(
+      `"No part fits the buffer and rectifier. Accuracy budget incomplete: no part for the buffer and rectifier."`,
+    );
   });
 
   it("says when the design cannot be evaluated", () => {

@@ -47,19 +47,31 @@ export function sumTerms(terms: readonly BudgetTerm[], required: number): Budget
   return { worst_case_v: worst, rss_v: rss, verdict, dominant: dominant?.name ?? null };
 }
 
-export function buildBudget(design: Design, fixed: BudgetTerm[], roleTerms: readonly RoleTerm[], roles: readonly RoleResult[], effectiveBits: number): Budget {
+export function buildBudget(
+  design: Design,
+  fixed: BudgetTerm[],
+  roleTerms: readonly RoleTerm[],
+  roles: readonly RoleResult[],
+  effectiveBits: number,
+): Budget {
   const terms = [...fixed];
   const missing: string[] = [];
   for (const rt of roleTerms) {
     const role = roles.find((r) => r.role === rt.role);
     if (!role) continue;
-    const chosen = role.chosen === undefined ? undefined : [...role.fits, ...role.rejected].find((p) => p.part.id === role.chosen);
+    const chosen =
+      role.chosen === undefined ? undefined : [...role.fits, ...role.rejected].find((p) => p.part.id === role.chosen);
     const f = chosen?.findings.find((x) => x.rule === rt.rule);
     if (!chosen || !f || f.available === null) {
       if (!role.optional && !missing.includes(rt.role)) missing.push(rt.role);
       continue;
     }
-    terms.push({ name: rt.name, label: `${rt.label} (${chosen.part.id})`, v: Math.abs(f.available), calibrates_out: false });
+    terms.push({
+      name: rt.name,
+      label: `${rt.label} (${chosen.part.id})`,
+      v: Math.abs(f.available),
+      calibrates_out: false,
+    });
   }
   const required = design.accuracy.required_v;
   const all = sumTerms(terms, required);

@@ -21,7 +21,11 @@ export function compare(results: DesignResult[], catalogue: Catalogue): Comparis
     return {
       topology: r.topology,
       holds: designHolds(r),
-      roles: r.roles.map((role) => ({ role: role.role, fits: role.fits.length, ...(role.chosen !== undefined ? { chosen: role.chosen } : {}) })),
+      roles: r.roles.map((role) => ({
+        role: role.role,
+        fits: role.fits.length,
+        ...(role.chosen !== undefined ? { chosen: role.chosen } : {}),
+      })),
       effective_bits: r.budget.effective_bits,
       budget_verdict: r.budget.verdict,
       budget_worst_case_v: r.budget.worst_case_v,

@@ -57,13 +57,24 @@ function runRules(rules: readonly Rule[], ctx: Omit<RuleContext, "part">, part: 
   for (const rule of rules) {
     const needs = rule.needs[part.kind];
     if (needs !== undefined && needs.some((c) => cells[c] === undefined)) {
-      findings.push(unratedFinding(rule.id, needs.filter((c) => cells[c] === undefined), unitOf(rule.id)));
+      findings.push(
+        unratedFinding(
+          rule.id,
+          needs.filter((c) => cells[c] === undefined),
+          unitOf(rule.id),
+        ),
+      );
     } else findings.push(rule.evaluate(partCtx));
   }
   return findings;
 }
 
-export function evaluatePart(rules: readonly Rule[], ctx: Omit<RuleContext, "part">, part: Part, bom: boolean): PartResult {
+export function evaluatePart(
+  rules: readonly Rule[],
+  ctx: Omit<RuleContext, "part">,
+  part: Part,
+  bom: boolean,
+): PartResult {
   return new LazyPartResult(rules, ctx, part, bom);
 }
 

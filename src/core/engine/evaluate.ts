@@ -30,23 +30,36 @@ function specOf(role: Role): RoleSpec | undefined {
 }
 
 /** BOM entries must name a part of a kind the role takes, for a role the design has. */
-export function checkBom(design: Design, catalogue: Catalogue, topologies: readonly SingleTopology[] = [topologyOf(design)]): DesignProblem[] {
+export function checkBom(
+  design: Design,
+  catalogue: Catalogue,
+  topologies: readonly SingleTopology[] = [topologyOf(design)],
+): DesignProblem[] {
   const problems: DesignProblem[] = [];
   const roles = topologies.flatMap((t) => rolesOf(design, t));
   for (const [role, id] of Object.entries(design.bom) as [Role, string][]) {
     const path = `bom.${role}`;
     const spec = specOf(role);
     if (!spec || !roles.includes(role)) {
-      problems.push({ path, message: `role is not used by this design (got '${role}', expected one of ${roles.join(", ")})` });
+      problems.push({
+        path,
+        message: `role is not used by this design (got '${role}', expected one of ${roles.join(", ")})`,
+      });
       continue;
     }
     const part = catalogue.byId.get(id);
     const wanted = spec.kinds.map((k) => KIND_WORDS[k]).join(" or ");
     if (!part) {
       const sample = catalogue.parts.find((p) => spec.kinds.includes(p.kind))?.id;
-      problems.push({ path, message: `names no part in the catalogue (got '${id}', expected the id of ${wanted}${sample ? ` such as '${sample}'` : ""})` });
+      problems.push({
+        path,
+        message: `names no part in the catalogue (got '${id}', expected the id of ${wanted}${sample ? ` such as '${sample}'` : ""})`,
+      });
     } else if (!spec.kinds.includes(part.kind)) {
-      problems.push({ path, message: `names a part of the wrong kind (got '${id}', ${KIND_WORDS[part.kind]}, expected ${wanted})` });
+      problems.push({
+        path,
+        message: `names a part of the wrong kind (got '${id}', ${KIND_WORDS[part.kind]}, expected ${wanted})`,
+      });
     }
   }
   return problems;
@@ -58,7 +71,9 @@ function evaluateTopology(design: Design, catalogue: Catalogue, topology: Single
   const own = rolesOf(design, topology);
   const bom = Object.fromEntries(Object.entries(design.bom).filter(([role]) => own.includes(role as Role)));
   const scoped = { ...design, bom };
-  return topology === "offset-to-mid-rail" ? evaluateOffsetToMidRail(scoped, catalogue) : evaluateRectifyAndSign(scoped, catalogue);
+  return topology === "offset-to-mid-rail"
+    ? evaluateOffsetToMidRail(scoped, catalogue)
+    : evaluateRectifyAndSign(scoped, catalogue);
 }
 
 /**

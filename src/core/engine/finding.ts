@@ -64,7 +64,10 @@ export function finding(rule: string, f: FindingInput): Finding {
 }
 
 /** Which side of a needed range binds, against a reachable range. */
-export function rangeMargin(needed: Range, reach: Range): { margin: number; side: "low" | "high"; needed: number; reached: number } {
+export function rangeMargin(
+  needed: Range,
+  reach: Range,
+): { margin: number; side: "low" | "high"; needed: number; reached: number } {
   const lowMargin = needed.low - reach.low;
   const highMargin = reach.high - needed.high;
   return lowMargin <= highMargin

@@ -31,10 +31,7 @@ export type DiodeUse = { id: string; vf_v: number; current_a: number; fits: bool
 
 export type Derived = {
   rails: Rails;
-  negative:
-    | { kind: "ground" }
-    | { kind: "fixed" }
-    | ({ kind: "charge-pump"; diode: DiodeUse } & PumpRail);
+  negative: { kind: "ground" } | { kind: "fixed" } | ({ kind: "charge-pump"; diode: DiodeUse } & PumpRail);
   /** Target ratio window/peak (1 when no divider is needed). */
   target_ratio: number;
   divider: Divider | null;

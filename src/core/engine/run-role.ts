@@ -8,7 +8,14 @@ import type { Rails, Rule, Stage } from "./types.ts";
 
 export type RoleSpec = { kind: PartKind; kinds: PartKind[]; label: string; rules: RuleId[]; optional?: boolean };
 
-export function runRole(design: Design, role: Role, spec: RoleSpec, stage: Stage, rails: Rails, candidates: readonly Part[]): RoleResult {
+export function runRole(
+  design: Design,
+  role: Role,
+  spec: RoleSpec,
+  stage: Stage,
+  rails: Rails,
+  candidates: readonly Part[],
+): RoleResult {
   const rules = spec.rules.map((id) => RULES_BY_ID.get(id)).filter((r): r is Rule => r !== undefined);
   const bom = design.bom[role];
   const ctx = { role, stage, design, policy: design.policy, rails };

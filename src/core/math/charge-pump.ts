@@ -1,5 +1,11 @@
 // The diode/capacitor inverting charge pump of SPEC §6, driven by a square wave.
-export type PumpInput = { drive_v: number; frequency_hz: number; flying_cap_f: number; reservoir_cap_f: number; load_a: number };
+export type PumpInput = {
+  drive_v: number;
+  frequency_hz: number;
+  flying_cap_f: number;
+  reservoir_cap_f: number;
+  load_a: number;
+};
 
 export type PumpRail = {
   /** Two diode drops at the load current. */

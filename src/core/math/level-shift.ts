@@ -44,11 +44,18 @@ export function networkOf(r1: number, r2: number, r3: number | null, vref: numbe
  * `scaleOhm` sets R1's size (the design's divider_total_ohm). Returns undefined
  * when no combination of nearby values fits.
  */
-export function chooseLevelShift(peak: number, vref: number, margin: number, scaleOhm: number, series: SeriesName): LevelShiftNetwork | undefined {
+export function chooseLevelShift(
+  peak: number,
+  vref: number,
+  margin: number,
+  scaleOhm: number,
+  series: SeriesName,
+): LevelShiftNetwork | undefined {
   const span = vref / 2 - margin;
   if (!(span > 0)) return undefined;
   const target = Math.min(0.5, span / peak);
-  const fits = (n: LevelShiftNetwork) => n.offset_v - n.gain * peak >= margin - 1e-12 && n.offset_v + n.gain * peak <= vref - margin + 1e-12;
+  const fits = (n: LevelShiftNetwork) =>
+    n.offset_v - n.gain * peak >= margin - 1e-12 && n.offset_v + n.gain * peak <= vref - margin + 1e-12;
   const better = (n: LevelShiftNetwork, best: LevelShiftNetwork | undefined) => {
     if (!best) return true;
     if (Math.abs(n.gain - best.gain) > 1e-9 * best.gain) return n.gain > best.gain;
@@ -96,7 +103,12 @@ export function networkToleranceError(n: LevelShiftNetwork, t: number, peak: num
   for (const s1 of [-1, 1]) {
     for (const s2 of [-1, 1]) {
       for (const s3 of n.r3_ohm === null ? [0] : [-1, 1]) {
-        const m = networkOf(n.r1_ohm * (1 + s1 * t), n.r2_ohm * (1 + s2 * t), n.r3_ohm === null ? null : n.r3_ohm * (1 + s3 * t), vref);
+        const m = networkOf(
+          n.r1_ohm * (1 + s1 * t),
+          n.r2_ohm * (1 + s2 * t),
+          n.r3_ohm === null ? null : n.r3_ohm * (1 + s3 * t),
+          vref,
+        );
         for (const vin of [-peak, peak]) {
           const err = Math.abs(m.gain * vin + m.offset_v - (n.gain * vin + n.offset_v)) / n.gain;
           worst = Math.max(worst, err);

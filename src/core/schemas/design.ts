@@ -14,7 +14,7 @@ function describe(r: Range): string {
   if (r.min !== undefined) bounds.push(`at least ${r.min}`);
   if (r.below !== undefined) bounds.push(`less than ${r.below}`);
   if (r.max !== undefined) bounds.push(`at most ${r.max}`);
-  const what = r.integer ? "a whole number" : "a number (or a string such as \"100k\")";
+  const what = r.integer ? "a whole number" : 'a number (or a string such as "100k")';
   return bounds.length === 0 ? what : `${what}, ${bounds.join(" and ")}`;
 }
 
@@ -44,7 +44,8 @@ export function si(range: Range = {}) {
       if (parsed.ok) n = parsed.value;
     }
     if (n === undefined || !Number.isFinite(n)) {
-      const what = value === undefined ? "required value is missing" : typeof value === "number" ? "out of range" : "not a number";
+      const what =
+        value === undefined ? "required value is missing" : typeof value === "number" ? "out of range" : "not a number";
       ctx.addIssue({ code: "custom", message: `${what} (got ${shown(value)}, expected ${expected})` });
       return z.NEVER;
     }
@@ -108,17 +109,19 @@ const chargePump = z.strictObject({
   load_a: si({ min: 0 }),
 });
 
-const negativeSupply = z.unknown().pipe(
-  z.discriminatedUnion(
-    "kind",
-    [
-      z.strictObject({ kind: z.literal("ground") }),
-      z.strictObject({ kind: z.literal("fixed"), v: si({ below: 0, min: -100 }) }),
-      chargePump,
-    ],
-    { error: (iss) => negativeKindMessage(iss.input) },
-  ),
-);
+const negativeSupply = z
+  .unknown()
+  .pipe(
+    z.discriminatedUnion(
+      "kind",
+      [
+        z.strictObject({ kind: z.literal("ground") }),
+        z.strictObject({ kind: z.literal("fixed"), v: si({ below: 0, min: -100 }) }),
+        chargePump,
+      ],
+      { error: (iss) => negativeKindMessage(iss.input) },
+    ),
+  );
 
 function negativeKindMessage(input: unknown): string {
   const kind = typeof input === "object" && input !== null ? (input as { kind?: unknown }).kind : input;
@@ -133,7 +136,9 @@ const policy = z
     speed_share: si({ above: 0, max: 1 }).optional(),
     sign_share: si({ above: 0, max: 1 }).optional(),
     timing_fraction: si({ above: 0, max: 1 }).optional(),
-    allow_unrated: z.boolean({ error: (i) => `not true or false (got ${shown(i.input)}, expected true or false)` }).optional(),
+    allow_unrated: z
+      .boolean({ error: (i) => `not true or false (got ${shown(i.input)}, expected true or false)` })
+      .optional(),
   })
   .optional()
   .transform((p) => ({ ...POLICY_DEFAULTS, ...stripUndefined(p ?? {}) }));
@@ -145,7 +150,10 @@ function stripUndefined<T extends object>(o: T): Partial<T> {
 const text = (what: string, max: number) =>
   z.unknown().transform((value, ctx): string => {
     if (typeof value === "string" && value.trim() !== "" && value.length <= max) return value;
-    ctx.addIssue({ code: "custom", message: `not a valid ${what} (got ${shown(value)}, expected text of 1 to ${max} characters)` });
+    ctx.addIssue({
+      code: "custom",
+      message: `not a valid ${what} (got ${shown(value)}, expected text of 1 to ${max} characters)`,
+    });
     return z.NEVER;
   });
 
@@ -163,7 +171,10 @@ const bom = z
     z.string().transform((key, ctx): Role => {
       if ((ROLES as readonly string[]).includes(key)) return key as Role;
       const guess = closest(key, ROLES);
-      ctx.addIssue({ code: "custom", message: `unknown role (got '${key}', expected ${guess ? `'${guess}'` : `one of ${ROLES.join(", ")}`})` });
+      ctx.addIssue({
+        code: "custom",
+        message: `unknown role (got '${key}', expected ${guess ? `'${guess}'` : `one of ${ROLES.join(", ")}`})`,
+      });
       return z.NEVER;
     }),
     designId,
@@ -224,13 +235,22 @@ export const designSchema = z
       );
     }
     if (d.logic.vil_v >= d.logic.vih_v) {
-      issue(["logic", "vil_v"], `logic-low threshold is not below logic-high (got ${d.logic.vil_v} V, expected less than logic.vih_v ${d.logic.vih_v} V)`);
+      issue(
+        ["logic", "vil_v"],
+        `logic-low threshold is not below logic-high (got ${d.logic.vil_v} V, expected less than logic.vih_v ${d.logic.vih_v} V)`,
+      );
     }
     if (d.logic.vih_v > d.logic.vdd_v) {
-      issue(["logic", "vih_v"], `logic-high threshold is above the logic supply (got ${d.logic.vih_v} V, expected at most logic.vdd_v ${d.logic.vdd_v} V)`);
+      issue(
+        ["logic", "vih_v"],
+        `logic-high threshold is above the logic supply (got ${d.logic.vih_v} V, expected at most logic.vdd_v ${d.logic.vdd_v} V)`,
+      );
     }
     if (d.temperature.min_c > d.temperature.max_c) {
-      issue(["temperature", "min_c"], `range is upside down (got ${d.temperature.min_c} °C, expected at most temperature.max_c ${d.temperature.max_c} °C)`);
+      issue(
+        ["temperature", "min_c"],
+        `range is upside down (got ${d.temperature.min_c} °C, expected at most temperature.max_c ${d.temperature.max_c} °C)`,
+      );
     }
     if (d.supply.negative.kind === "charge-pump" && d.supply.negative.drive_v > d.supply.positive_v + 0.5) {
       issue(

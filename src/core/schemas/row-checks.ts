@@ -48,7 +48,8 @@ export function checkPushPullLevels(
       ctx.addIssue({
         code: "custom",
         path: [column],
-        message: "required value is missing for a push-pull output (got '', expected a number such as 0.5, 500m or 2.2k)",
+        message:
+          "required value is missing for a push-pull output (got '', expected a number such as 0.5, 500m or 2.2k)",
       });
     }
   }

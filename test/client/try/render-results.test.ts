@@ -98,7 +98,12 @@ describe("renderResults with hostile catalogue text", () => {
 describe("holdsLine", () => {
   // Worded by the design pages' summary (src/site/design-summary.ts); here, that the page states the right case.
   it.each([
-    ["the default design", {}, true, /^Every role has a fit and every BOM part fits\. Accuracy budget is marginal \(worst case 114 mV against 100 mV\)\.$/],
+    [
+      "the default design",
+      {},
+      true,
+      /^Every role has a fit and every BOM part fits\. Accuracy budget is marginal \(worst case 114 mV against 100 mV\)\.$/,
+    ],
     [
       "a BOM buffer that cannot reach the window",
       { "bom.buffer": "oa-bip-gs-dual" },

@@ -4,7 +4,12 @@ import { buildBudget, sumTerms, type BudgetTerm } from "../../../src/core/engine
 import { fixedTerms } from "../../../src/core/engine/topologies/rectify-and-sign.ts";
 import { designSchema, type DesignInput } from "../../../src/core/schemas/design.ts";
 
-const term = (name: string, v: number, calibrates_out = false): BudgetTerm => ({ name, label: name, v, calibrates_out });
+const term = (name: string, v: number, calibrates_out = false): BudgetTerm => ({
+  name,
+  label: name,
+  v,
+  calibrates_out,
+});
 
 function design(overrides: Partial<Record<string, unknown>> = {}) {
   const base: DesignInput = {
@@ -13,7 +18,13 @@ function design(overrides: Partial<Record<string, unknown>> = {}) {
     topology: "rectify-and-sign",
     supply: { positive_v: 5, negative: { kind: "fixed", v: -5 } },
     signal: { peak_v: 10, max_frequency_hz: 200, source_ohm: 0 },
-    front_end: { window_v: 2.5, divider_total_ohm: 40000, resistor_tolerance: 0.01, series: "E24", rectifier_load_ohm: 10000 },
+    front_end: {
+      window_v: 2.5,
+      divider_total_ohm: 40000,
+      resistor_tolerance: 0.01,
+      series: "E24",
+      rectifier_load_ohm: 10000,
+    },
     adc: { bits: 10, reference_v: 5, reference_tolerance: 0.01 },
     logic: { vdd_v: 5, vih_v: 3.5, vil_v: 1.5, level_shift: "diode-clamp", pull_down_ohm: 10000 },
     accuracy: { required_v: 0.1 },
@@ -42,7 +53,12 @@ describe("sumTerms", () => {
     [[0.03, 0.04], 0.05, "marginal"],
     [[0.03, 0.04], 0.049, "fail"],
   ] as const)("terms %j against %s V are %s", (values, required, verdict) => {
-    expect(sumTerms(values.map((v, i) => term(`t${i}`, v)), required).verdict).toBe(verdict);
+    expect(
+      sumTerms(
+        values.map((v, i) => term(`t${i}`, v)),
+        required,
+      ).verdict,
+    ).toBe(verdict);
   });
 });
 
@@ -75,14 +91,26 @@ describe("buildBudget", () => {
   it("marks a budget with a role lacking a part as failed and names the role", () => {
     const d = design();
     const roles = [{ role: "buffer", fits: [], rejected: [], optional: false }] as never;
-    const b = buildBudget(d, [term("quantization", 0.001)], [{ name: "buffer-offset", label: "buffer", role: "buffer", rule: "offset" }], roles, 10);
+    const b = buildBudget(
+      d,
+      [term("quantization", 0.001)],
+      [{ name: "buffer-offset", label: "buffer", role: "buffer", rule: "offset" }],
+      roles,
+      10,
+    );
     expect(b.missing).toEqual(["buffer"]);
     expect(b.verdict).toBe("fail");
   });
 
   it("after calibration keeps only the terms a gain calibration cannot remove", () => {
     const d = design();
-    const b = buildBudget(d, [term("quantization", 0.01), term("reference", 0.1, true), term("divider-ratio", 0.05, true)], [], [], 10);
+    const b = buildBudget(
+      d,
+      [term("quantization", 0.01), term("reference", 0.1, true), term("divider-ratio", 0.05, true)],
+      [],
+      [],
+      10,
+    );
     expect(b.verdict).toBe("fail");
     expect(b.calibrated.worst_case_v).toBeCloseTo(0.01, 12);
     expect(b.calibrated.verdict).toBe("pass");

@@ -34,7 +34,10 @@ describe("comparison of both topologies", () => {
         expect(Number.isFinite(b.worst_case_v) && Number.isFinite(b.rss_v)).toBe(true);
         expect(b.rss_v).toBeLessThanOrEqual(b.worst_case_v + 1e-15);
         expect(["pass", "marginal", "fail"]).toContain(b.verdict);
-        expect(e.result.conversion.volts_per_code).toBeCloseTo(f.design.adc.reference_v / 2 ** f.design.adc.bits / e.result.derived.ratio, 12);
+        expect(e.result.conversion.volts_per_code).toBeCloseTo(
+          f.design.adc.reference_v / 2 ** f.design.adc.bits / e.result.derived.ratio,
+          12,
+        );
       }
     }
   });

@@ -9,7 +9,13 @@ describe("millmanNode", () => {
   // Millman, "A useful network theorem", Proc. IRE 28(9), 1940: V = Σ(Vᵢ/Rᵢ) / Σ(1/Rᵢ).
   // Three equal 10 kΩ branches from 10 V, 5 V and 0 V meet at (10 + 5 + 0)/3 = 5 V.
   it("averages equal branches", () => {
-    expect(millmanNode([{ v: 10, ohm: 10e3 }, { v: 5, ohm: 10e3 }, { v: 0, ohm: 10e3 }])).toBeCloseTo(5, 12);
+    expect(
+      millmanNode([
+        { v: 10, ohm: 10e3 },
+        { v: 5, ohm: 10e3 },
+        { v: 0, ohm: 10e3 },
+      ]),
+    ).toBeCloseTo(5, 12);
   });
 });
 

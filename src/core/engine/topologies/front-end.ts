@@ -13,7 +13,10 @@ export type FrontEnd = {
   thevenin_ohm: number;
 };
 
-export function frontEnd(design: Design, windowV = design.front_end.window_v): FrontEnd | { ok: false; problems: DesignProblem[] } {
+export function frontEnd(
+  design: Design,
+  windowV = design.front_end.window_v,
+): FrontEnd | { ok: false; problems: DesignProblem[] } {
   const { peak_v, source_ohm } = design.signal;
   const target = Math.min(1, windowV / peak_v);
   const divider = chooseDivider(target, design.front_end.divider_total_ohm, design.front_end.series);
@@ -29,5 +32,12 @@ export function frontEnd(design: Design, windowV = design.front_end.window_v): F
     };
   }
   const ratio = divider ? divider.ratio : 1;
-  return { ok: true, target_ratio: target, divider, ratio, window_v: ratio * peak_v, thevenin_ohm: theveninOhm(source_ohm, divider) };
+  return {
+    ok: true,
+    target_ratio: target,
+    divider,
+    ratio,
+    window_v: ratio * peak_v,
+    thevenin_ohm: theveninOhm(source_ohm, divider),
+  };
 }

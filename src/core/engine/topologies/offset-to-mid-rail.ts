@@ -16,7 +16,16 @@ export const OFFSET_TO_MID_RAIL_ROLES = {
     kind: "op-amp",
     kinds: ["op-amp"],
     label: "follower after the level-shift network, single supply (in = out = b ± a·peak)",
-    rules: ["supply-range", "input-common-mode", "output-swing", "unity-gain-stable", "phase-reversal", "offset", "bandwidth", "slew-rate"],
+    rules: [
+      "supply-range",
+      "input-common-mode",
+      "output-swing",
+      "unity-gain-stable",
+      "phase-reversal",
+      "offset",
+      "bandwidth",
+      "slew-rate",
+    ],
   },
   "reference-buffer": {
     kind: "op-amp",
@@ -84,7 +93,14 @@ export function evaluateOffsetToMidRail(design: Design, catalogue: Catalogue): E
   };
   const roles: RoleResult[] = [
     runRole(design, "level-shift", OFFSET_TO_MID_RAIL_ROLES["level-shift"], levelShift, rails, catalogue.opAmps),
-    runRole(design, "reference-buffer", OFFSET_TO_MID_RAIL_ROLES["reference-buffer"], referenceBuffer, rails, catalogue.opAmps),
+    runRole(
+      design,
+      "reference-buffer",
+      OFFSET_TO_MID_RAIL_ROLES["reference-buffer"],
+      referenceBuffer,
+      rails,
+      catalogue.opAmps,
+    ),
   ];
   const derived: Derived = {
     rails,
@@ -99,7 +115,12 @@ export function evaluateOffsetToMidRail(design: Design, catalogue: Catalogue): E
   };
   const { bits, reference_tolerance } = design.adc;
   const fixed: BudgetTerm[] = [
-    { name: "quantization", label: "quantization, half a step", v: (0.5 * (vref / 2 ** bits)) / a, calibrates_out: false },
+    {
+      name: "quantization",
+      label: "quantization, half a step",
+      v: (0.5 * (vref / 2 ** bits)) / a,
+      calibrates_out: false,
+    },
     { name: "reference", label: "ADC reference tolerance", v: reference_tolerance * peak, calibrates_out: true },
     {
       name: "network-ratio",
@@ -112,14 +133,32 @@ export function evaluateOffsetToMidRail(design: Design, catalogue: Catalogue): E
     design,
     fixed,
     [
-      { name: "level-shift-offset", label: "level shifter offset and bias current", role: "level-shift", rule: "offset" },
-      { name: "level-shift-bandwidth", label: "level shifter gain error at f max", role: "level-shift", rule: "bandwidth" },
+      {
+        name: "level-shift-offset",
+        label: "level shifter offset and bias current",
+        role: "level-shift",
+        rule: "offset",
+      },
+      {
+        name: "level-shift-bandwidth",
+        label: "level shifter gain error at f max",
+        role: "level-shift",
+        rule: "bandwidth",
+      },
       { name: "reference-buffer-offset", label: "reference buffer offset", role: "reference-buffer", rule: "offset" },
     ],
     roles,
     bits + Math.log2((high - low) / vref),
   );
-  const result: DesignResult = { design, topology: "offset-to-mid-rail", derived, roles, notes, budget, conversion: conversion(design, a, b) };
+  const result: DesignResult = {
+    design,
+    topology: "offset-to-mid-rail",
+    derived,
+    roles,
+    notes,
+    budget,
+    conversion: conversion(design, a, b),
+  };
   return { ok: true, result };
 }
 

@@ -28,7 +28,12 @@ const OP_AMP_RULES: RuleId[] = [
 ];
 
 export const RECTIFY_AND_SIGN_ROLES: Partial<Record<Role, RoleSpec>> = {
-  buffer: { kind: "op-amp", kinds: ["op-amp"], label: "follower after the divider (in = out = ±W)", rules: OP_AMP_RULES },
+  buffer: {
+    kind: "op-amp",
+    kinds: ["op-amp"],
+    label: "follower after the divider (in = out = ±W)",
+    rules: OP_AMP_RULES,
+  },
   rectifier: {
     kind: "op-amp",
     kinds: ["op-amp"],
@@ -41,9 +46,24 @@ export const RECTIFY_AND_SIGN_ROLES: Partial<Record<Role, RoleSpec>> = {
     label: "sign comparator driving a logic input (an op amp may stand in, at best marginal)",
     rules: ["supply-range", "input-common-mode", "logic-high", "logic-low", "propagation-delay", "sign-dead-band"],
   },
-  "pump-diode": { kind: "diode", kinds: ["diode"], label: "charge-pump diode (two per pump)", rules: ["reverse-voltage", "recovery", "forward-current"] },
-  "rectifier-diode": { kind: "diode", kinds: ["diode"], label: "precision-rectifier feedback diode", rules: ["reverse-voltage", "leakage", "recovery"] },
-  "clamp-diode": { kind: "diode", kinds: ["diode"], label: "series diode from the comparator to the logic input", rules: ["reverse-voltage", "leakage"] },
+  "pump-diode": {
+    kind: "diode",
+    kinds: ["diode"],
+    label: "charge-pump diode (two per pump)",
+    rules: ["reverse-voltage", "recovery", "forward-current"],
+  },
+  "rectifier-diode": {
+    kind: "diode",
+    kinds: ["diode"],
+    label: "precision-rectifier feedback diode",
+    rules: ["reverse-voltage", "leakage", "recovery"],
+  },
+  "clamp-diode": {
+    kind: "diode",
+    kinds: ["diode"],
+    label: "series diode from the comparator to the logic input",
+    rules: ["reverse-voltage", "leakage"],
+  },
 };
 
 /** Used only when the catalogue has no diode at all, so rails can still be computed. */
@@ -260,8 +280,22 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
     rectifier_diode: rectDiode,
     ...(clampUse ? { clamp_diode: clampUse } : {}),
   };
-  const budget = buildBudget(design, fixedTerms(design, k), ROLE_TERMS, roles, design.adc.bits + Math.log2(W / design.adc.reference_v) + 1);
-  const result: DesignResult = { design, topology: "rectify-and-sign", derived, roles, notes, budget, conversion: conversion(design, k) };
+  const budget = buildBudget(
+    design,
+    fixedTerms(design, k),
+    ROLE_TERMS,
+    roles,
+    design.adc.bits + Math.log2(W / design.adc.reference_v) + 1,
+  );
+  const result: DesignResult = {
+    design,
+    topology: "rectify-and-sign",
+    derived,
+    roles,
+    notes,
+    budget,
+    conversion: conversion(design, k),
+  };
   return { ok: true, result };
 }
 
@@ -279,12 +313,22 @@ export function fixedTerms(design: Design, k: number): BudgetTerm[] {
   const { bits, reference_v, reference_tolerance } = design.adc;
   const peak = design.signal.peak_v;
   const terms: BudgetTerm[] = [
-    { name: "quantization", label: "quantization, half a step", v: (0.5 * (reference_v / 2 ** bits)) / k, calibrates_out: false },
+    {
+      name: "quantization",
+      label: "quantization, half a step",
+      v: (0.5 * (reference_v / 2 ** bits)) / k,
+      calibrates_out: false,
+    },
     { name: "reference", label: "ADC reference tolerance", v: reference_tolerance * peak, calibrates_out: true },
   ];
   if (k < 1) {
     const dev = ratioDeviation(k, design.front_end.resistor_tolerance);
-    terms.push({ name: "divider-ratio", label: "divider ratio, worst case of both tolerances", v: Math.max(Math.abs(dev.high), Math.abs(dev.low)) * peak, calibrates_out: true });
+    terms.push({
+      name: "divider-ratio",
+      label: "divider ratio, worst case of both tolerances",
+      v: Math.max(Math.abs(dev.high), Math.abs(dev.low)) * peak,
+      calibrates_out: true,
+    });
   }
   return terms;
 }
