@@ -1,4 +1,4 @@
-// CSV report: one row per design, role, part and rule.
+// CSV report: one row per design, role, part and rule, then the budget terms.
 import { csvLine } from "../core/csv-escape.ts";
 import type { DesignResult } from "../core/engine/result.ts";
 
@@ -17,11 +17,16 @@ const HEADER = [
   "margin",
   "unit",
   "reason",
-];
+] as const;
+
+type Row = Partial<Record<(typeof HEADER)[number], string | number | null>>;
+
+const line = (row: Row) => csvLine(HEADER.map((column) => row[column] ?? null));
 
 export function renderCsv(results: DesignResult[]): string {
   const lines = [csvLine(HEADER)];
   for (const r of results) {
+    const design = { design: r.design.id, topology: r.topology };
     for (const role of r.roles) {
       for (const [fits, list] of [
         ["yes", role.fits],
@@ -30,22 +35,21 @@ export function renderCsv(results: DesignResult[]): string {
         for (const p of list) {
           for (const f of p.findings) {
             lines.push(
-              csvLine([
-                r.design.id,
-                r.topology,
-                role.role,
-                p.part.id,
-                p.verdict,
+              line({
+                ...design,
+                role: role.role,
+                part: p.part.id,
+                part_verdict: p.verdict,
                 fits,
-                p.bom ? "yes" : "no",
-                f.rule,
-                f.verdict,
-                f.needed,
-                f.available,
-                f.margin,
-                f.unit,
-                f.reason,
-              ]),
+                bom: p.bom ? "yes" : "no",
+                rule: f.rule,
+                verdict: f.verdict,
+                needed: f.needed,
+                available: f.available,
+                margin: f.margin,
+                unit: f.unit,
+                reason: f.reason,
+              }),
             );
           }
         }
@@ -53,62 +57,15 @@ export function renderCsv(results: DesignResult[]): string {
     }
     // Budget rows: the term's error in `available`, the requirement in `needed`.
     const b = r.budget;
-    for (const t of b.terms) {
-      lines.push(
-        csvLine([
-          r.design.id,
-          r.topology,
-          "budget",
-          "",
-          b.verdict,
-          "",
-          "",
-          t.name,
-          "",
-          b.required_v,
-          t.v,
-          null,
-          "V",
-          t.label,
-        ]),
-      );
+    const budget = { ...design, role: "budget", part_verdict: b.verdict, needed: b.required_v, unit: "V" };
+    for (const t of b.terms) lines.push(line({ ...budget, rule: t.name, available: t.v, reason: t.label }));
+    const totals = [
+      ["worst-case", b.worst_case_v, "sum of the terms' magnitudes"],
+      ["rss", b.rss_v, "root-sum-square of the terms (JCGM 100:2008)"],
+    ] as const;
+    for (const [rule, v, reason] of totals) {
+      lines.push(line({ ...budget, rule, verdict: b.verdict, available: v, margin: b.required_v - v, reason }));
     }
-    lines.push(
-      csvLine([
-        r.design.id,
-        r.topology,
-        "budget",
-        "",
-        b.verdict,
-        "",
-        "",
-        "worst-case",
-        b.verdict,
-        b.required_v,
-        b.worst_case_v,
-        b.required_v - b.worst_case_v,
-        "V",
-        "sum of the terms' magnitudes",
-      ]),
-    );
-    lines.push(
-      csvLine([
-        r.design.id,
-        r.topology,
-        "budget",
-        "",
-        b.verdict,
-        "",
-        "",
-        "rss",
-        b.verdict,
-        b.required_v,
-        b.rss_v,
-        b.required_v - b.rss_v,
-        "V",
-        "root-sum-square of the terms (JCGM 100:2008)",
-      ]),
-    );
   }
   return `${lines.join("\r\n")}\r\n`;
 }

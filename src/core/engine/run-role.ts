@@ -6,7 +6,25 @@ import { evaluatePart, rankRole } from "./evaluate-part.ts";
 import type { RoleResult } from "./result.ts";
 import type { Rails, Rule, Stage } from "./types.ts";
 
-export type RoleSpec = { kind: PartKind; kinds: PartKind[]; label: string; rules: RuleId[]; optional?: boolean };
+/** What every op-amp signal stage must pass, whatever the topology (SPEC §7, buffer row). */
+export const OP_AMP_STAGE_RULES: readonly RuleId[] = [
+  "supply-range",
+  "input-common-mode",
+  "output-swing",
+  "unity-gain-stable",
+  "phase-reversal",
+  "offset",
+  "bandwidth",
+  "slew-rate",
+];
+
+export type RoleSpec = {
+  kind: PartKind;
+  kinds: readonly PartKind[];
+  label: string;
+  rules: readonly RuleId[];
+  optional?: boolean;
+};
 
 export function runRole(
   design: Design,

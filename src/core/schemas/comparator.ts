@@ -1,18 +1,14 @@
 // comparators.csv (SPEC §4).
 import { z } from "zod";
 import { optionalNumber, requiredEnum, requiredNumber } from "./cells.ts";
-import { commonColumns } from "./common.ts";
+import { amplifierColumns, commonColumns } from "./common.ts";
 import { checkPushPullLevels, checkSupplyAndHeadroom } from "./row-checks.ts";
 
 export const OUTPUT_TYPES = ["push-pull", "open-drain"] as const;
 
 export const comparatorColumns = {
   ...commonColumns,
-  channels: requiredNumber({ unit: "", label: "Channels" }, { integer: true, min: 1, max: 8 }),
-  supply_min_v: requiredNumber({ unit: "V", label: "Supply min" }, { above: 0 }),
-  supply_max_v: requiredNumber({ unit: "V", label: "Supply max" }, { above: 0 }),
-  icm_neg_headroom_v: requiredNumber({ unit: "V", label: "Input headroom to V−" }),
-  icm_pos_headroom_v: requiredNumber({ unit: "V", label: "Input headroom to V+" }),
+  ...amplifierColumns,
   output: requiredEnum(OUTPUT_TYPES, { unit: "", label: "Output" }),
   out_neg_headroom_v: optionalNumber({ unit: "V", label: "Output low, inward from V−" }),
   out_pos_headroom_v: optionalNumber({ unit: "V", label: "Output high, inward from V+" }),

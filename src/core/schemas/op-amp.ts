@@ -2,16 +2,12 @@
 // rules convert to SI where they compute.
 import { z } from "zod";
 import { optionalNumber, optionalYesNo, requiredNumber, requiredYesNo } from "./cells.ts";
-import { commonColumns } from "./common.ts";
+import { amplifierColumns, commonColumns } from "./common.ts";
 import { checkSupplyAndHeadroom } from "./row-checks.ts";
 
 export const opAmpColumns = {
   ...commonColumns,
-  channels: requiredNumber({ unit: "", label: "Channels" }, { integer: true, min: 1, max: 8 }),
-  supply_min_v: requiredNumber({ unit: "V", label: "Supply min" }, { above: 0 }),
-  supply_max_v: requiredNumber({ unit: "V", label: "Supply max" }, { above: 0 }),
-  icm_neg_headroom_v: requiredNumber({ unit: "V", label: "Input headroom to V−" }),
-  icm_pos_headroom_v: requiredNumber({ unit: "V", label: "Input headroom to V+" }),
+  ...amplifierColumns,
   out_neg_headroom_v: requiredNumber({ unit: "V", label: "Output headroom to V−" }),
   out_pos_headroom_v: requiredNumber({ unit: "V", label: "Output headroom to V+" }),
   out_load_ohm: optionalNumber({ unit: "Ω", label: "Swing rated at load" }, { above: 0 }),

@@ -2,7 +2,7 @@
 import { describe, expect, it } from "vitest";
 import { buildBudget, sumTerms, type BudgetTerm } from "../../../src/core/engine/budget.ts";
 import { fixedTerms } from "../../../src/core/engine/topologies/rectify-and-sign.ts";
-import { designSchema, type DesignInput } from "../../../src/core/schemas/design.ts";
+import { design as designFor } from "../../helpers/designs.ts";
 
 const term = (name: string, v: number, calibrates_out = false): BudgetTerm => ({
   name,
@@ -11,29 +11,7 @@ const term = (name: string, v: number, calibrates_out = false): BudgetTerm => ({
   calibrates_out,
 });
 
-function design(overrides: Partial<Record<string, unknown>> = {}) {
-  const base: DesignInput = {
-    id: "budget-case",
-    title: "Budget case",
-    topology: "rectify-and-sign",
-    supply: { positive_v: 5, negative: { kind: "fixed", v: -5 } },
-    signal: { peak_v: 10, max_frequency_hz: 200, source_ohm: 0 },
-    front_end: {
-      window_v: 2.5,
-      divider_total_ohm: 40000,
-      resistor_tolerance: 0.01,
-      series: "E24",
-      rectifier_load_ohm: 10000,
-    },
-    adc: { bits: 10, reference_v: 5, reference_tolerance: 0.01 },
-    logic: { vdd_v: 5, vih_v: 3.5, vil_v: 1.5, level_shift: "diode-clamp", pull_down_ohm: 10000 },
-    accuracy: { required_v: 0.1 },
-    temperature: { min_c: 25, max_c: 25 },
-    policy: {},
-    ...overrides,
-  };
-  return designSchema.parse(base);
-}
+const design = () => designFor({ id: "budget-case", signal: { peak_v: 10 } });
 
 describe("sumTerms", () => {
   // JCGM 100:2008 (GUM): worst case Σ|aᵢ|, root-sum-square √Σaᵢ². Limits of

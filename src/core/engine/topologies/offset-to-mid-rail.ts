@@ -8,7 +8,7 @@ import type { Design } from "../../schemas/design.ts";
 import { formatVolts } from "../../units.ts";
 import { buildBudget, type BudgetTerm, type Conversion } from "../budget.ts";
 import type { Derived, DesignResult, Evaluation, RoleResult } from "../result.ts";
-import { runRole, type RoleSpec } from "../run-role.ts";
+import { OP_AMP_STAGE_RULES, runRole, type RoleSpec } from "../run-role.ts";
 import type { OpAmpStage, Rails } from "../types.ts";
 
 export const OFFSET_TO_MID_RAIL_ROLES = {
@@ -16,16 +16,7 @@ export const OFFSET_TO_MID_RAIL_ROLES = {
     kind: "op-amp",
     kinds: ["op-amp"],
     label: "follower after the level-shift network, single supply (in = out = b ± a·peak)",
-    rules: [
-      "supply-range",
-      "input-common-mode",
-      "output-swing",
-      "unity-gain-stable",
-      "phase-reversal",
-      "offset",
-      "bandwidth",
-      "slew-rate",
-    ],
+    rules: OP_AMP_STAGE_RULES,
   },
   "reference-buffer": {
     kind: "op-amp",

@@ -12,20 +12,11 @@ import type { RuleId } from "../../../../rules/index.ts";
 import { buildBudget, type BudgetTerm, type Conversion } from "../budget.ts";
 import { ratioDeviation } from "../../math/divider.ts";
 import type { Derived, DesignResult, DiodeUse, Evaluation, RoleResult } from "../result.ts";
-import { runRole as runRoleWith, type RoleSpec } from "../run-role.ts";
+import { OP_AMP_STAGE_RULES, runRole as runRoleWith, type RoleSpec } from "../run-role.ts";
 import type { DiodeStage, OpAmpStage, Rails, SignStage, Stage } from "../types.ts";
 import { frontEnd } from "./front-end.ts";
 
-const OP_AMP_RULES: RuleId[] = [
-  "supply-range",
-  "input-common-mode",
-  "output-swing",
-  "unity-gain-stable",
-  "phase-reversal",
-  "offset",
-  "bandwidth",
-  "slew-rate",
-];
+const OP_AMP_RULES = OP_AMP_STAGE_RULES;
 
 export const RECTIFY_AND_SIGN_ROLES: Partial<Record<Role, RoleSpec>> = {
   buffer: {
