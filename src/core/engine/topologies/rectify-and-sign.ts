@@ -8,7 +8,6 @@ import { forwardVoltage } from "../../math/diode.ts";
 import type { Design, Role } from "../../schemas/design.ts";
 import type { Diode } from "../../schemas/diode.ts";
 import { formatSI, formatVolts } from "../../units.ts";
-import type { RuleId } from "../../../../rules/index.ts";
 import { buildBudget, type BudgetTerm, type Conversion } from "../budget.ts";
 import { ratioDeviation } from "../../math/divider.ts";
 import type { Derived, DesignResult, DiodeUse, Evaluation, RoleResult } from "../result.ts";
