@@ -16,6 +16,7 @@ export function singlePoleError(f: number, fc: number): number {
 
 export const bandwidth: Rule = {
   id: "bandwidth",
+  unit: "V",
   checks:
     "The closed-loop bandwidth keeps the gain error at the highest signal frequency inside this stage's share of the accuracy.",
   formula: "fc = gbw / noise_gain; error = (1 − 1/√(1 + (f/fc)²)) · peak_v; limit = speed_share · required_v",

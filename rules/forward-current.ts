@@ -8,6 +8,7 @@ import type { Diode } from "../src/core/schemas/diode.ts";
 // whole load charge, so its current while on averages twice the load.
 export const forwardCurrent: Rule = {
   id: "forward-current",
+  unit: "A",
   checks: "The diode carries the current of its position within its rating.",
   formula: "pump diode: needed = 2 · load_a (the load charge passes in half of each cycle); margin = if_max − needed",
   source: "Charge-balance of the diode charge pump (common practice).",

@@ -14,6 +14,7 @@ export function commonModeMargin({ part, rails, stage }: RuleContext) {
 
 export const inputCommonMode: Rule = {
   id: "input-common-mode",
+  unit: "V",
   checks: "The inputs stay inside the part's common-mode range over the whole signal window.",
   formula:
     "low = V− + icm_neg_headroom_v, high = V+ − icm_pos_headroom_v; margin = min(needed low − low, high − needed high); needed is ±W for rectify-and-sign, b ± a·peak for the offset-to-mid-rail level shifter and V_ref for its reference buffer",

@@ -17,6 +17,7 @@ export function leakageAt(d: Diode, maxC: number): number {
 
 export const leakage: Rule = {
   id: "leakage",
+  unit: "V",
   checks:
     "Reverse leakage at the hottest temperature, flowing through the resistance around the diode, stays inside its share of the error.",
   formula:

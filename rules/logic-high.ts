@@ -7,6 +7,7 @@ import { INPUT_CLAMP_V, NPN_OFF_BELOW_V, outputHigh, outputLow } from "./levels.
 
 export const logicHigh: Rule = {
   id: "logic-high",
+  unit: "V",
   checks: "When the signal is positive, the logic input sees a level above V_IH and not above its own supply.",
   formula:
     "diode-clamp: V_high = (V+ − out_pos_headroom_v) − Vf_clamp(V_OH / pull_down_ohm), margin = min(V_high − vih_v, vdd_v + 0.3 − V_high); pull-up: open-drain V_high = vdd_v, push-pull as diode-clamp without the diode; npn-inverter: output low must stay below 0.4 V to keep the NPN off, then V_high = vdd_v",

@@ -6,6 +6,7 @@ import { INPUT_CLAMP_V, NPN_VBE_ON_V, NPN_VCE_SAT_V, outputHigh, outputLow } fro
 
 export const logicLow: Rule = {
   id: "logic-low",
+  unit: "V",
   checks: "When the signal is negative, the logic input sees a level below V_IL and not below −0.3 V.",
   formula:
     "diode-clamp: V_low = ir · pull_down_ohm, margin = vil_v − V_low; pull-up: V_low = V− + out_neg_headroom_v, margin = min(vil_v − V_low, V_low + 0.3); npn-inverter: V_OH must exceed 0.7 V + 0.3 V to saturate the NPN, V_low = 0.2 V",

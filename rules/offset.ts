@@ -16,6 +16,7 @@ export function stageOffset(p: OpAmp, vosMultiplier: number, biasOhm: number, mi
 
 export const offset: Rule = {
   id: "offset",
+  unit: "V",
   checks:
     "Input offset voltage and bias current through the source resistance stay inside this stage's share of the accuracy.",
   formula:

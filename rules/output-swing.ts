@@ -6,6 +6,7 @@ import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 export const outputSwing: Rule = {
   id: "output-swing",
+  unit: "V",
   checks: "The output reaches both ends of what the stage must drive, at these rails.",
   formula:
     "low = V− + out_neg_headroom_v, high = V+ − out_pos_headroom_v; buffer margin = min(−W − low, high − W); rectifier margin = min(−Vf − low, high − (W + Vf)); offset-to-mid-rail level shifter (V− = 0 V): needs b − a·peak … b + a·peak, its reference buffer V_ref",

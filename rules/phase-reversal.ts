@@ -8,6 +8,7 @@ import { commonModeMargin } from "./input-common-mode.ts";
 // range it works, but an overload transient can latch the output the wrong way.
 export const phaseReversal: Rule = {
   id: "phase-reversal",
+  unit: "V",
   checks: "The output does not invert when an input leaves the common-mode range.",
   formula:
     "no reversal: pass; reversal with common-mode margin ≥ 0: marginal; reversal with common-mode margin < 0: fail (margin = the input-common-mode margin)",

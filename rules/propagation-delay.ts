@@ -6,6 +6,7 @@ import { outputHigh, outputLow } from "./levels.ts";
 
 export const propagationDelay: Rule = {
   id: "propagation-delay",
+  unit: "s",
   checks: "The sign decision follows a zero crossing within a small share of the signal period.",
   formula:
     "comparator: tpd ≤ timing_fraction / f; op amp as comparator: delay ≈ (V_OH − V_OL) / slew, and at best marginal because overload recovery is not rated",

@@ -8,6 +8,7 @@ import type { Diode } from "../src/core/schemas/diode.ts";
 // charge is lost every half cycle, in the rectifier it smears each zero crossing.
 export const recovery: Rule = {
   id: "recovery",
+  unit: "s",
   checks: "The diode stops conducting backwards quickly compared with how often it switches.",
   formula:
     "pump diode: trr ≤ timing_fraction × the pump's half period 1/(2·frequency_hz); rectifier diode: trr ≤ timing_fraction / max_frequency_hz (the same allowance as the zero-crossing jump)",

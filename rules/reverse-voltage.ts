@@ -6,6 +6,7 @@ import type { Diode } from "../src/core/schemas/diode.ts";
 
 export const reverseVoltage: Rule = {
   id: "reverse-voltage",
+  unit: "V",
   checks: "The diode blocks the largest reverse voltage its position sees.",
   formula: "pump diode ≥ 2 · drive_v; rectifier diode ≥ 2 · W; clamp diode ≥ |V−|; margin = vr_max_v − needed",
   source: "Datasheet maximum reverse voltage (common practice).",

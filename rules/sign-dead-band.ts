@@ -7,6 +7,7 @@ import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 export const signDeadBand: Rule = {
   id: "sign-dead-band",
+  unit: "V",
   checks: "The band around zero where the sign may be wrong stays inside its share of the accuracy.",
   formula: "dead band = 2 · Vos / k (input-referred); limit = sign_share · required_v",
   source: "Comparator input offset referred through the divider (common practice).",

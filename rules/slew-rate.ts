@@ -6,6 +6,7 @@ import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 export const slewRate: Rule = {
   id: "slew-rate",
+  unit: "V/s",
   checks: "The op amp slews fast enough to follow a full-scale sine at the highest signal frequency.",
   formula:
     "needed = 2π · f · W (rectifier: 2π · f · (W + Vf); level shifter: 2π · f · a · peak); margin = slew − needed",

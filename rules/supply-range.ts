@@ -7,6 +7,7 @@ import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 export const supplyRange: Rule = {
   id: "supply-range",
+  unit: "V",
   checks: "The total supply V+ − V− lies inside the part's rated supply range.",
   formula: "Vs = V+ − V−; margin = min(Vs − supply_min_v, supply_max_v − Vs)",
   source: "Datasheet absolute and recommended operating limits (common practice).",

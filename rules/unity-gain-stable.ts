@@ -4,6 +4,7 @@ import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 export const unityGainStable: Rule = {
   id: "unity-gain-stable",
+  unit: "",
   checks: "The op amp is stable at the low noise gain these stages run at (a follower is gain 1).",
   formula: "pass when unity_gain_stable = yes, otherwise fail",
   source: "Decompensated amplifiers need a minimum closed-loop gain (datasheet; common practice).",

@@ -6,6 +6,7 @@ import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 export const zeroCrossing: Rule = {
   id: "zero-crossing",
+  unit: "s",
   checks: "At each zero crossing the rectifier's output jumps through two diode drops fast enough.",
   formula: "jump time = 2·Vf / slew; limit = timing_fraction / f",
   source: "Precision-rectifier dead time from slew through the diode drops (common practice).",

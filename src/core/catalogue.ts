@@ -2,13 +2,13 @@
 // problem of every file at once (SPEC §4). Pure: callers pass text, not paths.
 import Papa from "papaparse";
 import type { z } from "zod";
+import { indexCatalogue, type Catalogue, type Part, type PartKind } from "./catalogue-index.ts";
 import { closest, type Problem } from "./problems.ts";
-import { comparatorColumns, comparatorRow, type Comparator } from "./schemas/comparator.ts";
-import { diodeColumns, diodeRow, type Diode } from "./schemas/diode.ts";
-import { opAmpColumns, opAmpRow, type OpAmp } from "./schemas/op-amp.ts";
+import { comparatorColumns, comparatorRow } from "./schemas/comparator.ts";
+import { diodeColumns, diodeRow } from "./schemas/diode.ts";
+import { opAmpColumns, opAmpRow } from "./schemas/op-amp.ts";
 
-export type Part = OpAmp | Comparator | Diode;
-export type PartKind = Part["kind"];
+export type { Catalogue, Part, PartKind };
 
 export const KINDS = [
   { kind: "op-amp", file: "op-amps.csv", plural: "op amps", columns: opAmpColumns, row: opAmpRow },
@@ -21,14 +21,6 @@ export const KINDS = [
   },
   { kind: "diode", file: "diodes.csv", plural: "diodes", columns: diodeColumns, row: diodeRow },
 ] as const;
-
-export type Catalogue = {
-  parts: Part[];
-  byId: Map<string, Part>;
-  opAmps: OpAmp[];
-  comparators: Comparator[];
-  diodes: Diode[];
-};
 
 export type Loaded<T> = { value: T; problems: Problem[] };
 
@@ -173,8 +165,7 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
 function requiredColumns(columns: Record<string, z.ZodType>): string[] {
   return Object.entries(columns)
     .filter(([, schema]) => !schema.safeParse(undefined).success)
-    .map(([name]) => name)
-    .filter((name) => name !== "out_neg_headroom_v" && name !== "out_pos_headroom_v");
+    .map(([name]) => name);
 }
 
 function shorten(s: string): string {
@@ -218,12 +209,12 @@ function rowLineNumbers(rows: string[][], text: string, starts: number[]): numbe
     }
     return lo + 1;
   };
-  for (const row of rows) {
+  for (let r = 0; r < rows.length; r++) {
     while (pos < text.length && (text[pos] === "\n" || text[pos] === "\r" || isBlankLine(text, pos))) {
       pos = skipLine(text, pos);
     }
     lines.push(lineAt(pos));
-    pos = skipRow(text, pos, row.length);
+    pos = skipRow(text, pos);
   }
   return lines;
 }
@@ -241,7 +232,7 @@ function skipLine(text: string, pos: number): number {
 }
 
 // Moves past one CSV record starting at pos, honouring quotes.
-function skipRow(text: string, pos: number, _cells: number): number {
+function skipRow(text: string, pos: number): number {
   let inQuotes = false;
   let i = pos;
   for (; i < text.length; i++) {
@@ -259,7 +250,7 @@ export function buildCatalogue(
   files: (Pick<ParsedFile, "file" | "parts" | "problems"> & { lines?: number[] })[],
 ): Loaded<Catalogue> {
   const problems: Problem[] = files.flatMap((f) => f.problems);
-  const byId = new Map<string, Part>();
+  const kept: Part[] = [];
   const seenIn = new Map<string, string>();
   for (const f of files) {
     for (const [index, p] of f.parts.entries()) {
@@ -275,20 +266,10 @@ export function buildCatalogue(
         continue;
       }
       seenIn.set(p.id, f.file);
-      byId.set(p.id, p);
+      kept.push(p);
     }
   }
-  const parts = [...byId.values()];
-  return {
-    value: {
-      parts,
-      byId,
-      opAmps: parts.filter((p): p is OpAmp => p.kind === "op-amp"),
-      comparators: parts.filter((p): p is Comparator => p.kind === "comparator"),
-      diodes: parts.filter((p): p is Diode => p.kind === "diode"),
-    },
-    problems,
-  };
+  return { value: indexCatalogue(kept), problems };
 }
 
 export function catalogueFromParts(parts: Part[]): Catalogue {

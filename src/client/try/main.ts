@@ -2,7 +2,7 @@
 // same engine the site and the CLI use, redraw the results and keep the design
 // in the address bar. Nothing here throws to the console: a failed fetch or a
 // bad link becomes a message on the page.
-import type { Catalogue } from "../../core/catalogue.ts";
+import { indexCatalogue, type Catalogue } from "../../core/catalogue-index.ts";
 import { evaluateDesign } from "../../core/engine/evaluate.ts";
 import type { DesignResult, Evaluation } from "../../core/engine/result.ts";
 import { formatProblem, type Problem } from "../../core/problems.ts";
@@ -17,7 +17,7 @@ import { FIELD_BY_PATH, type Draft } from "./fields.ts";
 import { fillPartLists, readField, showApplicable, showParsed, showProblems, writeDraft } from "./form.ts";
 import { renderTry } from "./render.ts";
 import { holdsLine } from "./render-results.ts";
-import { catalogueOf, readTryData, TRY_DATA_PATH, type TryData } from "./try-data.ts";
+import { readTryData, TRY_DATA_PATH, type TryData } from "./try-data.ts";
 import { encodeDraft, stateFromUrl, type UrlState } from "./url-state.ts";
 
 type Page = {
@@ -102,7 +102,7 @@ class TryPage {
     this.doc = doc;
     this.page = page;
     this.data = data;
-    this.catalogue = catalogueOf(data.parts);
+    this.catalogue = indexCatalogue(data.parts);
   }
 
   evaluate(design: Design): Evaluation {

@@ -1,10 +1,7 @@
 // The JSON asset the try page fetches: the catalogue's parts, already checked
 // and cleaned at build time, and the demo designs as their files hold them.
 // Written once by src/pages/data/catalogue.json.ts; read here in the browser.
-import type { Catalogue, Part } from "../../core/catalogue.ts";
-import type { Comparator } from "../../core/schemas/comparator.ts";
-import type { Diode } from "../../core/schemas/diode.ts";
-import type { OpAmp } from "../../core/schemas/op-amp.ts";
+import type { Part } from "../../core/catalogue-index.ts";
 
 export type DemoDesign = { id: string; title: string; input: unknown };
 
@@ -12,22 +9,6 @@ export type TryData = { parts: Part[]; designs: DemoDesign[] };
 
 /** Path of the asset below the site's base. */
 export const TRY_DATA_PATH = "data/catalogue.json";
-
-/**
- * The engine's Catalogue from parts that were validated at build time (ids are
- * unique there). Built here rather than with catalogueFromParts so the page
- * does not ship the CSV parser and row schemas it never uses.
- */
-export function catalogueOf(parts: readonly Part[]): Catalogue {
-  const list = [...parts];
-  return {
-    parts: list,
-    byId: new Map(list.map((p) => [p.id, p])),
-    opAmps: list.filter((p): p is OpAmp => p.kind === "op-amp"),
-    comparators: list.filter((p): p is Comparator => p.kind === "comparator"),
-    diodes: list.filter((p): p is Diode => p.kind === "diode"),
-  };
-}
 
 const KINDS = new Set(["op-amp", "comparator", "diode"]);
 

@@ -61,7 +61,7 @@ function runRules(rules: readonly Rule[], ctx: Omit<RuleContext, "part">, part: 
         unratedFinding(
           rule.id,
           needs.filter((c) => cells[c] === undefined),
-          unitOf(rule.id),
+          rule.unit,
         ),
       );
     } else findings.push(rule.evaluate(partCtx));
@@ -91,19 +91,6 @@ function relativeMargin(findings: readonly Finding[]): number {
     least = Math.min(least, f.margin / f.limit);
   }
   return Number.isFinite(least) ? least : 0;
-}
-
-const UNITS: Record<string, string> = {
-  "slew-rate": "V/s",
-  "zero-crossing": "s",
-  "propagation-delay": "s",
-  recovery: "s",
-  "forward-current": "A",
-  "unity-gain-stable": "",
-};
-
-function unitOf(rule: string): string {
-  return UNITS[rule] ?? "V";
 }
 
 const STATUS_ORDER: Record<string, number> = { stocked: 0, approved: 1, listed: 2 };

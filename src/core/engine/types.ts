@@ -103,6 +103,8 @@ export type Rule = {
   formula: string;
   /** Published source, or a note that the bound is common practice. */
   source: string;
+  /** Unit of its needed/available/margin numbers (SI: V, V/s, s, A; "" for yes/no). */
+  unit: string;
   /** Policy key that tunes it. */
   policy: keyof Policy | null;
   /** Part kinds it applies to. */
