@@ -5,10 +5,20 @@ import { basename, join, relative } from "node:path";
 import { buildCatalogue, KINDS, parseCatalogueText, type Catalogue, type ParsedFile } from "../core/catalogue.ts";
 import { checkDesignSet, parseDesignText, type DesignFile } from "../core/designs.ts";
 import { evaluateDesign } from "../core/engine/evaluate.ts";
+import type { Evaluation } from "../core/engine/result.ts";
+import type { Design } from "../core/schemas/design.ts";
 import type { Problem } from "../core/problems.ts";
 import { decodeUtf8 } from "../core/text-decoding.ts";
 
-export type DataSet = { catalogue: Catalogue; designs: DesignFile[]; problems: Problem[] };
+export type EvaluatedDesign = { file: string; design: Design; evaluation: Evaluation };
+
+/** A data folder; `evaluated` holds each design's evaluation when the files themselves are clean. */
+export type DataSet = {
+  catalogue: Catalogue;
+  designs: DesignFile[];
+  problems: Problem[];
+  evaluated: EvaluatedDesign[];
+};
 
 const MAX_FILE_BYTES = 20 * 1024 * 1024;
 
@@ -102,7 +112,15 @@ export function loadDataSet(dir: string): DataSet {
   const problems = [...catalogueProblems, ...designProblems, ...nameProblems];
   // Only a clean set is worth evaluating: a row left out for its own problem would
   // show up again as "BOM names no part".
-  return { catalogue, designs, problems: problems.length > 0 ? problems : designProblemsOf(designs, catalogue) };
+  if (problems.length > 0) return { catalogue, designs, problems, evaluated: [] };
+  const evaluated = evaluateAll(designs, catalogue);
+  return { catalogue, designs, problems: designProblemsOf(evaluated), evaluated };
+}
+
+function evaluateAll(designs: readonly DesignFile[], catalogue: Catalogue): EvaluatedDesign[] {
+  return designs.flatMap((d) =>
+    d.design ? [{ file: d.file, design: d.design, evaluation: evaluateDesign(d.design, catalogue) }] : [],
+  );
 }
 
 /**
@@ -110,10 +128,8 @@ export function loadDataSet(dir: string): DataSet {
  * or the wrong kind, a charge pump past collapse): `check` stops on these, so
  * `validate` and the site build must too (issue 8: the build stops before dist/).
  */
-export function designProblemsOf(designs: readonly DesignFile[], catalogue: Catalogue): Problem[] {
-  return designs.flatMap((d) => {
-    if (!d.design) return [];
-    const evaluation = evaluateDesign(d.design, catalogue);
-    return evaluation.ok ? [] : evaluation.problems.map((p) => ({ file: d.file, path: p.path, message: p.message }));
-  });
+function designProblemsOf(evaluated: readonly EvaluatedDesign[]): Problem[] {
+  return evaluated.flatMap(({ file, evaluation }) =>
+    evaluation.ok ? [] : evaluation.problems.map((p) => ({ file, path: p.path, message: p.message })),
+  );
 }

@@ -3,7 +3,6 @@
 // (module scope lives as long as the build's page renderer).
 import { resolve } from "node:path";
 import type { Catalogue } from "../core/catalogue.ts";
-import { evaluateDesign } from "../core/engine/evaluate.ts";
 import { formatProblem } from "../core/problems.ts";
 import { loadDataSet } from "../node/load-data.ts";
 import type { DesignEntry } from "./design-entry.ts";
@@ -28,16 +27,13 @@ export function siteData(): SiteData {
       `railsieve: the data in ${dataDir} has ${set.problems.length} problem(s):\n${set.problems.map(formatProblem).join("\n")}`,
     );
   }
-  const designs: DesignEntry[] = [];
-  for (const file of set.designs) {
-    if (!file.design) continue;
-    designs.push({
-      id: file.design.id,
-      file: file.file,
-      design: file.design,
-      evaluation: evaluateDesign(file.design, set.catalogue),
-    });
-  }
+  // loadDataSet has evaluated every design already (it must, to refuse bad BOMs).
+  const designs: DesignEntry[] = set.evaluated.map(({ file, design, evaluation }) => ({
+    id: design.id,
+    file,
+    design,
+    evaluation,
+  }));
   cached = { dataDir, catalogue: set.catalogue, designs, builtAt: buildDate() };
   return cached;
 }
