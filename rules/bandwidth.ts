@@ -1,5 +1,4 @@
-import type { Rule } from "../src/core/engine/types.ts";
-import { finding } from "../src/core/engine/finding.ts";
+import { defineRule } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
@@ -14,7 +13,7 @@ export function singlePoleError(f: number, fc: number): number {
   return (x * x) / (s * (s + 1));
 }
 
-export const bandwidth: Rule = {
+export const bandwidth = defineRule({
   id: "bandwidth",
   unit: "V",
   checks:
@@ -25,26 +24,33 @@ export const bandwidth: Rule = {
   policy: "speed_share",
   kinds: ["op-amp"],
   needs: { "op-amp": ["gbw_mhz"] },
-  evaluate({ part, stage, design, policy }) {
+  measure({ stage, design, policy }, part) {
     const p = part as OpAmp;
     if (stage.stage !== "op-amp") throw new Error("bandwidth applies to op-amp stages only");
     const gbw = p.gbw_mhz * 1e6;
     const fc = gbw / stage.noise_gain;
-    const f = design.signal.max_frequency_hz;
-    const fraction = singlePoleError(f, fc);
+    const fraction = singlePoleError(design.signal.max_frequency_hz, fc);
     const error = fraction * stage.bandwidth_peak_v;
     const limit = policy.speed_share * design.accuracy.required_v;
     const margin = limit - error;
-    return finding("bandwidth", {
+    return {
       verdict: shareVerdict(margin, limit, policy),
       needed: limit,
       available: error,
       margin,
-      unit: "V",
       limit,
-      reason: () =>
-        `at ${formatSI(f, "Hz")} with fc = ${formatSI(fc, "Hz")} (GBW ${formatSI(gbw, "Hz")} ÷ noise gain ${stage.noise_gain}) the gain falls short by ${formatSI(error, "V")} of the ${formatSI(stage.bandwidth_peak_v, "V")} peak; the limit is ${formatSI(limit, "V")}: ${spareOrShortSmall(margin)}`,
-      steps: () => [
+      fc,
+      fraction,
+    };
+  },
+  describe({ available: error, margin, limit, fc, fraction }, { stage, design }, part) {
+    const gbw = (part as OpAmp).gbw_mhz * 1e6;
+    const f = design.signal.max_frequency_hz;
+    const gain = stage.stage === "op-amp" ? stage.noise_gain : 1;
+    const peak = stage.stage === "op-amp" ? stage.bandwidth_peak_v : 0;
+    return {
+      reason: `at ${formatSI(f, "Hz")} with fc = ${formatSI(fc, "Hz")} (GBW ${formatSI(gbw, "Hz")} ÷ noise gain ${gain}) the gain falls short by ${formatSI(error, "V")} of the ${formatSI(peak, "V")} peak; the limit is ${formatSI(limit, "V")}: ${spareOrShortSmall(margin)}`,
+      steps: [
         { label: "GBW", value: gbw, unit: "Hz" },
         { label: "fc = GBW / noise gain", value: fc, unit: "Hz" },
         { label: "f (highest signal frequency)", value: f, unit: "Hz" },
@@ -53,6 +59,6 @@ export const bandwidth: Rule = {
         { label: "limit = speed_share × required_v", value: limit, unit: "V" },
         { label: "margin = limit − error", value: margin, unit: "V" },
       ],
-    });
+    };
   },
-};
+});

@@ -1,18 +1,19 @@
-import type { Rule, RuleContext } from "../src/core/engine/types.ts";
-import { finding, rangeMargin, volts } from "../src/core/engine/finding.ts";
+import type { Part } from "../src/core/catalogue.ts";
+import type { RoleContext } from "../src/core/engine/types.ts";
+import { defineRule, rangeMargin, volts } from "../src/core/engine/finding.ts";
 import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
 import type { Comparator } from "../src/core/schemas/comparator.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 /** Reachable input range and the binding margin; phase-reversal reuses it. */
-export function commonModeMargin({ part, rails, stage }: RuleContext) {
+export function commonModeMargin({ rails, stage }: RoleContext, part: Part) {
   const p = part as OpAmp | Comparator;
   const reach = { low: rails.negative_v + p.icm_neg_headroom_v, high: rails.positive_v - p.icm_pos_headroom_v };
   if (stage.stage === "diode") throw new Error("input-common-mode applies to amplifier stages only");
   return { reach, range: stage.input, ...rangeMargin(stage.input, reach) };
 }
 
-export const inputCommonMode: Rule = {
+export const inputCommonMode = defineRule({
   id: "input-common-mode",
   unit: "V",
   checks: "The inputs stay inside the part's common-mode range over the whole signal window.",
@@ -25,24 +26,28 @@ export const inputCommonMode: Rule = {
     "op-amp": ["icm_neg_headroom_v", "icm_pos_headroom_v"],
     comparator: ["icm_neg_headroom_v", "icm_pos_headroom_v"],
   },
-  evaluate(ctx) {
-    const m = commonModeMargin(ctx);
-    return finding("input-common-mode", {
+  measure(ctx, part) {
+    const m = commonModeMargin(ctx, part);
+    return {
       verdict: voltageVerdict(m.margin, ctx.policy),
       needed: m.needed,
       available: m.reached,
       margin: m.margin,
-      unit: "V",
       limit: Math.max(Math.abs(m.needed), ctx.policy.headroom_margin_v),
-      reason: () =>
-        `needs inputs from ${volts(m.range.low)} to ${volts(m.range.high)}; with V− = ${volts(ctx.rails.negative_v)} and V+ = ${volts(ctx.rails.positive_v)} it accepts ${volts(m.reach.low)} to ${volts(m.reach.high)}: ${spareOrShort(m.margin, "V")}`,
-      steps: () => [
-        { label: "lowest input = V− + icm_neg_headroom_v", value: m.reach.low, unit: "V" },
-        { label: "highest input = V+ − icm_pos_headroom_v", value: m.reach.high, unit: "V" },
-        { label: "needed low − lowest input", value: m.range.low - m.reach.low, unit: "V" },
-        { label: "highest input − needed high", value: m.reach.high - m.range.high, unit: "V" },
-        { label: "margin = the smaller", value: m.margin, unit: "V" },
-      ],
-    });
+      reach: m.reach,
+      range: m.range,
+    };
   },
-};
+  describe({ margin, reach, range }, { rails }) {
+    return {
+      reason: `needs inputs from ${volts(range.low)} to ${volts(range.high)}; with V− = ${volts(rails.negative_v)} and V+ = ${volts(rails.positive_v)} it accepts ${volts(reach.low)} to ${volts(reach.high)}: ${spareOrShort(margin, "V")}`,
+      steps: [
+        { label: "lowest input = V− + icm_neg_headroom_v", value: reach.low, unit: "V" },
+        { label: "highest input = V+ − icm_pos_headroom_v", value: reach.high, unit: "V" },
+        { label: "needed low − lowest input", value: range.low - reach.low, unit: "V" },
+        { label: "highest input − needed high", value: reach.high - range.high, unit: "V" },
+        { label: "margin = the smaller", value: margin, unit: "V" },
+      ],
+    };
+  },
+});

@@ -1,5 +1,4 @@
-import type { Rule } from "../src/core/engine/types.ts";
-import { finding } from "../src/core/engine/finding.ts";
+import { defineRule, stageAs } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { Diode } from "../src/core/schemas/diode.ts";
@@ -15,7 +14,7 @@ export function leakageAt(d: Diode, maxC: number): number {
   return d.type === "schottky" ? ir * 10 ** (rise / 25) : ir * 2 ** (rise / 10);
 }
 
-export const leakage: Rule = {
+export const leakage = defineRule({
   id: "leakage",
   unit: "V",
   checks:
@@ -26,36 +25,34 @@ export const leakage: Rule = {
   policy: "offset_share",
   kinds: ["diode"],
   needs: { diode: ["ir_na"] },
-  evaluate({ part, stage, design, policy }) {
-    const d = part as Diode;
-    if (stage.stage !== "diode" || stage.leakage_ohm === undefined || stage.leakage_limit_v === undefined) {
+  measure({ stage, design, policy }, part) {
+    const s = stageAs(stage, "diode", "leakage");
+    if (s.leakage_ohm === undefined || s.leakage_limit_v === undefined) {
       throw new Error("leakage needs a diode stage with a resistance and a limit");
     }
-    const ohm = stage.leakage_ohm;
-    const hot = design.temperature.max_c;
-    const ir = leakageAt(d, hot);
-    const perInput = stage.leakage_per_input ?? 1;
-    const error = (ir * ohm) / perInput;
-    const limit = stage.leakage_limit_v;
+    const ir = leakageAt(part as Diode, design.temperature.max_c);
+    const error = (ir * s.leakage_ohm) / (s.leakage_per_input ?? 1);
+    const limit = s.leakage_limit_v;
     const margin = limit - error;
-    const scale = () => (perInput === 1 ? "" : ` ÷ ${Number(perInput.toPrecision(3))}`);
-    return finding("leakage", {
-      verdict: shareVerdict(margin, limit, policy),
-      needed: limit,
-      available: error,
-      margin,
-      unit: "V",
-      limit,
-      reason: () =>
-        `leaks ${formatSI(ir, "A")} at ${hot} °C (${formatSI(d.ir_na * 1e-9, "A")} at 25 °C), × ${formatSI(ohm, "Ω")}${scale()} = ${formatSI(error, "V")}; the limit is ${formatSI(limit, "V")} (${stage.leakage_what ?? "error share"}): ${spareOrShortSmall(margin)}`,
-      steps: () => [
-        { label: "ir at 25 °C", value: d.ir_na * 1e-9, unit: "A" },
+    return { verdict: shareVerdict(margin, limit, policy), needed: limit, available: error, margin, limit, ir };
+  },
+  describe({ available: error, margin, limit, ir }, { stage, design }, part) {
+    const s = stageAs(stage, "diode", "leakage");
+    const ohm = s.leakage_ohm ?? 0;
+    const hot = design.temperature.max_c;
+    const perInput = s.leakage_per_input ?? 1;
+    const ir25 = (part as Diode).ir_na * 1e-9;
+    const scale = perInput === 1 ? "" : ` ÷ ${Number(perInput.toPrecision(3))}`;
+    return {
+      reason: `leaks ${formatSI(ir, "A")} at ${hot} °C (${formatSI(ir25, "A")} at 25 °C), × ${formatSI(ohm, "Ω")}${scale} = ${formatSI(error, "V")}; the limit is ${formatSI(limit, "V")} (${s.leakage_what ?? "error share"}): ${spareOrShortSmall(margin)}`,
+      steps: [
+        { label: "ir at 25 °C", value: ir25, unit: "A" },
         { label: `ir at ${hot} °C`, value: ir, unit: "A" },
         { label: "resistance it flows through", value: ohm, unit: "Ω" },
         { label: "error = ir × R (÷ k when input-referred)", value: error, unit: "V" },
         { label: "limit", value: limit, unit: "V" },
         { label: "margin = limit − error", value: margin, unit: "V" },
       ],
-    });
+    };
   },
-};
+});

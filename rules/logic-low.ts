@@ -1,10 +1,9 @@
-import type { Rule } from "../src/core/engine/types.ts";
-import { finding, volts } from "../src/core/engine/finding.ts";
+import { defineRule, volts } from "../src/core/engine/finding.ts";
 import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
 import { formatSI, formatVolts } from "../src/core/units.ts";
 import { INPUT_CLAMP_V, NPN_VBE_ON_V, NPN_VCE_SAT_V, outputHigh, outputLow } from "./levels.ts";
 
-export const logicLow: Rule = {
+export const logicLow = defineRule({
   id: "logic-low",
   unit: "V",
   checks: "When the signal is negative, the logic input sees a level below V_IL and not below −0.3 V.",
@@ -15,77 +14,73 @@ export const logicLow: Rule = {
   policy: "headroom_margin_v",
   kinds: ["comparator", "op-amp"],
   needs: {},
-  evaluate({ part, stage, design, rails, policy }) {
+  measure({ stage, design, rails, policy }, part) {
     const { vil_v: vil, level_shift: shift, pull_down_ohm: pull } = design.logic;
     if (shift === "diode-clamp") {
       const ir = stage.stage === "sign" && stage.clamp ? stage.clamp.ir_na * 1e-9 : 0;
       const level = ir * pull;
       const margin = vil - level;
-      return finding("logic-low", {
-        verdict: voltageVerdict(margin, policy),
-        needed: vil,
-        available: level,
-        margin,
-        unit: "V",
-        limit: vil,
-        reason: () =>
-          `with the output low the clamp diode blocks, and its leakage of ${formatSI(ir, "A")} × ${formatSI(pull, "Ω")} holds the input at ${formatSI(level, "V")}; needs at most V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
-        steps: () => [
-          { label: "clamp diode leakage ir", value: ir, unit: "A" },
-          { label: "V_low = ir × pull_down_ohm", value: level, unit: "V" },
-          { label: "margin = vil − V_low", value: margin, unit: "V" },
-        ],
-      });
+      const verdict = voltageVerdict(margin, policy);
+      return { case: "clamp-leakage", verdict, needed: vil, available: level, margin, limit: vil, ir } as const;
     }
     if (shift === "npn-inverter") {
+      const drive = NPN_VBE_ON_V + INPUT_CLAMP_V;
       const high = outputHigh(part, rails);
       if (high === null) {
-        return finding("logic-low", {
+        return {
+          case: "cannot-drive",
           verdict: "fail",
-          needed: NPN_VBE_ON_V + INPUT_CLAMP_V,
+          needed: drive,
           available: 0,
-          margin: -(NPN_VBE_ON_V + INPUT_CLAMP_V),
-          unit: "V",
+          margin: -drive,
           limit: vil,
-          reason: "an open-drain output cannot drive the NPN's base high",
-          steps: [],
-        });
+          ir: 0,
+        } as const;
       }
-      const drive = NPN_VBE_ON_V + INPUT_CLAMP_V;
       const margin = Math.min(high - drive, vil - NPN_VCE_SAT_V);
-      return finding("logic-low", {
-        verdict: voltageVerdict(margin, policy),
-        needed: drive,
-        available: high,
-        margin,
-        unit: "V",
-        limit: vil,
-        reason: () =>
-          `the output high of ${volts(high)} must exceed ${formatVolts(drive)} to saturate the NPN, which then pulls the input to ${formatVolts(NPN_VCE_SAT_V)} against V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
-        steps: () => [
-          { label: "V_OH", value: high, unit: "V" },
-          { label: "margin = min(V_OH − 1.0 V, vil − 0.2 V)", value: margin, unit: "V" },
-        ],
-      });
+      const verdict = voltageVerdict(margin, policy);
+      return { case: "npn", verdict, needed: drive, available: high, margin, limit: vil, ir: 0 } as const;
     }
     const low = outputLow(part, rails);
     const margin = Math.min(vil - low, low + INPUT_CLAMP_V);
     const tooLow = low + INPUT_CLAMP_V < vil - low;
-    return finding("logic-low", {
-      verdict: voltageVerdict(margin, policy),
-      needed: tooLow ? -INPUT_CLAMP_V : vil,
-      available: low,
-      margin,
-      unit: "V",
-      limit: vil,
-      reason: () =>
-        `the output low of ${volts(low)} reaches the input directly; ${tooLow ? "needs at least −0.30 V (below that the input's protection conducts)" : `needs at most V_IL ${formatVolts(vil)}`}: ${spareOrShort(margin, "V")}`,
-      steps: () => [
-        { label: "V_low = V− + out_neg_headroom_v", value: low, unit: "V" },
-        { label: "vil − V_low", value: vil - low, unit: "V" },
-        { label: "V_low + 0.3 V", value: low + INPUT_CLAMP_V, unit: "V" },
-        { label: "margin = the smaller", value: margin, unit: "V" },
-      ],
-    });
+    const verdict = voltageVerdict(margin, policy);
+    const needed = tooLow ? -INPUT_CLAMP_V : vil;
+    return { case: "direct", verdict, needed, available: low, margin, limit: vil, ir: 0, tooLow } as const;
   },
-};
+  describe(m, { design }) {
+    const { vil_v: vil, pull_down_ohm: pull } = design.logic;
+    const { available: level, margin } = m;
+    switch (m.case) {
+      case "clamp-leakage":
+        return {
+          reason: `with the output low the clamp diode blocks, and its leakage of ${formatSI(m.ir, "A")} × ${formatSI(pull, "Ω")} holds the input at ${formatSI(level, "V")}; needs at most V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
+          steps: [
+            { label: "clamp diode leakage ir", value: m.ir, unit: "A" },
+            { label: "V_low = ir × pull_down_ohm", value: level, unit: "V" },
+            { label: "margin = vil − V_low", value: margin, unit: "V" },
+          ],
+        };
+      case "cannot-drive":
+        return { reason: "an open-drain output cannot drive the NPN's base high", steps: [] };
+      case "npn":
+        return {
+          reason: `the output high of ${volts(level)} must exceed ${formatVolts(m.needed)} to saturate the NPN, which then pulls the input to ${formatVolts(NPN_VCE_SAT_V)} against V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
+          steps: [
+            { label: "V_OH", value: level, unit: "V" },
+            { label: "margin = min(V_OH − 1.0 V, vil − 0.2 V)", value: margin, unit: "V" },
+          ],
+        };
+      case "direct":
+        return {
+          reason: `the output low of ${volts(level)} reaches the input directly; ${m.tooLow ? "needs at least −0.30 V (below that the input's protection conducts)" : `needs at most V_IL ${formatVolts(vil)}`}: ${spareOrShort(margin, "V")}`,
+          steps: [
+            { label: "V_low = V− + out_neg_headroom_v", value: level, unit: "V" },
+            { label: "vil − V_low", value: vil - level, unit: "V" },
+            { label: "V_low + 0.3 V", value: level + INPUT_CLAMP_V, unit: "V" },
+            { label: "margin = the smaller", value: margin, unit: "V" },
+          ],
+        };
+    }
+  },
+});

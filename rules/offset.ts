@@ -1,5 +1,4 @@
-import type { Rule } from "../src/core/engine/types.ts";
-import { driftSpanC, finding } from "../src/core/engine/finding.ts";
+import { defineRule, driftSpanC } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
@@ -14,7 +13,7 @@ export function stageOffset(p: OpAmp, vosMultiplier: number, biasOhm: number, mi
   return { vos25, drift, vos, ib, output_v: vosMultiplier * vos + ib * biasOhm };
 }
 
-export const offset: Rule = {
+export const offset = defineRule({
   id: "offset",
   unit: "V",
   checks:
@@ -26,28 +25,25 @@ export const offset: Rule = {
   policy: "offset_share",
   kinds: ["op-amp"],
   needs: { "op-amp": ["vos_max_mv", "ib_max_na"] },
-  evaluate({ part, stage, design, policy }) {
+  measure({ stage, design, policy }, part) {
     const p = part as OpAmp;
     if (stage.stage !== "op-amp") throw new Error("offset applies to op-amp stages only");
     const o = stageOffset(p, stage.vos_multiplier, stage.bias_ohm, design.temperature.min_c, design.temperature.max_c);
     const error = o.output_v / stage.output_per_input;
     const limit = policy.offset_share * design.accuracy.required_v;
     const margin = limit - error;
-    const mult = stage.vos_multiplier === 1 ? "" : `${round3(stage.vos_multiplier)}·`;
-    const bias = stage.bias_ohm;
-    const k = stage.output_per_input;
-    const drift = () => (o.drift > 0 ? ` incl. ${mv(o.drift)} drift` : "");
-    const scale = () => (k === 1 ? "" : `, ÷ ${round3(k)} to the input`);
-    return finding("offset", {
-      verdict: shareVerdict(margin, limit, policy),
-      needed: limit,
-      available: error,
-      margin,
-      unit: "V",
-      limit,
-      reason: () =>
-        `adds ${mv(error)} at the input (${mult}${mv(o.vos)} offset${drift()} + ${formatSI(o.ib, "A")} × ${formatSI(bias, "Ω")}${scale()}); the limit is ${mv(limit)}: ${spareOrShortSmall(margin)}`,
-      steps: () => [
+    return { verdict: shareVerdict(margin, limit, policy), needed: limit, available: error, margin, limit, o };
+  },
+  describe({ available: error, margin, limit, o }, { stage }) {
+    const multiplier = stage.stage === "op-amp" ? stage.vos_multiplier : 1;
+    const bias = stage.stage === "op-amp" ? stage.bias_ohm : 0;
+    const k = stage.stage === "op-amp" ? stage.output_per_input : 1;
+    const mult = multiplier === 1 ? "" : `${round3(multiplier)}·`;
+    const drift = o.drift > 0 ? ` incl. ${mv(o.drift)} drift` : "";
+    const scale = k === 1 ? "" : `, ÷ ${round3(k)} to the input`;
+    return {
+      reason: `adds ${mv(error)} at the input (${mult}${mv(o.vos)} offset${drift} + ${formatSI(o.ib, "A")} × ${formatSI(bias, "Ω")}${scale}); the limit is ${mv(limit)}: ${spareOrShortSmall(margin)}`,
+      steps: [
         { label: "Vos at 25 °C", value: o.vos25, unit: "V" },
         { label: "drift × temperature span", value: o.drift, unit: "V" },
         { label: "Ib", value: o.ib, unit: "A" },
@@ -57,9 +53,9 @@ export const offset: Rule = {
         { label: "limit = offset_share × required_v", value: limit, unit: "V" },
         { label: "margin = limit − error", value: margin, unit: "V" },
       ],
-    });
+    };
   },
-};
+});
 
 function mv(v: number): string {
   return formatSI(v, "V");

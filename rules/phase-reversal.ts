@@ -1,12 +1,11 @@
-import type { Rule } from "../src/core/engine/types.ts";
-import { finding } from "../src/core/engine/finding.ts";
+import { defineRule } from "../src/core/engine/finding.ts";
 import { formatVolts } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 import { commonModeMargin } from "./input-common-mode.ts";
 
 // A part that reverses is only as safe as its common-mode margin: inside the
 // range it works, but an overload transient can latch the output the wrong way.
-export const phaseReversal: Rule = {
+export const phaseReversal = defineRule({
   id: "phase-reversal",
   unit: "V",
   checks: "The output does not invert when an input leaves the common-mode range.",
@@ -16,27 +15,31 @@ export const phaseReversal: Rule = {
   policy: null,
   kinds: ["op-amp"],
   needs: { "op-amp": ["phase_reversal"] },
-  evaluate(ctx) {
-    const p = ctx.part as OpAmp;
-    const m = commonModeMargin(ctx);
+  measure(ctx, part) {
+    const p = part as OpAmp;
+    const m = commonModeMargin(ctx, part);
     const reverses = p.phase_reversal === true;
     const verdict = !reverses ? "pass" : m.margin < 0 ? "fail" : "marginal";
-    const reason = !reverses
-      ? "does not reverse its output phase when the inputs leave the common-mode range"
-      : m.margin < 0
-        ? `reverses its output phase outside the common-mode range, and the inputs already leave it by ${formatVolts(-m.margin)}: the output can latch the wrong way`
-        : `reverses its output phase outside the common-mode range; inside it here with ${formatVolts(m.margin)} to spare, but an overload can latch the output the wrong way`;
-    return finding("phase-reversal", {
+    return {
       verdict,
       needed: 0,
       available: m.margin,
       margin: reverses ? m.margin : Math.max(0, m.margin),
-      unit: "V",
-      reason,
-      steps: () => [
-        { label: "phase_reversal (1 = yes)", value: reverses ? 1 : 0, unit: "" },
-        { label: "input common-mode margin", value: m.margin, unit: "V" },
-      ],
-    });
+      reverses,
+    } as const;
   },
-};
+  describe({ available: cmMargin, reverses }) {
+    const reason = !reverses
+      ? "does not reverse its output phase when the inputs leave the common-mode range"
+      : cmMargin < 0
+        ? `reverses its output phase outside the common-mode range, and the inputs already leave it by ${formatVolts(-cmMargin)}: the output can latch the wrong way`
+        : `reverses its output phase outside the common-mode range; inside it here with ${formatVolts(cmMargin)} to spare, but an overload can latch the output the wrong way`;
+    return {
+      reason,
+      steps: [
+        { label: "phase_reversal (1 = yes)", value: reverses ? 1 : 0, unit: "" },
+        { label: "input common-mode margin", value: cmMargin, unit: "V" },
+      ],
+    };
+  },
+});

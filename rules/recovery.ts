@@ -1,12 +1,11 @@
-import type { Rule } from "../src/core/engine/types.ts";
-import { finding } from "../src/core/engine/finding.ts";
+import { defineRule, stageAs } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { Diode } from "../src/core/schemas/diode.ts";
 
 // A diode conducts backwards for trr after it is switched off: in the pump that
 // charge is lost every half cycle, in the rectifier it smears each zero crossing.
-export const recovery: Rule = {
+export const recovery = defineRule({
   id: "recovery",
   unit: "s",
   checks: "The diode stops conducting backwards quickly compared with how often it switches.",
@@ -16,27 +15,22 @@ export const recovery: Rule = {
   policy: "timing_fraction",
   kinds: ["diode"],
   needs: { diode: ["trr_ns"] },
-  evaluate({ part, stage, policy }) {
-    const d = part as Diode;
-    if (stage.stage !== "diode" || stage.recovery_limit_s === undefined)
-      throw new Error("recovery needs a diode stage with a time limit");
-    const trr = (d.trr_ns ?? 0) * 1e-9;
-    const limit = stage.recovery_limit_s;
+  measure({ stage, policy }, part) {
+    const limit = stageAs(stage, "diode", "recovery").recovery_limit_s;
+    if (limit === undefined) throw new Error("recovery needs a diode stage with a time limit");
+    const trr = ((part as Diode).trr_ns ?? 0) * 1e-9;
     const margin = limit - trr;
-    return finding("recovery", {
-      verdict: shareVerdict(margin, limit, policy),
-      needed: limit,
-      available: trr,
-      margin,
-      unit: "s",
-      limit,
-      reason: () =>
-        `recovers in ${formatSI(trr, "s")}; the limit is ${formatSI(limit, "s")} (${stage.recovery_what ?? "timing allowance"}): ${spareOrShort(margin, "s")}`,
-      steps: () => [
+    return { verdict: shareVerdict(margin, limit, policy), needed: limit, available: trr, margin, limit };
+  },
+  describe({ needed: limit, available: trr, margin }, { stage }) {
+    const what = stageAs(stage, "diode", "recovery").recovery_what ?? "timing allowance";
+    return {
+      reason: `recovers in ${formatSI(trr, "s")}; the limit is ${formatSI(limit, "s")} (${what}): ${spareOrShort(margin, "s")}`,
+      steps: [
         { label: "trr", value: trr, unit: "s" },
-        { label: `limit (${stage.recovery_what ?? "timing allowance"})`, value: limit, unit: "s" },
+        { label: `limit (${what})`, value: limit, unit: "s" },
         { label: "margin = limit − trr", value: margin, unit: "s" },
       ],
-    });
+    };
   },
-};
+});

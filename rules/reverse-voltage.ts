@@ -1,10 +1,9 @@
-import type { Rule } from "../src/core/engine/types.ts";
-import { finding } from "../src/core/engine/finding.ts";
+import { defineRule, stageAs } from "../src/core/engine/finding.ts";
 import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
 import { formatVolts } from "../src/core/units.ts";
 import type { Diode } from "../src/core/schemas/diode.ts";
 
-export const reverseVoltage: Rule = {
+export const reverseVoltage = defineRule({
   id: "reverse-voltage",
   unit: "V",
   checks: "The diode blocks the largest reverse voltage its position sees.",
@@ -13,24 +12,21 @@ export const reverseVoltage: Rule = {
   policy: "headroom_margin_v",
   kinds: ["diode"],
   needs: { diode: ["vr_max_v"] },
-  evaluate({ part, stage, policy }) {
-    const d = part as Diode;
-    if (stage.stage !== "diode") throw new Error("reverse-voltage applies to diode stages only");
-    const margin = d.vr_max_v - stage.reverse_v;
-    return finding("reverse-voltage", {
-      verdict: voltageVerdict(margin, policy),
-      needed: stage.reverse_v,
-      available: d.vr_max_v,
-      margin,
-      unit: "V",
-      limit: stage.reverse_v,
-      reason: () =>
-        `must block ${formatVolts(stage.reverse_v)} (${stage.reverse_what ?? "reverse"}); rated ${formatVolts(d.vr_max_v)}: ${spareOrShort(margin, "V")}`,
-      steps: () => [
-        { label: `needed = ${stage.reverse_what ?? "reverse voltage"}`, value: stage.reverse_v, unit: "V" },
-        { label: "vr_max_v", value: d.vr_max_v, unit: "V" },
+  measure({ stage, policy }, part) {
+    const needed = stageAs(stage, "diode", "reverse-voltage").reverse_v;
+    const rated = (part as Diode).vr_max_v;
+    const margin = rated - needed;
+    return { verdict: voltageVerdict(margin, policy), needed, available: rated, margin, limit: needed };
+  },
+  describe({ needed, available: rated, margin }, { stage }) {
+    const what = stageAs(stage, "diode", "reverse-voltage").reverse_what;
+    return {
+      reason: `must block ${formatVolts(needed)} (${what ?? "reverse"}); rated ${formatVolts(rated)}: ${spareOrShort(margin, "V")}`,
+      steps: [
+        { label: `needed = ${what ?? "reverse voltage"}`, value: needed, unit: "V" },
+        { label: "vr_max_v", value: rated, unit: "V" },
         { label: "margin = vr_max_v − needed", value: margin, unit: "V" },
       ],
-    });
+    };
   },
-};
+});

@@ -1,11 +1,10 @@
-import type { Rule } from "../src/core/engine/types.ts";
-import { finding } from "../src/core/engine/finding.ts";
+import { defineRule } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { Comparator } from "../src/core/schemas/comparator.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
-export const signDeadBand: Rule = {
+export const signDeadBand = defineRule({
   id: "sign-dead-band",
   unit: "V",
   checks: "The band around zero where the sign may be wrong stays inside its share of the accuracy.",
@@ -14,29 +13,25 @@ export const signDeadBand: Rule = {
   policy: "sign_share",
   kinds: ["comparator", "op-amp"],
   needs: { comparator: ["vos_max_mv"], "op-amp": ["vos_max_mv"] },
-  evaluate({ part, stage, design, policy }) {
+  measure({ stage, design, policy }, part) {
     const p = part as Comparator | OpAmp;
     const k = stage.stage === "sign" ? stage.output_per_input : 1;
     const vos = p.vos_max_mv * 1e-3;
     const band = (2 * vos) / k;
     const limit = policy.sign_share * design.accuracy.required_v;
     const margin = limit - band;
-    return finding("sign-dead-band", {
-      verdict: shareVerdict(margin, limit, policy),
-      needed: limit,
-      available: band,
-      margin,
-      unit: "V",
-      limit,
-      reason: () =>
-        `the sign can be wrong within ${formatSI(band, "V")} of zero at the input (2 × ${formatSI(vos, "V")} ÷ ${Number(k.toPrecision(3))}); the limit is ${formatSI(limit, "V")}: ${spareOrShortSmall(margin)}`,
-      steps: () => [
+    return { verdict: shareVerdict(margin, limit, policy), needed: limit, available: band, margin, limit, vos, k };
+  },
+  describe({ available: band, margin, limit, vos, k }) {
+    return {
+      reason: `the sign can be wrong within ${formatSI(band, "V")} of zero at the input (2 × ${formatSI(vos, "V")} ÷ ${Number(k.toPrecision(3))}); the limit is ${formatSI(limit, "V")}: ${spareOrShortSmall(margin)}`,
+      steps: [
         { label: "Vos", value: vos, unit: "V" },
         { label: "k", value: k, unit: "" },
         { label: "dead band = 2·Vos / k", value: band, unit: "V" },
         { label: "limit = sign_share × required_v", value: limit, unit: "V" },
         { label: "margin = limit − dead band", value: margin, unit: "V" },
       ],
-    });
+    };
   },
-};
+});

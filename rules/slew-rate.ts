@@ -1,10 +1,9 @@
-import type { Rule } from "../src/core/engine/types.ts";
-import { finding } from "../src/core/engine/finding.ts";
+import { defineRule } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
 import { formatQuantity, formatSI } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
-export const slewRate: Rule = {
+export const slewRate = defineRule({
   id: "slew-rate",
   unit: "V/s",
   checks: "The op amp slews fast enough to follow a full-scale sine at the highest signal frequency.",
@@ -14,28 +13,23 @@ export const slewRate: Rule = {
   policy: "marginal_fraction",
   kinds: ["op-amp"],
   needs: { "op-amp": ["slew_v_per_us"] },
-  evaluate({ part, stage, design, policy }) {
-    const p = part as OpAmp;
+  measure({ stage, design, policy }, part) {
     if (stage.stage !== "op-amp") throw new Error("slew-rate applies to op-amp stages only");
-    const f = design.signal.max_frequency_hz;
-    const needed = 2 * Math.PI * f * stage.slew_amplitude_v;
-    const slew = p.slew_v_per_us * 1e6;
+    const needed = 2 * Math.PI * design.signal.max_frequency_hz * stage.slew_amplitude_v;
+    const slew = (part as OpAmp).slew_v_per_us * 1e6;
     const margin = slew - needed;
-    return finding("slew-rate", {
-      verdict: shareVerdict(margin, needed, policy),
-      needed,
-      available: slew,
-      margin,
-      unit: "V/s",
-      limit: needed,
-      reason: () =>
-        `needs ${formatQuantity(needed, "V/s")} (2π × ${formatSI(f, "Hz")} × ${formatSI(stage.slew_amplitude_v, "V")}); slews ${formatQuantity(slew, "V/s")}: ${spareOrShort(margin, "V/s")}`,
-      steps: () => [
-        { label: "amplitude to follow", value: stage.slew_amplitude_v, unit: "V" },
+    return { verdict: shareVerdict(margin, needed, policy), needed, available: slew, margin, limit: needed };
+  },
+  describe({ needed, available: slew, margin }, { stage, design }) {
+    const amplitude = stage.stage === "op-amp" ? stage.slew_amplitude_v : 0;
+    return {
+      reason: `needs ${formatQuantity(needed, "V/s")} (2π × ${formatSI(design.signal.max_frequency_hz, "Hz")} × ${formatSI(amplitude, "V")}); slews ${formatQuantity(slew, "V/s")}: ${spareOrShort(margin, "V/s")}`,
+      steps: [
+        { label: "amplitude to follow", value: amplitude, unit: "V" },
         { label: "needed = 2π·f·amplitude", value: needed, unit: "V/s" },
         { label: "slew rate", value: slew, unit: "V/s" },
         { label: "margin = slew − needed", value: margin, unit: "V/s" },
       ],
-    });
+    };
   },
-};
+});

@@ -1,11 +1,10 @@
-import type { Rule } from "../src/core/engine/types.ts";
-import { finding } from "../src/core/engine/finding.ts";
+import { defineRule } from "../src/core/engine/finding.ts";
 import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
 import { formatVolts } from "../src/core/units.ts";
 import type { Comparator } from "../src/core/schemas/comparator.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
-export const supplyRange: Rule = {
+export const supplyRange = defineRule({
   id: "supply-range",
   unit: "V",
   checks: "The total supply V+ − V− lies inside the part's rated supply range.",
@@ -14,28 +13,33 @@ export const supplyRange: Rule = {
   policy: "headroom_margin_v",
   kinds: ["op-amp", "comparator"],
   needs: { "op-amp": ["supply_min_v", "supply_max_v"], comparator: ["supply_min_v", "supply_max_v"] },
-  evaluate({ part, rails, policy }) {
+  measure({ rails, policy }, part) {
     const p = part as OpAmp | Comparator;
     const vs = rails.positive_v - rails.negative_v;
     const belowMax = p.supply_max_v - vs;
     const aboveMin = vs - p.supply_min_v;
     const margin = Math.min(aboveMin, belowMax);
     const binding = aboveMin <= belowMax ? p.supply_min_v : p.supply_max_v;
-    return finding("supply-range", {
+    return {
       verdict: voltageVerdict(margin, policy),
       needed: vs,
       available: binding,
       margin,
-      unit: "V",
       limit: vs,
-      reason: () =>
-        `needs a supply of ${formatVolts(vs)} (V+ ${formatVolts(rails.positive_v)}, V− ${formatVolts(rails.negative_v)}); rated ${formatVolts(p.supply_min_v)} to ${formatVolts(p.supply_max_v)}: ${spareOrShort(margin, "V")}`,
-      steps: () => [
+      aboveMin,
+      belowMax,
+    };
+  },
+  describe({ needed: vs, margin, aboveMin, belowMax }, { rails }, part) {
+    const p = part as OpAmp | Comparator;
+    return {
+      reason: `needs a supply of ${formatVolts(vs)} (V+ ${formatVolts(rails.positive_v)}, V− ${formatVolts(rails.negative_v)}); rated ${formatVolts(p.supply_min_v)} to ${formatVolts(p.supply_max_v)}: ${spareOrShort(margin, "V")}`,
+      steps: [
         { label: "Vs = V+ − V−", value: vs, unit: "V" },
         { label: "Vs − supply_min_v", value: aboveMin, unit: "V" },
         { label: "supply_max_v − Vs", value: belowMax, unit: "V" },
         { label: "margin = the smaller", value: margin, unit: "V" },
       ],
-    });
+    };
   },
-};
+});

@@ -1,8 +1,7 @@
-import type { Rule } from "../src/core/engine/types.ts";
-import { finding } from "../src/core/engine/finding.ts";
+import { defineRule } from "../src/core/engine/finding.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
-export const unityGainStable: Rule = {
+export const unityGainStable = defineRule({
   id: "unity-gain-stable",
   unit: "",
   checks: "The op amp is stable at the low noise gain these stages run at (a follower is gain 1).",
@@ -11,20 +10,23 @@ export const unityGainStable: Rule = {
   policy: null,
   kinds: ["op-amp"],
   needs: { "op-amp": ["unity_gain_stable"] },
-  evaluate({ part, stage }) {
-    const p = part as OpAmp;
-    const gain = stage.stage === "op-amp" ? stage.noise_gain : 1;
-    const stable = p.unity_gain_stable;
-    return finding("unity-gain-stable", {
+  measure(_ctx, part) {
+    const stable = (part as OpAmp).unity_gain_stable;
+    return {
       verdict: stable ? "pass" : "fail",
       needed: 1,
       available: stable ? 1 : 0,
       margin: stable ? 0 : -1,
-      unit: "",
-      reason: stable
-        ? `stable as a follower; ${stage.label} runs at noise gain ${gain}`
-        : `not unity-gain stable: ${stage.label} runs at noise gain ${gain}, where a decompensated part may oscillate`,
-      steps: () => [{ label: "unity_gain_stable (1 = yes)", value: stable ? 1 : 0, unit: "" }],
-    });
+    } as const;
   },
-};
+  describe({ available }, { stage }) {
+    const gain = stage.stage === "op-amp" ? stage.noise_gain : 1;
+    return {
+      reason:
+        available === 1
+          ? `stable as a follower; ${stage.label} runs at noise gain ${gain}`
+          : `not unity-gain stable: ${stage.label} runs at noise gain ${gain}, where a decompensated part may oscillate`,
+      steps: [{ label: "unity_gain_stable (1 = yes)", value: available, unit: "" }],
+    };
+  },
+});

@@ -1,10 +1,9 @@
-import type { Rule } from "../src/core/engine/types.ts";
-import { finding } from "../src/core/engine/finding.ts";
+import { defineRule } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
 import { formatQuantity, formatSI } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
-export const zeroCrossing: Rule = {
+export const zeroCrossing = defineRule({
   id: "zero-crossing",
   unit: "s",
   checks: "At each zero crossing the rectifier's output jumps through two diode drops fast enough.",
@@ -13,31 +12,26 @@ export const zeroCrossing: Rule = {
   policy: "timing_fraction",
   kinds: ["op-amp"],
   needs: { "op-amp": ["slew_v_per_us"] },
-  evaluate({ part, stage, design, policy }) {
-    const p = part as OpAmp;
+  measure({ stage, design, policy }, part) {
     if (stage.stage !== "op-amp") throw new Error("zero-crossing applies to op-amp stages only");
     const jump = stage.zero_crossing_v ?? 0;
-    const slew = p.slew_v_per_us * 1e6;
+    const slew = (part as OpAmp).slew_v_per_us * 1e6;
     const time = jump / slew;
-    const f = design.signal.max_frequency_hz;
-    const limit = policy.timing_fraction / f;
+    const limit = policy.timing_fraction / design.signal.max_frequency_hz;
     const margin = limit - time;
-    return finding("zero-crossing", {
-      verdict: shareVerdict(margin, limit, policy),
-      needed: limit,
-      available: time,
-      margin,
-      unit: "s",
-      limit,
-      reason: () =>
-        `jumps ${formatSI(jump, "V")} (two diode drops) at ${formatQuantity(slew, "V/s")} in ${formatSI(time, "s")}; the limit is ${formatSI(limit, "s")} (${policy.timing_fraction * 100} % of the ${formatSI(1 / f, "s")} period): ${spareOrShort(margin, "s")}`,
-      steps: () => [
+    return { verdict: shareVerdict(margin, limit, policy), needed: limit, available: time, margin, limit, jump, slew };
+  },
+  describe({ available: time, margin, limit, jump, slew }, { design, policy }) {
+    const f = design.signal.max_frequency_hz;
+    return {
+      reason: `jumps ${formatSI(jump, "V")} (two diode drops) at ${formatQuantity(slew, "V/s")} in ${formatSI(time, "s")}; the limit is ${formatSI(limit, "s")} (${policy.timing_fraction * 100} % of the ${formatSI(1 / f, "s")} period): ${spareOrShort(margin, "s")}`,
+      steps: [
         { label: "jump = 2·Vf", value: jump, unit: "V" },
         { label: "slew rate", value: slew, unit: "V/s" },
         { label: "jump time = jump / slew", value: time, unit: "s" },
         { label: "limit = timing_fraction / f", value: limit, unit: "s" },
         { label: "margin = limit − jump time", value: margin, unit: "s" },
       ],
-    });
+    };
   },
-};
+});

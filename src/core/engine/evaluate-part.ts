@@ -1,8 +1,11 @@
 // Runs a role's rules on one part and ranks the parts of a role (SPEC §7).
 import type { Part } from "../catalogue.ts";
 import type { Policy, Role } from "../schemas/design.ts";
-import type { Finding, Rule, RuleContext, Stage, Verdict } from "./types.ts";
+import { finding } from "./finding.ts";
+import { VERDICTS, type Finding, type RoleContext, type Rule, type Stage, type Verdict } from "./types.ts";
 import { severity, unratedFinding, worst } from "./verdict.ts";
+
+const UNRATED = severity("unrated");
 
 export type PartResult = {
   readonly part: Part;
@@ -18,7 +21,7 @@ export type PartResult = {
 /**
  * A part's result keeps only its verdict and ranking key; the findings are
  * worked out again on first read. Rules are pure, so the second run gives the
- * same findings, and a 2,000-part catalogue does not hold 30,000 findings in
+ * same numbers, and a 2,000-part catalogue does not hold 30,000 findings in
  * memory between keystrokes of the try page when a page shows only a few.
  */
 class LazyPartResult implements PartResult {
@@ -27,21 +30,25 @@ class LazyPartResult implements PartResult {
   readonly bom: boolean;
   readonly relative: number;
   #rules: readonly Rule[];
-  #ctx: Omit<RuleContext, "part">;
+  #ctx: RoleContext;
   #findings: Finding[] | undefined;
 
-  constructor(rules: readonly Rule[], ctx: Omit<RuleContext, "part">, part: Part, bom: boolean) {
-    const findings = runRules(rules, ctx, part);
+  constructor(rules: readonly Rule[], ctx: RoleContext, part: Part, bom: boolean, verdict: Verdict, relative: number) {
     this.part = part;
-    this.verdict = partVerdict(findings, ctx.policy);
+    this.verdict = verdict;
     this.bom = bom;
-    this.relative = relativeMargin(findings);
+    this.relative = relative;
     this.#rules = rules;
     this.#ctx = ctx;
   }
 
   get findings(): Finding[] {
-    this.#findings ??= runRules(this.#rules, this.#ctx, this.part);
+    this.#findings ??= this.#rules.map((rule) => {
+      const missing = missingColumns(rule, this.part);
+      return missing.length > 0
+        ? unratedFinding(rule.id, missing, rule.unit)
+        : finding(rule, rule.measure(this.#ctx, this.part), this.#ctx, this.part);
+    });
     return this.#findings;
   }
 
@@ -50,47 +57,51 @@ class LazyPartResult implements PartResult {
   }
 }
 
-function runRules(rules: readonly Rule[], ctx: Omit<RuleContext, "part">, part: Part): Finding[] {
-  const findings: Finding[] = [];
-  const partCtx: RuleContext = { ...ctx, part };
+function missingColumns(rule: Rule, part: Part): string[] {
+  const needs = rule.needs[part.kind];
+  if (needs === undefined) return [];
   const cells = part as Record<string, unknown>;
-  for (const rule of rules) {
-    const needs = rule.needs[part.kind];
-    if (needs !== undefined && needs.some((c) => cells[c] === undefined)) {
-      findings.push(
-        unratedFinding(
-          rule.id,
-          needs.filter((c) => cells[c] === undefined),
-          rule.unit,
-        ),
-      );
-    } else findings.push(rule.evaluate(partCtx));
-  }
-  return findings;
+  return needs.filter((c) => cells[c] === undefined);
 }
 
-export function evaluatePart(
-  rules: readonly Rule[],
-  ctx: Omit<RuleContext, "part">,
-  part: Part,
-  bom: boolean,
-): PartResult {
-  return new LazyPartResult(rules, ctx, part, bom);
+/** Whether any column the rule needs is empty; a loop, not a filter, as it runs for every part. */
+function lacksColumn(rule: Rule, part: Part): boolean {
+  const needs = rule.needs[part.kind];
+  if (needs === undefined) return false;
+  const cells = part as Record<string, unknown>;
+  for (let i = 0; i < needs.length; i++) if (cells[needs[i] as string] === undefined) return true;
+  return false;
+}
+
+/**
+ * The hot path: every rule's numbers for one part, folded straight into the
+ * verdict and the ranking key. No finding, sentence or array is made here.
+ */
+export function evaluatePart(rules: readonly Rule[], ctx: RoleContext, part: Part, bom: boolean): PartResult {
+  let worstSeverity = 0;
+  let least = Infinity;
+  for (let i = 0; i < rules.length; i++) {
+    const rule = rules[i] as Rule;
+    if (lacksColumn(rule, part)) {
+      worstSeverity = Math.max(worstSeverity, UNRATED);
+      continue;
+    }
+    const m = rule.measure(ctx, part);
+    worstSeverity = Math.max(worstSeverity, severity(m.verdict));
+    if (m.limit !== undefined && m.limit > 0) least = Math.min(least, m.margin / m.limit);
+  }
+  const verdict = verdictOf(worstSeverity, ctx.policy);
+  return new LazyPartResult(rules, ctx, part, bom, verdict, Number.isFinite(least) ? least : 0);
 }
 
 /** The worst finding; with allow_unrated an unrated finding counts as marginal. */
 export function partVerdict(findings: readonly Finding[], policy: Policy): Verdict {
-  const v = worst(findings.map((f) => f.verdict));
-  return v === "unrated" && policy.allow_unrated ? "marginal" : v;
+  return verdictOf(severity(worst(findings.map((f) => f.verdict))), policy);
 }
 
-function relativeMargin(findings: readonly Finding[]): number {
-  let least = Infinity;
-  for (const f of findings) {
-    if (f.margin === null || f.limit === undefined || !(f.limit > 0)) continue;
-    least = Math.min(least, f.margin / f.limit);
-  }
-  return Number.isFinite(least) ? least : 0;
+function verdictOf(worstSeverity: number, policy: Policy): Verdict {
+  const v = VERDICTS[worstSeverity] ?? "fail";
+  return v === "unrated" && policy.allow_unrated ? "marginal" : v;
 }
 
 const STATUS_ORDER: Record<string, number> = { stocked: 0, approved: 1, listed: 2 };

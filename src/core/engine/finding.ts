@@ -1,8 +1,12 @@
 // Small builders the rule modules share, so each rule reads as its formula.
-import type { Finding, Rails, Range, Step, Verdict } from "./types.ts";
+import type { Part } from "../catalogue.ts";
+import type { Explanation, Finding, Measured, Rails, Range, RoleContext, Rule, Stage, Step, Verdict } from "./types.ts";
 import { formatVolts } from "../units.ts";
 
-type Lazy<T> = T | (() => T);
+/** Identity, so a rule's `describe` is typed by what its own `measure` returns. */
+export function defineRule<M extends Measured>(rule: Rule<M>): Rule<M> {
+  return rule;
+}
 
 /**
  * A finding whose sentence and arithmetic steps are written only when first
@@ -17,29 +21,30 @@ class LazyFinding implements Finding {
   readonly margin: number;
   readonly unit: string;
   readonly limit?: number;
-  #reason: Lazy<string>;
-  #steps: Lazy<Step[]>;
+  #explain: (() => Explanation) | Explanation;
 
-  constructor(rule: string, f: FindingInput) {
-    this.rule = rule;
-    this.verdict = f.verdict;
-    this.needed = f.needed;
-    this.available = f.available;
-    this.margin = f.margin;
-    this.unit = f.unit;
-    if (f.limit !== undefined) this.limit = f.limit;
-    this.#reason = f.reason;
-    this.#steps = f.steps;
+  constructor(rule: Rule, m: Measured, ctx: RoleContext, part: Part) {
+    this.rule = rule.id;
+    this.verdict = m.verdict;
+    this.needed = m.needed;
+    this.available = m.available;
+    this.margin = m.margin;
+    this.unit = rule.unit;
+    if (m.limit !== undefined) this.limit = m.limit;
+    this.#explain = () => rule.describe(m, ctx, part);
+  }
+
+  #explained(): Explanation {
+    if (typeof this.#explain === "function") this.#explain = this.#explain();
+    return this.#explain;
   }
 
   get reason(): string {
-    if (typeof this.#reason === "function") this.#reason = this.#reason();
-    return this.#reason;
+    return this.#explained().reason;
   }
 
   get steps(): Step[] {
-    if (typeof this.#steps === "function") this.#steps = this.#steps();
-    return this.#steps;
+    return this.#explained().steps;
   }
 
   toJSON(): Finding {
@@ -48,19 +53,15 @@ class LazyFinding implements Finding {
   }
 }
 
-type FindingInput = {
-  verdict: Verdict;
-  needed: number;
-  available: number;
-  margin: number;
-  unit: string;
-  limit?: number;
-  reason: Lazy<string>;
-  steps: Lazy<Step[]>;
-};
+/** The finding of a rule from what it measured; its text is written on first read. */
+export function finding(rule: Rule, m: Measured, ctx: RoleContext, part: Part): Finding {
+  return new LazyFinding(rule, m, ctx, part);
+}
 
-export function finding(rule: string, f: FindingInput): Finding {
-  return new LazyFinding(rule, f);
+/** The stage as the kind a rule works on; any other is a wiring mistake in a role table. */
+export function stageAs<K extends Stage["stage"]>(stage: Stage, kind: K, rule: string): Extract<Stage, { stage: K }> {
+  if (stage.stage !== kind) throw new Error(`${rule} applies to ${kind} stages only`);
+  return stage as Extract<Stage, { stage: K }>;
 }
 
 /** Which side of a needed range binds, against a reachable range. */

@@ -2,6 +2,7 @@
 import type { Part, PartKind } from "../catalogue.ts";
 import type { Design, Policy, Role } from "../schemas/design.ts";
 
+/** In order of severity: verdict.ts ranks by this index. */
 export const VERDICTS = ["pass", "marginal", "unrated", "fail"] as const;
 export type Verdict = (typeof VERDICTS)[number];
 
@@ -86,8 +87,8 @@ export type Stage = OpAmpStage | SignStage | DiodeStage;
 
 export type Rails = { positive_v: number; negative_v: number };
 
-export type RuleContext<P extends Part = Part> = {
-  part: P;
+/** What a rule sees of the role it checks a part for; the same for every candidate. */
+export type RoleContext = {
   role: Role;
   stage: Stage;
   design: Design;
@@ -95,7 +96,26 @@ export type RuleContext<P extends Part = Part> = {
   rails: Rails;
 };
 
-export type Rule = {
+export type RuleContext<P extends Part = Part> = RoleContext & { part: P };
+
+/**
+ * The numbers a rule measures for one part: all the engine needs to judge and
+ * rank it. A rule adds what its sentence needs (intermediate values), so the
+ * text can be written later, only for the findings someone reads.
+ */
+export type Measured = {
+  verdict: Verdict;
+  needed: number;
+  available: number;
+  margin: number;
+  /** Scale for ranking by relative margin; absent for yes/no rules. */
+  limit?: number;
+};
+
+/** The sentence and the arithmetic of one finding. */
+export type Explanation = { reason: string; steps: Step[] };
+
+export type RuleInfo = {
   id: string;
   /** One sentence: what the rule checks. */
   checks: string;
@@ -111,5 +131,11 @@ export type Rule = {
   kinds: readonly PartKind[];
   /** Columns the rule cannot do without, per kind; an empty one makes the finding `unrated`. */
   needs: Partial<Record<PartKind, readonly string[]>>;
-  evaluate(ctx: RuleContext): Finding;
+};
+
+export type Rule<M extends Measured = Measured> = RuleInfo & {
+  /** Pure arithmetic, no text: runs for every candidate on every evaluation. */
+  measure(ctx: RoleContext, part: Part): M;
+  /** Words and steps for what `measure` gave; runs only when a finding is read. */
+  describe(m: M, ctx: RoleContext, part: Part): Explanation;
 };

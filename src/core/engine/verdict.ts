@@ -1,7 +1,7 @@
 // Verdicts from margins (SPEC §7), and the phrases every reason shares.
 import { formatQuantity, formatVolts } from "../units.ts";
 import type { Policy } from "../schemas/design.ts";
-import type { Finding, Verdict } from "./types.ts";
+import { VERDICTS, type Finding, type Verdict } from "./types.ts";
 
 /** Voltage rules: marginal when 0 ≤ margin < headroom_margin_v. */
 export function voltageVerdict(margin: number, policy: Policy): Verdict {
@@ -15,7 +15,7 @@ export function shareVerdict(margin: number, limit: number, policy: Policy): Ver
   return margin < policy.marginal_fraction * Math.abs(limit) ? "marginal" : "pass";
 }
 
-const SEVERITY: Record<Verdict, number> = { pass: 0, marginal: 1, unrated: 2, fail: 3 };
+const SEVERITY = Object.fromEntries(VERDICTS.map((v, i) => [v, i])) as Record<Verdict, number>;
 
 export function severity(v: Verdict): number {
   return SEVERITY[v];

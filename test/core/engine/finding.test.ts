@@ -1,25 +1,42 @@
 import { describe, expect, it } from "vitest";
-import { driftSpanC, finding, railPhrase, rangeMargin } from "../../../src/core/engine/finding.ts";
+import { defineRule, driftSpanC, finding, railPhrase, rangeMargin } from "../../../src/core/engine/finding.ts";
+import { design as makeDesign } from "../../helpers/designs.ts";
+import { opAmp } from "../../helpers/parts.ts";
+import { bufferStage, SPLIT_5V } from "../../helpers/rules.ts";
 
 describe("finding", () => {
+  // A made-up rule that counts how often its text is written.
+  let calls = 0;
+  const rule = defineRule({
+    id: "offset",
+    unit: "V",
+    checks: "",
+    formula: "",
+    source: "",
+    policy: null,
+    kinds: ["op-amp"],
+    needs: {},
+    measure: () => ({ verdict: "pass", needed: 0.025, available: 0.01, margin: 0.015, limit: 0.025 }) as const,
+    describe: (m) => {
+      calls++;
+      return { reason: `adds ${m.available * 1000} mV`, steps: [{ label: "error", value: m.available, unit: "V" }] };
+    },
+  });
+  const ctx = {
+    role: "buffer" as const,
+    stage: bufferStage(),
+    design: makeDesign(),
+    policy: makeDesign().policy,
+    rails: SPLIT_5V,
+  };
+  const part = opAmp();
+
   it("writes its reason and steps once, on first read, and keeps them in JSON", () => {
-    let calls = 0;
-    const f = finding("offset", {
-      verdict: "pass",
-      needed: 0.025,
-      available: 0.01,
-      margin: 0.015,
-      unit: "V",
-      limit: 0.025,
-      reason: () => {
-        calls++;
-        return "adds 10.0 mV";
-      },
-      steps: () => [{ label: "error", value: 0.01, unit: "V" }],
-    });
+    calls = 0;
+    const f = finding(rule, rule.measure(ctx, part), ctx, part);
     expect(calls).toBe(0);
-    expect(f.reason).toBe("adds 10.0 mV");
-    expect(f.reason).toBe("adds 10.0 mV");
+    expect(f.reason).toBe("adds 10 mV");
+    expect(f.steps).toHaveLength(1);
     expect(calls).toBe(1);
     expect(JSON.parse(JSON.stringify(f))).toEqual({
       rule: "offset",
@@ -29,21 +46,18 @@ describe("finding", () => {
       margin: 0.015,
       unit: "V",
       limit: 0.025,
-      reason: "adds 10.0 mV",
+      reason: "adds 10 mV",
       steps: [{ label: "error", value: 0.01, unit: "V" }],
     });
   });
 
   it("leaves limit out of JSON when it has none", () => {
-    const f = finding("unity-gain-stable", {
-      verdict: "pass",
-      needed: 1,
-      available: 1,
-      margin: 0,
-      unit: "",
-      reason: "ok",
-      steps: [],
-    });
+    const yesNo = {
+      ...rule,
+      id: "unity-gain-stable",
+      measure: () => ({ verdict: "pass", needed: 1, available: 1, margin: 0 }) as const,
+    };
+    const f = finding(yesNo, yesNo.measure(), ctx, part);
     expect(Object.keys(JSON.parse(JSON.stringify(f)))).not.toContain("limit");
   });
 });
