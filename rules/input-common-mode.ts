@@ -5,12 +5,14 @@ import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
 import type { Comparator } from "../src/core/schemas/comparator.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
-/** Reachable input range and the binding margin; phase-reversal reuses it. */
+/** Reachable input range and the binding margin, flat (it runs for every candidate); phase-reversal reuses it. */
 export function commonModeMargin({ rails, stage }: RoleContext, part: Part) {
   const p = part as OpAmp | Comparator;
-  const reach = { low: rails.negative_v + p.icm_neg_headroom_v, high: rails.positive_v - p.icm_pos_headroom_v };
   if (stage.stage === "diode") throw new Error("input-common-mode applies to amplifier stages only");
-  return { reach, range: stage.input, ...rangeMargin(stage.input, reach) };
+  const low = rails.negative_v + p.icm_neg_headroom_v;
+  const high = rails.positive_v - p.icm_pos_headroom_v;
+  const { margin, needed, reached } = rangeMargin(stage.input, { low, high });
+  return { margin, needed, reached, low, high };
 }
 
 export const inputCommonMode = defineRule({
@@ -34,11 +36,13 @@ export const inputCommonMode = defineRule({
       available: m.reached,
       margin: m.margin,
       limit: Math.max(Math.abs(m.needed), ctx.policy.headroom_margin_v),
-      reach: m.reach,
-      range: m.range,
+      lowest: m.low,
+      highest: m.high,
     };
   },
-  describe({ margin, reach, range }, { rails }) {
+  describe({ margin, lowest, highest }, { rails, stage }) {
+    const reach = { low: lowest, high: highest };
+    const range = stage.stage === "diode" ? reach : stage.input;
     return {
       reason: `needs inputs from ${volts(range.low)} to ${volts(range.high)}; with V− = ${volts(rails.negative_v)} and V+ = ${volts(rails.positive_v)} it accepts ${volts(reach.low)} to ${volts(reach.high)}: ${spareOrShort(margin, "V")}`,
       steps: [

@@ -17,19 +17,40 @@ export const logicHigh = defineRule({
   needs: {},
   measure({ stage, design, rails, policy }, part) {
     const { vih_v: vih, vdd_v: vdd, level_shift: shift, pull_down_ohm: pull } = design.logic;
-    const none = { high: 0, vf: 0, current: 0, tooHigh: false };
     if (shift === "npn-inverter") {
       const low = outputLow(part, rails);
       const margin = Math.min(NPN_OFF_BELOW_V - low, vdd - vih);
       const verdict = voltageVerdict(margin, policy);
-      return { case: "npn", verdict, needed: NPN_OFF_BELOW_V, available: low, margin, limit: vih, ...none } as const;
+      return {
+        case: "npn",
+        verdict,
+        needed: NPN_OFF_BELOW_V,
+        available: low,
+        margin,
+        limit: vih,
+        high: 0,
+        vf: 0,
+        current: 0,
+        tooHigh: false,
+      } as const;
     }
     const high = outputHigh(part, rails);
     if (high === null) {
       if (shift === "pull-up") {
         const margin = vdd - vih;
         const verdict = voltageVerdict(margin, policy);
-        return { case: "pulled-up", verdict, needed: vih, available: vdd, margin, limit: vih, ...none } as const;
+        return {
+          case: "pulled-up",
+          verdict,
+          needed: vih,
+          available: vdd,
+          margin,
+          limit: vih,
+          high: 0,
+          vf: 0,
+          current: 0,
+          tooHigh: false,
+        } as const;
       }
       return {
         case: "cannot-drive",
@@ -38,7 +59,10 @@ export const logicHigh = defineRule({
         available: 0,
         margin: -vih,
         limit: vih,
-        ...none,
+        high: 0,
+        vf: 0,
+        current: 0,
+        tooHigh: false,
       } as const;
     }
     let vf = 0;

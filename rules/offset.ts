@@ -32,9 +32,16 @@ export const offset = defineRule({
     const error = o.output_v / stage.output_per_input;
     const limit = policy.offset_share * design.accuracy.required_v;
     const margin = limit - error;
-    return { verdict: shareVerdict(margin, limit, policy), needed: limit, available: error, margin, limit, o };
+    return { verdict: shareVerdict(margin, limit, policy), needed: limit, available: error, margin, limit };
   },
-  describe({ available: error, margin, limit, o }, { stage }) {
+  describe({ available: error, margin, limit }, { stage, design }, part) {
+    const o = stageOffset(
+      part as OpAmp,
+      stage.stage === "op-amp" ? stage.vos_multiplier : 1,
+      stage.stage === "op-amp" ? stage.bias_ohm : 0,
+      design.temperature.min_c,
+      design.temperature.max_c,
+    );
     const multiplier = stage.stage === "op-amp" ? stage.vos_multiplier : 1;
     const bias = stage.stage === "op-amp" ? stage.bias_ohm : 0;
     const k = stage.stage === "op-amp" ? stage.output_per_input : 1;

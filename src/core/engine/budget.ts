@@ -59,8 +59,7 @@ export function buildBudget(
   for (const rt of roleTerms) {
     const role = roles.find((r) => r.role === rt.role);
     if (!role) continue;
-    const chosen =
-      role.chosen === undefined ? undefined : [...role.fits, ...role.rejected].find((p) => p.part.id === role.chosen);
+    const chosen = role.chosen === undefined ? undefined : role.resultOf(role.chosen);
     const f = chosen?.findings.find((x) => x.rule === rt.rule);
     if (!chosen || !f || f.available === null) {
       if (!role.optional && !missing.includes(rt.role)) missing.push(rt.role);

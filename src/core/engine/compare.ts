@@ -23,7 +23,7 @@ export function compare(results: DesignResult[], catalogue: Catalogue): Comparis
       holds: designHolds(r),
       roles: r.roles.map((role) => ({
         role: role.role,
-        fits: role.fits.length,
+        fits: role.fitCount,
         ...(role.chosen !== undefined ? { chosen: role.chosen } : {}),
       })),
       effective_bits: r.budget.effective_bits,

@@ -1,11 +1,13 @@
 // Runs a role's rules on one part and ranks the parts of a role (SPEC §7).
-import type { Part } from "../catalogue.ts";
+import type { Part, PartKind } from "../catalogue.ts";
 import type { Policy, Role } from "../schemas/design.ts";
+import { RULES } from "../../../rules/index.ts";
 import { finding } from "./finding.ts";
 import { VERDICTS, type Finding, type RoleContext, type Rule, type Stage, type Verdict } from "./types.ts";
 import { severity, unratedFinding, worst } from "./verdict.ts";
 
 const UNRATED = severity("unrated");
+const MARGINAL = severity("marginal");
 
 export type PartResult = {
   readonly part: Part;
@@ -64,25 +66,50 @@ function missingColumns(rule: Rule, part: Part): string[] {
   return needs.filter((c) => cells[c] === undefined);
 }
 
-/** Whether any column the rule needs is empty; a loop, not a filter, as it runs for every part. */
-function lacksColumn(rule: Rule, part: Part): boolean {
-  const needs = rule.needs[part.kind];
-  if (needs === undefined) return false;
-  const cells = part as Record<string, unknown>;
-  for (let i = 0; i < needs.length; i++) if (cells[needs[i] as string] === undefined) return true;
-  return false;
+// Every column some rule needs. Most catalogues fill them all, so whether a
+// part leaves any empty is worked out once per candidate list (parts are
+// immutable), and the per-rule check runs only for the parts that do.
+const NEEDED_COLUMNS: Record<PartKind, readonly string[]> = {
+  "op-amp": neededBy("op-amp"),
+  comparator: neededBy("comparator"),
+  diode: neededBy("diode"),
+};
+
+function neededBy(kind: PartKind): string[] {
+  return [...new Set(RULES.flatMap((r) => r.needs[kind] ?? []))];
+}
+const gapsByList = new WeakMap<readonly Part[], Uint8Array>();
+
+/** 1 for each part that leaves a column some rule needs empty. */
+export function partsWithGaps(parts: readonly Part[]): Uint8Array {
+  let gaps = gapsByList.get(parts);
+  if (gaps === undefined) {
+    gaps = Uint8Array.from(parts, (p) =>
+      NEEDED_COLUMNS[p.kind].some((c) => (p as Record<string, unknown>)[c] === undefined) ? 1 : 0,
+    );
+    gapsByList.set(parts, gaps);
+  }
+  return gaps;
 }
 
 /**
- * The hot path: every rule's numbers for one part, folded straight into the
- * verdict and the ranking key. No finding, sentence or array is made here.
+ * The hot path: every rule's numbers for one part, folded straight into a
+ * severity (returned, after allow_unrated) and the least relative margin
+ * (written to relative[i]). No finding, sentence or result object is made.
  */
-export function evaluatePart(rules: readonly Rule[], ctx: RoleContext, part: Part, bom: boolean): PartResult {
+export function scorePart(
+  rules: readonly Rule[],
+  ctx: RoleContext,
+  part: Part,
+  mayLack: boolean,
+  relative: Float64Array,
+  i: number,
+): number {
   let worstSeverity = 0;
   let least = Infinity;
-  for (let i = 0; i < rules.length; i++) {
-    const rule = rules[i] as Rule;
-    if (lacksColumn(rule, part)) {
+  for (let r = 0; r < rules.length; r++) {
+    const rule = rules[r] as Rule;
+    if (mayLack && missingColumns(rule, part).length > 0) {
       worstSeverity = Math.max(worstSeverity, UNRATED);
       continue;
     }
@@ -90,30 +117,52 @@ export function evaluatePart(rules: readonly Rule[], ctx: RoleContext, part: Par
     worstSeverity = Math.max(worstSeverity, severity(m.verdict));
     if (m.limit !== undefined && m.limit > 0) least = Math.min(least, m.margin / m.limit);
   }
-  const verdict = verdictOf(worstSeverity, ctx.policy);
-  return new LazyPartResult(rules, ctx, part, bom, verdict, Number.isFinite(least) ? least : 0);
+  relative[i] = Number.isFinite(least) ? least : 0;
+  return worstSeverity === UNRATED && ctx.policy.allow_unrated ? MARGINAL : worstSeverity;
+}
+
+/** One part's result, as a role's ranking makes it when read. */
+export function partResult(
+  rules: readonly Rule[],
+  ctx: RoleContext,
+  part: Part,
+  bom: boolean,
+  severityOfPart: number,
+  relative: number,
+): PartResult {
+  return new LazyPartResult(rules, ctx, part, bom, VERDICTS[severityOfPart] ?? "fail", relative);
+}
+
+/** Scores one part on its own (tests and single lookups); roles score whole lists in runRole. */
+export function evaluatePart(rules: readonly Rule[], ctx: RoleContext, part: Part, bom: boolean): PartResult {
+  const relative = new Float64Array(1);
+  const s = scorePart(rules, ctx, part, true, relative, 0);
+  return partResult(rules, ctx, part, bom, s, relative[0] as number);
 }
 
 /** The worst finding; with allow_unrated an unrated finding counts as marginal. */
 export function partVerdict(findings: readonly Finding[], policy: Policy): Verdict {
-  return verdictOf(severity(worst(findings.map((f) => f.verdict))), policy);
-}
-
-function verdictOf(worstSeverity: number, policy: Policy): Verdict {
-  const v = VERDICTS[worstSeverity] ?? "fail";
+  const v = worst(findings.map((f) => f.verdict));
   return v === "unrated" && policy.allow_unrated ? "marginal" : v;
 }
 
 const STATUS_ORDER: Record<string, number> = { stocked: 0, approved: 1, listed: 2 };
 
+/** Verdict, status and cost band (unrated cost last) folded into one integer, smallest first. */
+export function majorKey(severityOfPart: number, part: Part): number {
+  return severityOfPart * 64 + (STATUS_ORDER[part.status] ?? 3) * 8 + (part.cost_band ?? 6);
+}
+
+export function idOrder(a: Part, b: Part): number {
+  return a.id < b.id ? -1 : a.id > b.id ? 1 : 0;
+}
+
 /** Ranking of SPEC §7: verdict, status, cost band, relative margin (largest first), id. */
 export function compareResults(a: PartResult, b: PartResult): number {
   return (
-    severity(a.verdict) - severity(b.verdict) ||
-    (STATUS_ORDER[a.part.status] ?? 3) - (STATUS_ORDER[b.part.status] ?? 3) ||
-    (a.part.cost_band ?? 6) - (b.part.cost_band ?? 6) ||
+    majorKey(severity(a.verdict), a.part) - majorKey(severity(b.verdict), b.part) ||
     b.relative - a.relative ||
-    (a.part.id < b.part.id ? -1 : a.part.id > b.part.id ? 1 : 0)
+    idOrder(a.part, b.part)
   );
 }
 
@@ -121,11 +170,8 @@ export function isFit(v: Verdict): boolean {
   return v === "pass" || v === "marginal";
 }
 
-export type RoleParts = { fits: PartResult[]; rejected: PartResult[] };
-
-export function rankRole(results: PartResult[]): RoleParts {
-  const sorted = [...results].sort(compareResults);
-  return { fits: sorted.filter((r) => isFit(r.verdict)), rejected: sorted.filter((r) => !isFit(r.verdict)) };
+export function isFitResult(r: PartResult | undefined): boolean {
+  return r !== undefined && isFit(r.verdict);
 }
 
 export type { Role, Stage };

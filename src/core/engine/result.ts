@@ -4,7 +4,7 @@ import type { Divider } from "../math/divider.ts";
 import type { PumpRail } from "../math/charge-pump.ts";
 import type { LevelShiftNetwork } from "../math/level-shift.ts";
 import type { Design, Role } from "../schemas/design.ts";
-import type { PartResult } from "./evaluate-part.ts";
+import { isFitResult, type PartResult } from "./evaluate-part.ts";
 import type { Rails, Stage } from "./types.ts";
 import type { Budget, Conversion } from "./budget.ts";
 
@@ -17,8 +17,13 @@ export type RoleResult = {
   label: string;
   rules: readonly string[];
   stage: Stage;
+  /** Ranked on first read. */
   fits: PartResult[];
   rejected: PartResult[];
+  /** How many parts fit, without ranking them. */
+  readonly fitCount: number;
+  /** One part's result, without ranking the role. */
+  resultOf(id: string): PartResult | undefined;
   /** BOM id for this role, if any. */
   bom?: string;
   /** The part the design uses: the BOM part, else the best-ranked fit. */
@@ -90,8 +95,8 @@ export type Evaluation = { ok: true; result: DesignResult } | { ok: false; probl
 /** Exit-0 condition of SPEC §10: every BOM part fits and every required role has a fit. */
 export function designHolds(result: DesignResult): boolean {
   return result.roles.every((r) => {
-    if (r.optional && r.fits.length === 0 && !r.bom) return true;
-    if (r.fits.length === 0) return false;
-    return r.bom === undefined || r.fits.some((p) => p.part.id === r.bom);
+    if (r.optional && r.fitCount === 0 && !r.bom) return true;
+    if (r.fitCount === 0) return false;
+    return r.bom === undefined || isFitResult(r.resultOf(r.bom));
   });
 }

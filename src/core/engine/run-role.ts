@@ -2,9 +2,10 @@
 import type { Part, PartKind } from "../catalogue.ts";
 import type { Design, Role } from "../schemas/design.ts";
 import { RULES_BY_ID, type RuleId } from "../../../rules/index.ts";
-import { evaluatePart, rankRole } from "./evaluate-part.ts";
+import { partsWithGaps, scorePart } from "./evaluate-part.ts";
+import { RoleRanking } from "./ranking.ts";
 import type { RoleResult } from "./result.ts";
-import type { Rails, Rule, Stage } from "./types.ts";
+import type { Rails, RoleContext, Rule, Stage } from "./types.ts";
 
 /** What every op-amp signal stage must pass, whatever the topology (SPEC §7, buffer row). */
 export const OP_AMP_STAGE_RULES: readonly RuleId[] = [
@@ -36,9 +37,16 @@ export function runRole(
 ): RoleResult {
   const rules = spec.rules.map((id) => RULES_BY_ID.get(id)).filter((r): r is Rule => r !== undefined);
   const bom = design.bom[role];
-  const ctx = { role, stage, design, policy: design.policy, rails };
-  const ranked = rankRole(candidates.map((p) => evaluatePart(rules, ctx, p, p.id === bom)));
-  const chosen = bom ?? ranked.fits[0]?.part.id;
+  const ctx: RoleContext = { role, stage, design, policy: design.policy, rails };
+  const n = candidates.length;
+  const severities = new Uint8Array(n);
+  const relative = new Float64Array(n);
+  const gaps = partsWithGaps(candidates);
+  for (let i = 0; i < n; i++) {
+    severities[i] = scorePart(rules, ctx, candidates[i] as Part, gaps[i] === 1, relative, i);
+  }
+  const ranking = new RoleRanking(rules, ctx, candidates, severities, relative, bom);
+  const chosen = bom ?? ranking.bestFit();
   return {
     role,
     kind: spec.kind,
@@ -46,7 +54,17 @@ export function runRole(
     label: spec.label,
     rules: spec.rules,
     stage,
-    ...ranked,
+    // Ranked, and made into result objects, only when read.
+    get fits() {
+      return ranking.fits;
+    },
+    get rejected() {
+      return ranking.rejected;
+    },
+    get fitCount() {
+      return ranking.fitCount;
+    },
+    resultOf: (id: string) => ranking.resultOf(id),
     ...(bom !== undefined ? { bom } : {}),
     ...(chosen !== undefined ? { chosen } : {}),
     ...(spec.optional ? { optional: true } : {}),

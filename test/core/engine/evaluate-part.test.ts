@@ -8,7 +8,6 @@ import {
   evaluatePart,
   isFit,
   partVerdict,
-  rankRole,
   type PartResult,
 } from "../../../src/core/engine/evaluate-part.ts";
 import type { Finding, Verdict } from "../../../src/core/engine/types.ts";
@@ -74,31 +73,6 @@ describe("compareResults: each key decides only when the ones before it tie", ()
     const b = result(second as Key);
     expect(compareResults(a, b)).toBeLessThan(0);
     expect(compareResults(b, a)).toBeGreaterThan(0);
-  });
-
-  it("rankRole splits fits (pass, marginal) from rejections (unrated, fail), each in rank order", () => {
-    const ranked = rankRole(
-      [
-        { id: "oa-fail", verdict: "fail", status: "stocked" },
-        { id: "oa-listed", verdict: "pass", status: "listed" },
-        { id: "oa-marginal", verdict: "marginal", status: "stocked" },
-        { id: "oa-unrated", verdict: "unrated", status: "stocked" },
-        { id: "oa-stocked-2", verdict: "pass", status: "stocked", cost_band: 2 },
-        { id: "oa-stocked-1b", verdict: "pass", status: "stocked", cost_band: 1, relative: 0.5 },
-        { id: "oa-stocked-1a", verdict: "pass", status: "stocked", cost_band: 1, relative: 0.5 },
-        { id: "oa-stocked-1c", verdict: "pass", status: "stocked", cost_band: 1, relative: 2 },
-      ].map((k) => result(k as Key)),
-    );
-    expect(ranked.fits.map((r) => r.part.id)).toEqual([
-      "oa-stocked-1c",
-      "oa-stocked-1a",
-      "oa-stocked-1b",
-      "oa-stocked-2",
-      "oa-listed",
-      "oa-marginal",
-    ]);
-    expect(ranked.rejected.map((r) => r.part.id)).toEqual(["oa-unrated", "oa-fail"]);
-    expect(["pass", "marginal", "unrated", "fail"].map((v) => isFit(v as Verdict))).toEqual([true, true, false, false]);
   });
 });
 

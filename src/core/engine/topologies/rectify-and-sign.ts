@@ -11,6 +11,7 @@ import { formatSI, formatVolts } from "../../units.ts";
 import { buildBudget, type BudgetTerm, type Conversion } from "../budget.ts";
 import { ratioDeviation } from "../../math/divider.ts";
 import type { Derived, DesignResult, DiodeUse, Evaluation, RoleResult } from "../result.ts";
+import { isFitResult } from "../evaluate-part.ts";
 import { OP_AMP_STAGE_RULES, runRole as runRoleWith, type RoleSpec } from "../run-role.ts";
 import type { DiodeStage, OpAmpStage, Rails, SignStage, Stage } from "../types.ts";
 import { frontEnd } from "./front-end.ts";
@@ -96,10 +97,10 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
 
   // Diode choice for a role: the BOM part, else the best fit, else the least bad.
   const settleDiode = (r: RoleResult, what: string): Diode => {
-    const pick = r.bom ?? r.fits[0]?.part.id ?? r.rejected[0]?.part.id;
+    const pick = r.chosen ?? r.rejected[0]?.part.id;
     const found = pick === undefined ? undefined : catalogue.byId.get(pick);
     if (found && found.kind === "diode") {
-      if (!r.fits.some((f) => f.part.id === found.id)) {
+      if (!isFitResult(r.resultOf(found.id))) {
         notes.push(`The ${what} ${found.id} does not fit its role; values that depend on it use it anyway.`);
       }
       return found;
@@ -111,7 +112,7 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
     id: d.id,
     vf_v: forwardVoltage(d, current),
     current_a: current,
-    fits: r ? r.fits.some((f) => f.part.id === d.id) : false,
+    fits: r ? isFitResult(r.resultOf(d.id)) : false,
   });
 
   // 1. The negative rail, with the pump diode settled first.
@@ -253,7 +254,7 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
   };
   runRole("buffer", buffer, rails, catalogue.opAmps);
   runRole("rectifier", rectifier, rails, catalogue.opAmps);
-  runRole("sign", sign, rails, [...catalogue.comparators, ...catalogue.opAmps]);
+  runRole("sign", sign, rails, catalogue.amplifiers);
 
   const order: Role[] = ["buffer", "rectifier", "sign", "pump-diode", "rectifier-diode", "clamp-diode"];
   roles.sort((a, b) => order.indexOf(a.role) - order.indexOf(b.role));

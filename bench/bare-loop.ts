@@ -1,0 +1,342 @@
+// The arithmetic limit the engine is measured against: the same margins and
+// verdicts as the rules, as plain loops over typed arrays, with no findings, no
+// reason text, no ranking and no objects per part. Design-level values (stages,
+// rails, the chosen clamp diode) come from one engine run beforehand, as they
+// do not grow with the catalogue; test/bench/bare-loop.test.ts checks that this
+// loop and the engine agree on every margin.
+import type { Catalogue, Part } from "../src/core/catalogue.ts";
+import { evaluateDesign, SINGLE_TOPOLOGIES } from "../src/core/engine/evaluate.ts";
+import type { Rails, Stage } from "../src/core/engine/types.ts";
+import { forwardVoltage } from "../src/core/math/diode.ts";
+import type { Design } from "../src/core/schemas/design.ts";
+import type { RuleId } from "../rules/index.ts";
+
+/** One role of one topology: what the loop needs besides the part columns. */
+export type RolePlan = {
+  topology: string;
+  role: string;
+  rules: readonly RuleId[];
+  stage: Stage;
+  rails: Rails;
+  design: Design;
+  table: Table;
+};
+
+/** A candidate list as columns; NaN marks an empty cell. */
+export type Table = {
+  ids: readonly string[];
+  n: number;
+  col: Record<string, Float64Array>;
+};
+
+const COLUMNS = [
+  "supply_min_v",
+  "supply_max_v",
+  "icm_neg_headroom_v",
+  "icm_pos_headroom_v",
+  "out_neg_headroom_v",
+  "out_pos_headroom_v",
+  "vos_max_mv",
+  "vos_drift_uv_per_c",
+  "ib_max_na",
+  "gbw_mhz",
+  "slew_v_per_us",
+  "tpd_ns",
+  "vf_1ma_v",
+  "vf_10ma_v",
+  "ir_na",
+  "vr_max_v",
+  "trr_ns",
+  "if_max_ma",
+] as const;
+
+export function tableOf(parts: readonly Part[]): Table {
+  const n = parts.length;
+  const col: Record<string, Float64Array> = {};
+  for (const c of [...COLUMNS, "is_op_amp", "open_drain", "unity_gain_stable", "phase_reversal", "schottky"]) {
+    col[c] = new Float64Array(n).fill(NaN);
+  }
+  parts.forEach((p, i) => {
+    const cells = p as Record<string, unknown>;
+    for (const c of COLUMNS) if (typeof cells[c] === "number") (col[c] as Float64Array)[i] = cells[c] as number;
+    (col.is_op_amp as Float64Array)[i] = p.kind === "op-amp" ? 1 : 0;
+    (col.open_drain as Float64Array)[i] = p.kind === "comparator" && p.output === "open-drain" ? 1 : 0;
+    if (p.kind === "op-amp") {
+      (col.unity_gain_stable as Float64Array)[i] = p.unity_gain_stable ? 1 : 0;
+      if (p.phase_reversal !== undefined) (col.phase_reversal as Float64Array)[i] = p.phase_reversal ? 1 : 0;
+    }
+    if (p.kind === "diode") (col.schottky as Float64Array)[i] = p.type === "schottky" ? 1 : 0;
+  });
+  return { ids: parts.map((p) => p.id), n, col };
+}
+
+/** Every role of every topology the design is evaluated in (both for "all"). */
+export function planOf(design: Design, catalogue: Catalogue): RolePlan[] {
+  const tables = new Map<string, Table>();
+  const table = (key: string, parts: readonly Part[]) => {
+    let t = tables.get(key);
+    if (!t) tables.set(key, (t = tableOf(parts)));
+    return t;
+  };
+  const topologies = design.topology === "all" ? SINGLE_TOPOLOGIES : [design.topology];
+  return topologies.flatMap((topology) => {
+    const e = evaluateDesign(design, catalogue, topology);
+    if (!e.ok) return [];
+    return e.result.roles.map((r) => ({
+      topology,
+      role: r.role,
+      rules: r.rules as RuleId[],
+      stage: r.stage,
+      rails: e.result.derived.rails,
+      design,
+      table:
+        r.kinds.length > 1
+          ? table("amplifiers", catalogue.amplifiers)
+          : r.kind === "diode"
+            ? table("diodes", catalogue.diodes)
+            : table("op-amps", catalogue.opAmps),
+    }));
+  });
+}
+
+/** What the loop leaves per role: each part's worst severity (0 pass … 3 fail), least relative margin, and every margin. */
+export type RoleOutput = { severity: Uint8Array; relative: Float64Array; margins: Float64Array[] };
+
+export function outputsFor(plans: readonly RolePlan[]): RoleOutput[] {
+  return plans.map((p) => ({
+    severity: new Uint8Array(p.table.n),
+    relative: new Float64Array(p.table.n),
+    margins: p.rules.map(() => new Float64Array(p.table.n)),
+  }));
+}
+
+const PASS = 0;
+const MARGINAL = 1;
+const UNRATED = 2;
+const FAIL = 3;
+
+/** Runs every role's rules over its table, writing into `out` (made once by outputsFor). */
+export function bareLoop(plans: readonly RolePlan[], out: readonly RoleOutput[]): void {
+  for (let r = 0; r < plans.length; r++) {
+    const plan = plans[r] as RolePlan;
+    const o = out[r] as RoleOutput;
+    o.severity.fill(PASS);
+    o.relative.fill(Infinity);
+    for (let k = 0; k < plan.rules.length; k++) {
+      runRule(plan, plan.rules[k] as RuleId, o.margins[k] as Float64Array, o.severity, o.relative);
+    }
+    const allowUnrated = plan.design.policy.allow_unrated;
+    for (let i = 0; i < plan.table.n; i++) {
+      if (allowUnrated && o.severity[i] === UNRATED) o.severity[i] = MARGINAL;
+      if (o.relative[i] === Infinity) o.relative[i] = 0;
+    }
+  }
+}
+
+function runRule(plan: RolePlan, rule: RuleId, margin: Float64Array, sev: Uint8Array, rel: Float64Array): void {
+  const { design, stage, rails, table } = plan;
+  const c = table.col as Record<(typeof COLUMNS)[number] | "is_op_amp" | "open_drain", Float64Array> &
+    Record<"unity_gain_stable" | "phase_reversal" | "schottky", Float64Array>;
+  const n = table.n;
+  const policy = design.policy;
+  const headroom = policy.headroom_margin_v;
+  const fraction = policy.marginal_fraction;
+  const A = design.accuracy.required_v;
+  const f = design.signal.max_frequency_hz;
+  const P = rails.positive_v;
+  const N = rails.negative_v;
+  // Verdict and ranking key for one margin; a "voltage" rule is marginal within headroom_margin_v.
+  const voltage = (i: number, m: number, limit: number) => {
+    margin[i] = m;
+    const s = m < 0 ? FAIL : m < headroom ? MARGINAL : PASS;
+    if (s > (sev[i] as number)) sev[i] = s;
+    if (limit > 0 && m / limit < (rel[i] as number)) rel[i] = m / limit;
+  };
+  const share = (i: number, m: number, limit: number) => {
+    margin[i] = m;
+    const s = m < 0 ? FAIL : m < fraction * Math.abs(limit) ? MARGINAL : PASS;
+    if (s > (sev[i] as number)) sev[i] = s;
+    if (limit > 0 && m / limit < (rel[i] as number)) rel[i] = m / limit;
+  };
+  const unrated = (i: number) => {
+    margin[i] = NaN;
+    if ((sev[i] as number) < UNRATED) sev[i] = UNRATED;
+  };
+  const range = stage.stage === "diode" ? { low: 0, high: 0 } : stage.input;
+
+  switch (rule) {
+    case "supply-range": {
+      const vs = P - N;
+      for (let i = 0; i < n; i++) {
+        voltage(i, Math.min(vs - (c.supply_min_v[i] as number), (c.supply_max_v[i] as number) - vs), vs);
+      }
+      return;
+    }
+    case "input-common-mode":
+    case "output-swing": {
+      const want = rule === "output-swing" && stage.stage === "op-amp" ? stage.output : range;
+      const neg = rule === "output-swing" ? c.out_neg_headroom_v : c.icm_neg_headroom_v;
+      const pos = rule === "output-swing" ? c.out_pos_headroom_v : c.icm_pos_headroom_v;
+      for (let i = 0; i < n; i++) {
+        const low = want.low - (N + (neg[i] as number));
+        const high = P - (pos[i] as number) - want.high;
+        const needed = low <= high ? want.low : want.high;
+        voltage(i, Math.min(low, high), Math.max(Math.abs(needed), headroom));
+      }
+      return;
+    }
+    case "unity-gain-stable":
+      for (let i = 0; i < n; i++) {
+        const stable = c.unity_gain_stable[i] === 1;
+        margin[i] = stable ? 0 : -1;
+        if (!stable) sev[i] = FAIL;
+      }
+      return;
+    case "phase-reversal":
+      for (let i = 0; i < n; i++) {
+        const flag = c.phase_reversal[i] as number;
+        if (flag !== flag) {
+          unrated(i);
+          continue;
+        }
+        const m = Math.min(
+          range.low - (N + (c.icm_neg_headroom_v[i] as number)),
+          P - (c.icm_pos_headroom_v[i] as number) - range.high,
+        );
+        const reverses = flag === 1;
+        margin[i] = reverses ? m : Math.max(0, m);
+        const s = !reverses ? PASS : m < 0 ? FAIL : MARGINAL;
+        if (s > (sev[i] as number)) sev[i] = s;
+      }
+      return;
+    case "offset": {
+      if (stage.stage !== "op-amp") return;
+      const span = Math.max(Math.abs(design.temperature.min_c - 25), Math.abs(design.temperature.max_c - 25));
+      const limit = policy.offset_share * A;
+      for (let i = 0; i < n; i++) {
+        const drift = c.vos_drift_uv_per_c[i] as number;
+        const vos = (c.vos_max_mv[i] as number) * 1e-3 + (drift === drift ? drift * 1e-6 * span : 0);
+        const error =
+          (stage.vos_multiplier * vos + (c.ib_max_na[i] as number) * 1e-9 * stage.bias_ohm) / stage.output_per_input;
+        share(i, limit - error, limit);
+      }
+      return;
+    }
+    case "bandwidth": {
+      if (stage.stage !== "op-amp") return;
+      const limit = policy.speed_share * A;
+      for (let i = 0; i < n; i++) {
+        const x = f / (((c.gbw_mhz[i] as number) * 1e6) / stage.noise_gain);
+        const s = Math.sqrt(1 + x * x);
+        share(i, limit - ((x * x) / (s * (s + 1))) * stage.bandwidth_peak_v, limit);
+      }
+      return;
+    }
+    case "slew-rate": {
+      if (stage.stage !== "op-amp") return;
+      const needed = 2 * Math.PI * f * stage.slew_amplitude_v;
+      for (let i = 0; i < n; i++) share(i, (c.slew_v_per_us[i] as number) * 1e6 - needed, needed);
+      return;
+    }
+    case "zero-crossing": {
+      if (stage.stage !== "op-amp") return;
+      const jump = stage.zero_crossing_v ?? 0;
+      const limit = policy.timing_fraction / f;
+      for (let i = 0; i < n; i++) share(i, limit - jump / ((c.slew_v_per_us[i] as number) * 1e6), limit);
+      return;
+    }
+    case "logic-high": {
+      const { vih_v: vih, vdd_v: vdd, level_shift: shift, pull_down_ohm: pull } = design.logic;
+      const clamp = shift === "diode-clamp" && stage.stage === "sign" ? stage.clamp : undefined;
+      const top = vdd + 0.3;
+      for (let i = 0; i < n; i++) {
+        const outNeg = c.out_neg_headroom_v[i] as number;
+        const outPos = c.out_pos_headroom_v[i] as number;
+        if (shift === "npn-inverter") {
+          const low = N + (outNeg === outNeg ? outNeg : 0);
+          voltage(i, Math.min(0.4 - low, vdd - vih), vih);
+        } else if (c.open_drain[i] === 1) {
+          if (shift === "pull-up") voltage(i, vdd - vih, vih);
+          else voltage(i, -vih, vih);
+        } else {
+          const high = P - (outPos === outPos ? outPos : 0);
+          const vf = clamp ? forwardVoltage(clamp, Math.max(0, high) / pull) : 0;
+          const level = high - vf;
+          voltage(i, Math.min(level - vih, top - level), vih);
+        }
+      }
+      return;
+    }
+    case "logic-low": {
+      const { vil_v: vil, level_shift: shift, pull_down_ohm: pull } = design.logic;
+      for (let i = 0; i < n; i++) {
+        if (shift === "diode-clamp") {
+          const ir = stage.stage === "sign" && stage.clamp ? stage.clamp.ir_na * 1e-9 : 0;
+          voltage(i, vil - ir * pull, vil);
+        } else if (shift === "npn-inverter") {
+          if (c.open_drain[i] === 1) voltage(i, -1.0, vil);
+          else {
+            const outPos = c.out_pos_headroom_v[i] as number;
+            voltage(i, Math.min(P - (outPos === outPos ? outPos : 0) - 1.0, vil - 0.2), vil);
+          }
+        } else {
+          const outNeg = c.out_neg_headroom_v[i] as number;
+          const low = N + (outNeg === outNeg ? outNeg : 0);
+          voltage(i, Math.min(vil - low, low + 0.3), vil);
+        }
+      }
+      return;
+    }
+    case "propagation-delay": {
+      const limit = policy.timing_fraction / f;
+      for (let i = 0; i < n; i++) {
+        if (c.is_op_amp[i] === 1) {
+          const swing = P - (c.out_pos_headroom_v[i] as number) - (N + (c.out_neg_headroom_v[i] as number));
+          share(i, limit - swing / ((c.slew_v_per_us[i] as number) * 1e6), limit);
+          if (sev[i] === PASS) sev[i] = MARGINAL; // an op amp as comparator is at best marginal
+        } else share(i, limit - (c.tpd_ns[i] as number) * 1e-9, limit);
+      }
+      return;
+    }
+    case "sign-dead-band": {
+      const k = stage.stage === "sign" ? stage.output_per_input : 1;
+      const limit = policy.sign_share * A;
+      for (let i = 0; i < n; i++) share(i, limit - (2 * (c.vos_max_mv[i] as number) * 1e-3) / k, limit);
+      return;
+    }
+    case "reverse-voltage": {
+      if (stage.stage !== "diode") return;
+      for (let i = 0; i < n; i++) voltage(i, (c.vr_max_v[i] as number) - stage.reverse_v, stage.reverse_v);
+      return;
+    }
+    case "recovery": {
+      if (stage.stage !== "diode" || stage.recovery_limit_s === undefined) return;
+      const limit = stage.recovery_limit_s;
+      for (let i = 0; i < n; i++) {
+        const trr = c.trr_ns[i] as number;
+        if (trr !== trr) unrated(i);
+        else share(i, limit - trr * 1e-9, limit);
+      }
+      return;
+    }
+    case "leakage": {
+      if (stage.stage !== "diode" || stage.leakage_ohm === undefined || stage.leakage_limit_v === undefined) return;
+      const rise = Math.max(0, design.temperature.max_c - 25);
+      const schottkyScale = 10 ** (rise / 25);
+      const junctionScale = 2 ** (rise / 10);
+      const ohmPerInput = stage.leakage_ohm / (stage.leakage_per_input ?? 1);
+      const limit = stage.leakage_limit_v;
+      for (let i = 0; i < n; i++) {
+        const ir = (c.ir_na[i] as number) * 1e-9 * (c.schottky[i] === 1 ? schottkyScale : junctionScale);
+        share(i, limit - ir * ohmPerInput, limit);
+      }
+      return;
+    }
+    case "forward-current": {
+      if (stage.stage !== "diode" || stage.forward_a === undefined) return;
+      const needed = stage.forward_a;
+      for (let i = 0; i < n; i++) share(i, (c.if_max_ma[i] as number) * 1e-3 - needed, needed);
+      return;
+    }
+  }
+}

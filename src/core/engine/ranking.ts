@@ -1,0 +1,129 @@
+// A role's candidates in ranked order (SPEC §7), kept as typed arrays of
+// severities and relative margins: a part becomes a result object only when a
+// page or report reads the list it is in, and each list is sorted on first read.
+import type { Part } from "../catalogue.ts";
+import { idOrder, majorKey, partResult, type PartResult } from "./evaluate-part.ts";
+import type { RoleContext, Rule } from "./types.ts";
+import { severity } from "./verdict.ts";
+
+const LAST_FIT = severity("marginal");
+
+// Candidate lists come from the catalogue, which keeps them in id order (the
+// last ranking key); ties on every other key then fall back to list position.
+const inIdOrder = new WeakMap<readonly Part[], boolean>();
+
+function isInIdOrder(parts: readonly Part[]): boolean {
+  let known = inIdOrder.get(parts);
+  if (known === undefined) {
+    known = parts.every((p, i) => i === 0 || (parts[i - 1] as Part).id < p.id);
+    inIdOrder.set(parts, known);
+  }
+  return known;
+}
+
+export class RoleRanking {
+  readonly #rules: readonly Rule[];
+  readonly #ctx: RoleContext;
+  readonly #parts: readonly Part[];
+  readonly #severity: Uint8Array;
+  readonly #relative: Float64Array;
+  readonly #bom: string | undefined;
+  #fits: PartResult[] | undefined;
+  #rejected: PartResult[] | undefined;
+
+  constructor(
+    rules: readonly Rule[],
+    ctx: RoleContext,
+    parts: readonly Part[],
+    severities: Uint8Array,
+    relative: Float64Array,
+    bom: string | undefined,
+  ) {
+    this.#rules = rules;
+    this.#ctx = ctx;
+    this.#parts = parts;
+    this.#severity = severities;
+    this.#relative = relative;
+    this.#bom = bom;
+  }
+
+  get fits(): PartResult[] {
+    this.#fits ??= this.#ranked(true);
+    return this.#fits;
+  }
+
+  get rejected(): PartResult[] {
+    this.#rejected ??= this.#ranked(false);
+    return this.#rejected;
+  }
+
+  /** How many parts fit, without ranking them. */
+  get fitCount(): number {
+    let count = 0;
+    for (let i = 0; i < this.#severity.length; i++) if ((this.#severity[i] as number) <= LAST_FIT) count++;
+    return count;
+  }
+
+  /** One part's result without ranking the rest (the lists' own object once they are made). */
+  resultOf(id: string): PartResult | undefined {
+    const listed =
+      (this.#fits ?? []).find((p) => p.part.id === id) ?? (this.#rejected ?? []).find((p) => p.part.id === id);
+    if (listed) return listed;
+    const i = this.#parts.findIndex((p) => p.id === id);
+    return i < 0 ? undefined : this.#result(i);
+  }
+
+  #result(i: number): PartResult {
+    const part = this.#parts[i] as Part;
+    return partResult(
+      this.#rules,
+      this.#ctx,
+      part,
+      part.id === this.#bom,
+      this.#severity[i] as number,
+      this.#relative[i] as number,
+    );
+  }
+
+  /** Id of the best-ranked fit, found in one pass rather than by sorting. */
+  bestFit(): string | undefined {
+    let best = -1;
+    for (let i = 0; i < this.#parts.length; i++) {
+      if ((this.#severity[i] as number) > LAST_FIT) continue;
+      if (best < 0 || this.#compare(i, best) < 0) best = i;
+    }
+    return best < 0 ? undefined : (this.#parts[best] as Part).id;
+  }
+
+  #major(i: number): number {
+    return majorKey(this.#severity[i] as number, this.#parts[i] as Part);
+  }
+
+  #compare(i: number, j: number): number {
+    const parts = this.#parts;
+    return (
+      this.#major(i) - this.#major(j) ||
+      (this.#relative[j] as number) - (this.#relative[i] as number) ||
+      idOrder(parts[i] as Part, parts[j] as Part)
+    );
+  }
+
+  #ranked(fit: boolean): PartResult[] {
+    const parts = this.#parts;
+    const severities = this.#severity;
+    const relative = this.#relative;
+    const chosen: number[] = [];
+    for (let i = 0; i < parts.length; i++) if ((severities[i] as number) <= LAST_FIT === fit) chosen.push(i);
+    // Keys once per part, not once per comparison.
+    const major = new Float64Array(parts.length);
+    for (const i of chosen) major[i] = this.#major(i);
+    const byPosition = isInIdOrder(parts);
+    chosen.sort(
+      (i, j) =>
+        (major[i] as number) - (major[j] as number) ||
+        (relative[j] as number) - (relative[i] as number) ||
+        (byPosition ? i - j : idOrder(parts[i] as Part, parts[j] as Part)),
+    );
+    return chosen.map((i) => this.#result(i));
+  }
+}
