@@ -1,4 +1,4 @@
-import { defineRule } from "../src/core/engine/finding.ts";
+import { defineRule, record, stageAs } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
@@ -24,37 +24,26 @@ export const bandwidth = defineRule({
   policy: "speed_share",
   kinds: ["op-amp"],
   needs: { "op-amp": ["gbw_mhz"] },
-  measure({ stage, design, policy }, part) {
-    const p = part as OpAmp;
-    if (stage.stage !== "op-amp") throw new Error("bandwidth applies to op-amp stages only");
-    const gbw = p.gbw_mhz * 1e6;
-    const fc = gbw / stage.noise_gain;
-    const fraction = singlePoleError(design.signal.max_frequency_hz, fc);
-    const error = fraction * stage.bandwidth_peak_v;
+  measure({ stage, design, policy }, part, out) {
+    const s = stageAs(stage, "op-amp", "bandwidth");
+    const fc = ((part as OpAmp).gbw_mhz * 1e6) / s.noise_gain;
+    const error = singlePoleError(design.signal.max_frequency_hz, fc) * s.bandwidth_peak_v;
     const limit = policy.speed_share * design.accuracy.required_v;
     const margin = limit - error;
-    return {
-      verdict: shareVerdict(margin, limit, policy),
-      needed: limit,
-      available: error,
-      margin,
-      limit,
-      fc,
-      fraction,
-    };
+    record(out, shareVerdict(margin, limit, policy), limit, error, margin, limit);
   },
-  describe({ available: error, margin, limit, fc, fraction }, { stage, design }, part) {
+  describe({ available: error, margin, needed: limit }, { stage, design }, part) {
+    const s = stageAs(stage, "op-amp", "bandwidth");
     const gbw = (part as OpAmp).gbw_mhz * 1e6;
+    const fc = gbw / s.noise_gain;
     const f = design.signal.max_frequency_hz;
-    const gain = stage.stage === "op-amp" ? stage.noise_gain : 1;
-    const peak = stage.stage === "op-amp" ? stage.bandwidth_peak_v : 0;
     return {
-      reason: `at ${formatSI(f, "Hz")} with fc = ${formatSI(fc, "Hz")} (GBW ${formatSI(gbw, "Hz")} ÷ noise gain ${gain}) the gain falls short by ${formatSI(error, "V")} of the ${formatSI(peak, "V")} peak; the limit is ${formatSI(limit, "V")}: ${spareOrShortSmall(margin)}`,
+      reason: `at ${formatSI(f, "Hz")} with fc = ${formatSI(fc, "Hz")} (GBW ${formatSI(gbw, "Hz")} ÷ noise gain ${s.noise_gain}) the gain falls short by ${formatSI(error, "V")} of the ${formatSI(s.bandwidth_peak_v, "V")} peak; the limit is ${formatSI(limit, "V")}: ${spareOrShortSmall(margin)}`,
       steps: [
         { label: "GBW", value: gbw, unit: "Hz" },
         { label: "fc = GBW / noise gain", value: fc, unit: "Hz" },
         { label: "f (highest signal frequency)", value: f, unit: "Hz" },
-        { label: "gain error = 1 − 1/√(1+(f/fc)²)", value: fraction, unit: "" },
+        { label: "gain error = 1 − 1/√(1+(f/fc)²)", value: singlePoleError(f, fc), unit: "" },
         { label: "error = gain error × peak", value: error, unit: "V" },
         { label: "limit = speed_share × required_v", value: limit, unit: "V" },
         { label: "margin = limit − error", value: margin, unit: "V" },

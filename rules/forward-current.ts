@@ -1,4 +1,4 @@
-import { defineRule, stageAs } from "../src/core/engine/finding.ts";
+import { defineRule, stageAs, record } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { Diode } from "../src/core/schemas/diode.ts";
@@ -14,12 +14,12 @@ export const forwardCurrent = defineRule({
   policy: "marginal_fraction",
   kinds: ["diode"],
   needs: { diode: ["if_max_ma"] },
-  measure({ stage, policy }, part) {
+  measure({ stage, policy }, part, out) {
     const needed = stageAs(stage, "diode", "forward-current").forward_a;
     if (needed === undefined) throw new Error("forward-current needs a diode stage with a current");
     const rated = (part as Diode).if_max_ma * 1e-3;
     const margin = rated - needed;
-    return { verdict: shareVerdict(margin, needed, policy), needed, available: rated, margin, limit: needed };
+    record(out, shareVerdict(margin, needed, policy), needed, rated, margin, needed);
   },
   describe({ needed, available: rated, margin }) {
     return {

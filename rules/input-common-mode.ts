@@ -1,6 +1,6 @@
 import type { Part } from "../src/core/catalogue.ts";
 import type { RoleContext } from "../src/core/engine/types.ts";
-import { defineRule, rangeMargin, volts } from "../src/core/engine/finding.ts";
+import { defineRule, rangeMargin, volts, record } from "../src/core/engine/finding.ts";
 import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
 import type { Comparator } from "../src/core/schemas/comparator.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
@@ -28,28 +28,22 @@ export const inputCommonMode = defineRule({
     "op-amp": ["icm_neg_headroom_v", "icm_pos_headroom_v"],
     comparator: ["icm_neg_headroom_v", "icm_pos_headroom_v"],
   },
-  measure(ctx, part) {
+  measure(ctx, part, out) {
     const m = commonModeMargin(ctx, part);
-    return {
-      verdict: voltageVerdict(m.margin, ctx.policy),
-      needed: m.needed,
-      available: m.reached,
-      margin: m.margin,
-      limit: Math.max(Math.abs(m.needed), ctx.policy.headroom_margin_v),
-      lowest: m.low,
-      highest: m.high,
-    };
+    const limit = Math.max(Math.abs(m.needed), ctx.policy.headroom_margin_v);
+    record(out, voltageVerdict(m.margin, ctx.policy), m.needed, m.reached, m.margin, limit);
   },
-  describe({ margin, lowest, highest }, { rails, stage }) {
-    const reach = { low: lowest, high: highest };
-    const range = stage.stage === "diode" ? reach : stage.input;
+  describe({ margin }, ctx, part) {
+    const { rails } = ctx;
+    const m = commonModeMargin(ctx, part);
+    const range = ctx.stage.stage === "diode" ? m : ctx.stage.input;
     return {
-      reason: `needs inputs from ${volts(range.low)} to ${volts(range.high)}; with V− = ${volts(rails.negative_v)} and V+ = ${volts(rails.positive_v)} it accepts ${volts(reach.low)} to ${volts(reach.high)}: ${spareOrShort(margin, "V")}`,
+      reason: `needs inputs from ${volts(range.low)} to ${volts(range.high)}; with V− = ${volts(rails.negative_v)} and V+ = ${volts(rails.positive_v)} it accepts ${volts(m.low)} to ${volts(m.high)}: ${spareOrShort(margin, "V")}`,
       steps: [
-        { label: "lowest input = V− + icm_neg_headroom_v", value: reach.low, unit: "V" },
-        { label: "highest input = V+ − icm_pos_headroom_v", value: reach.high, unit: "V" },
-        { label: "needed low − lowest input", value: range.low - reach.low, unit: "V" },
-        { label: "highest input − needed high", value: reach.high - range.high, unit: "V" },
+        { label: "lowest input = V− + icm_neg_headroom_v", value: m.low, unit: "V" },
+        { label: "highest input = V+ − icm_pos_headroom_v", value: m.high, unit: "V" },
+        { label: "needed low − lowest input", value: range.low - m.low, unit: "V" },
+        { label: "highest input − needed high", value: m.high - range.high, unit: "V" },
         { label: "margin = the smaller", value: margin, unit: "V" },
       ],
     };

@@ -1,4 +1,5 @@
-import { defineRule, stageAs } from "../src/core/engine/finding.ts";
+import type { DiodeStage, Stage } from "../src/core/engine/types.ts";
+import { defineRule, stageAs, record } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { Diode } from "../src/core/schemas/diode.ts";
@@ -25,30 +26,27 @@ export const leakage = defineRule({
   policy: "offset_share",
   kinds: ["diode"],
   needs: { diode: ["ir_na"] },
-  measure({ stage, design, policy }, part) {
-    const s = stageAs(stage, "diode", "leakage");
-    if (s.leakage_ohm === undefined || s.leakage_limit_v === undefined) {
-      throw new Error("leakage needs a diode stage with a resistance and a limit");
-    }
+  measure({ stage, design, policy }, part, out) {
+    const s = leakageStage(stage);
     const ir = leakageAt(part as Diode, design.temperature.max_c);
     const error = (ir * s.leakage_ohm) / (s.leakage_per_input ?? 1);
     const limit = s.leakage_limit_v;
     const margin = limit - error;
-    return { verdict: shareVerdict(margin, limit, policy), needed: limit, available: error, margin, limit, ir };
+    record(out, shareVerdict(margin, limit, policy), limit, error, margin, limit);
   },
-  describe({ available: error, margin, limit, ir }, { stage, design }, part) {
-    const s = stageAs(stage, "diode", "leakage");
-    const ohm = s.leakage_ohm ?? 0;
+  describe({ available: error, margin, needed: limit }, { stage, design }, part) {
+    const s = leakageStage(stage);
     const hot = design.temperature.max_c;
+    const ir = leakageAt(part as Diode, hot);
     const perInput = s.leakage_per_input ?? 1;
     const ir25 = (part as Diode).ir_na * 1e-9;
     const scale = perInput === 1 ? "" : ` ÷ ${Number(perInput.toPrecision(3))}`;
     return {
-      reason: `leaks ${formatSI(ir, "A")} at ${hot} °C (${formatSI(ir25, "A")} at 25 °C), × ${formatSI(ohm, "Ω")}${scale} = ${formatSI(error, "V")}; the limit is ${formatSI(limit, "V")} (${s.leakage_what ?? "error share"}): ${spareOrShortSmall(margin)}`,
+      reason: `leaks ${formatSI(ir, "A")} at ${hot} °C (${formatSI(ir25, "A")} at 25 °C), × ${formatSI(s.leakage_ohm, "Ω")}${scale} = ${formatSI(error, "V")}; the limit is ${formatSI(limit, "V")} (${s.leakage_what ?? "error share"}): ${spareOrShortSmall(margin)}`,
       steps: [
         { label: "ir at 25 °C", value: ir25, unit: "A" },
         { label: `ir at ${hot} °C`, value: ir, unit: "A" },
-        { label: "resistance it flows through", value: ohm, unit: "Ω" },
+        { label: "resistance it flows through", value: s.leakage_ohm, unit: "Ω" },
         { label: "error = ir × R (÷ k when input-referred)", value: error, unit: "V" },
         { label: "limit", value: limit, unit: "V" },
         { label: "margin = limit − error", value: margin, unit: "V" },
@@ -56,3 +54,13 @@ export const leakage = defineRule({
     };
   },
 });
+
+type LeakageStage = DiodeStage & { leakage_ohm: number; leakage_limit_v: number };
+
+function leakageStage(stage: Stage): LeakageStage {
+  const s = stageAs(stage, "diode", "leakage");
+  if (s.leakage_ohm === undefined || s.leakage_limit_v === undefined) {
+    throw new Error("leakage needs a diode stage with a resistance and a limit");
+  }
+  return s as LeakageStage;
+}

@@ -1,4 +1,6 @@
-import { defineRule, volts } from "../src/core/engine/finding.ts";
+import type { Part } from "../src/core/catalogue.ts";
+import type { RoleContext } from "../src/core/engine/types.ts";
+import { defineRule, volts, record } from "../src/core/engine/finding.ts";
 import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
 import { forwardVoltage } from "../src/core/math/diode.ts";
 import { formatSI, formatVolts } from "../src/core/units.ts";
@@ -15,90 +17,20 @@ export const logicHigh = defineRule({
   policy: "headroom_margin_v",
   kinds: ["comparator", "op-amp"],
   needs: {},
-  measure({ stage, design, rails, policy }, part) {
-    const { vih_v: vih, vdd_v: vdd, level_shift: shift, pull_down_ohm: pull } = design.logic;
-    if (shift === "npn-inverter") {
-      const low = outputLow(part, rails);
-      const margin = Math.min(NPN_OFF_BELOW_V - low, vdd - vih);
-      const verdict = voltageVerdict(margin, policy);
-      return {
-        case: "npn",
-        verdict,
-        needed: NPN_OFF_BELOW_V,
-        available: low,
-        margin,
-        limit: vih,
-        high: 0,
-        vf: 0,
-        current: 0,
-        tooHigh: false,
-      } as const;
-    }
-    const high = outputHigh(part, rails);
-    if (high === null) {
-      if (shift === "pull-up") {
-        const margin = vdd - vih;
-        const verdict = voltageVerdict(margin, policy);
-        return {
-          case: "pulled-up",
-          verdict,
-          needed: vih,
-          available: vdd,
-          margin,
-          limit: vih,
-          high: 0,
-          vf: 0,
-          current: 0,
-          tooHigh: false,
-        } as const;
-      }
-      return {
-        case: "cannot-drive",
-        verdict: "fail",
-        needed: vih,
-        available: 0,
-        margin: -vih,
-        limit: vih,
-        high: 0,
-        vf: 0,
-        current: 0,
-        tooHigh: false,
-      } as const;
-    }
-    let vf = 0;
-    let current = 0;
-    if (shift === "diode-clamp" && stage.stage === "sign" && stage.clamp) {
-      current = Math.max(0, high) / pull;
-      vf = forwardVoltage(stage.clamp, current);
-    }
-    const top = vdd + INPUT_CLAMP_V;
-    const level = high - vf;
-    const margin = Math.min(level - vih, top - level);
-    const tooHigh = top - level < level - vih;
-    const verdict = voltageVerdict(margin, policy);
-    const needed = tooHigh ? top : vih;
-    return {
-      case: "driven",
-      verdict,
-      needed,
-      available: level,
-      margin,
-      limit: vih,
-      high,
-      vf,
-      current,
-      tooHigh,
-    } as const;
+  measure(ctx, part, out) {
+    const h = highLevel(ctx, part);
+    const verdict = h.case === "cannot-drive" ? "fail" : voltageVerdict(h.margin, ctx.policy);
+    record(out, verdict, h.needed, h.level, h.margin, ctx.design.logic.vih_v);
   },
-  describe(m, { design }) {
-    const { vih_v: vih, vdd_v: vdd } = design.logic;
-    const { available: level, margin } = m;
-    switch (m.case) {
+  describe({ margin }, ctx, part) {
+    const { vih_v: vih, vdd_v: vdd } = ctx.design.logic;
+    const h = highLevel(ctx, part);
+    switch (h.case) {
       case "npn":
         return {
-          reason: `the output low of ${volts(level)} must stay below ${formatVolts(NPN_OFF_BELOW_V)} to turn the NPN off, so the pull-up gives ${formatVolts(vdd)} against V_IH ${formatVolts(vih)}: ${spareOrShort(margin, "V")}`,
+          reason: `the output low of ${volts(h.level)} must stay below ${formatVolts(NPN_OFF_BELOW_V)} to turn the NPN off, so the pull-up gives ${formatVolts(vdd)} against V_IH ${formatVolts(vih)}: ${spareOrShort(margin, "V")}`,
           steps: [
-            { label: "output low = V− + out_neg_headroom_v", value: level, unit: "V" },
+            { label: "output low = V− + out_neg_headroom_v", value: h.level, unit: "V" },
             { label: "margin = min(0.4 V − output low, vdd − vih)", value: margin, unit: "V" },
           ],
         };
@@ -116,21 +48,21 @@ export const logicHigh = defineRule({
       case "driven": {
         const top = vdd + INPUT_CLAMP_V;
         const diode =
-          m.vf > 0
-            ? `, minus ${formatVolts(m.vf)} across the clamp diode at ${formatSI(m.current, "A")} = ${formatVolts(level)}`
+          h.vf > 0
+            ? `, minus ${formatVolts(h.vf)} across the clamp diode at ${formatSI(h.current, "A")} = ${formatVolts(h.level)}`
             : "";
-        const bound = m.tooHigh
+        const bound = h.tooHigh
           ? `needs at most ${formatVolts(top)} (V_DD + 0.3 V)`
           : `needs at least V_IH ${formatVolts(vih)}`;
         return {
-          reason: `the output high reaches ${formatVolts(m.high)}${diode}; ${bound}: ${spareOrShort(margin, "V")}`,
+          reason: `the output high reaches ${formatVolts(h.high)}${diode}; ${bound}: ${spareOrShort(margin, "V")}`,
           steps: [
-            { label: "V_OH = V+ − out_pos_headroom_v", value: m.high, unit: "V" },
-            { label: "clamp current = V_OH / pull_down_ohm", value: m.current, unit: "A" },
-            { label: "Vf of the clamp diode at that current", value: m.vf, unit: "V" },
-            { label: "V_high = V_OH − Vf", value: level, unit: "V" },
-            { label: "V_high − vih", value: level - vih, unit: "V" },
-            { label: "vdd + 0.3 V − V_high", value: top - level, unit: "V" },
+            { label: "V_OH = V+ − out_pos_headroom_v", value: h.high, unit: "V" },
+            { label: "clamp current = V_OH / pull_down_ohm", value: h.current, unit: "A" },
+            { label: "Vf of the clamp diode at that current", value: h.vf, unit: "V" },
+            { label: "V_high = V_OH − Vf", value: h.level, unit: "V" },
+            { label: "V_high − vih", value: h.level - vih, unit: "V" },
+            { label: "vdd + 0.3 V − V_high", value: top - h.level, unit: "V" },
             { label: "margin = the smaller", value: margin, unit: "V" },
           ],
         };
@@ -138,3 +70,44 @@ export const logicHigh = defineRule({
     }
   },
 });
+
+/** The level the logic input sees when the signal is positive, by level shift; `needed` is the bound that binds. */
+function highLevel({ stage, design, rails }: RoleContext, part: Part) {
+  const { vih_v: vih, vdd_v: vdd, level_shift: shift, pull_down_ohm: pull } = design.logic;
+  const none = { high: 0, vf: 0, current: 0 };
+  if (shift === "npn-inverter") {
+    const low = outputLow(part, rails);
+    return {
+      case: "npn",
+      needed: NPN_OFF_BELOW_V,
+      level: low,
+      margin: Math.min(NPN_OFF_BELOW_V - low, vdd - vih),
+      ...none,
+    } as const;
+  }
+  const high = outputHigh(part, rails);
+  if (high === null) {
+    return shift === "pull-up"
+      ? ({ case: "pulled-up", needed: vih, level: vdd, margin: vdd - vih, ...none } as const)
+      : ({ case: "cannot-drive", needed: vih, level: 0, margin: -vih, ...none } as const);
+  }
+  let vf = 0;
+  let current = 0;
+  if (shift === "diode-clamp" && stage.stage === "sign" && stage.clamp) {
+    current = Math.max(0, high) / pull;
+    vf = forwardVoltage(stage.clamp, current);
+  }
+  const top = vdd + INPUT_CLAMP_V;
+  const level = high - vf;
+  const tooHigh = top - level < level - vih;
+  return {
+    case: "driven",
+    tooHigh,
+    needed: tooHigh ? top : vih,
+    level,
+    margin: Math.min(level - vih, top - level),
+    high,
+    vf,
+    current,
+  } as const;
+}

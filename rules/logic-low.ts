@@ -1,4 +1,6 @@
-import { defineRule, volts } from "../src/core/engine/finding.ts";
+import type { Part } from "../src/core/catalogue.ts";
+import type { RoleContext } from "../src/core/engine/types.ts";
+import { defineRule, volts, record } from "../src/core/engine/finding.ts";
 import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
 import { formatSI, formatVolts } from "../src/core/units.ts";
 import { INPUT_CLAMP_V, NPN_VBE_ON_V, NPN_VCE_SAT_V, outputHigh, outputLow } from "./levels.ts";
@@ -14,50 +16,20 @@ export const logicLow = defineRule({
   policy: "headroom_margin_v",
   kinds: ["comparator", "op-amp"],
   needs: {},
-  measure({ stage, design, rails, policy }, part) {
-    const { vil_v: vil, level_shift: shift, pull_down_ohm: pull } = design.logic;
-    if (shift === "diode-clamp") {
-      const ir = stage.stage === "sign" && stage.clamp ? stage.clamp.ir_na * 1e-9 : 0;
-      const level = ir * pull;
-      const margin = vil - level;
-      const verdict = voltageVerdict(margin, policy);
-      return { case: "clamp-leakage", verdict, needed: vil, available: level, margin, limit: vil, ir } as const;
-    }
-    if (shift === "npn-inverter") {
-      const drive = NPN_VBE_ON_V + INPUT_CLAMP_V;
-      const high = outputHigh(part, rails);
-      if (high === null) {
-        return {
-          case: "cannot-drive",
-          verdict: "fail",
-          needed: drive,
-          available: 0,
-          margin: -drive,
-          limit: vil,
-          ir: 0,
-        } as const;
-      }
-      const margin = Math.min(high - drive, vil - NPN_VCE_SAT_V);
-      const verdict = voltageVerdict(margin, policy);
-      return { case: "npn", verdict, needed: drive, available: high, margin, limit: vil, ir: 0 } as const;
-    }
-    const low = outputLow(part, rails);
-    const margin = Math.min(vil - low, low + INPUT_CLAMP_V);
-    const tooLow = low + INPUT_CLAMP_V < vil - low;
-    const verdict = voltageVerdict(margin, policy);
-    const needed = tooLow ? -INPUT_CLAMP_V : vil;
-    return { case: "direct", verdict, needed, available: low, margin, limit: vil, ir: 0, tooLow } as const;
+  measure(ctx, part, out) {
+    const l = lowLevel(ctx, part);
+    record(out, voltageVerdict(l.margin, ctx.policy), l.needed, l.level, l.margin, ctx.design.logic.vil_v);
   },
-  describe(m, { design }) {
-    const { vil_v: vil, pull_down_ohm: pull } = design.logic;
-    const { available: level, margin } = m;
-    switch (m.case) {
+  describe({ margin }, ctx, part) {
+    const { vil_v: vil, pull_down_ohm: pull } = ctx.design.logic;
+    const l = lowLevel(ctx, part);
+    switch (l.case) {
       case "clamp-leakage":
         return {
-          reason: `with the output low the clamp diode blocks, and its leakage of ${formatSI(m.ir, "A")} × ${formatSI(pull, "Ω")} holds the input at ${formatSI(level, "V")}; needs at most V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
+          reason: `with the output low the clamp diode blocks, and its leakage of ${formatSI(l.ir, "A")} × ${formatSI(pull, "Ω")} holds the input at ${formatSI(l.level, "V")}; needs at most V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
           steps: [
-            { label: "clamp diode leakage ir", value: m.ir, unit: "A" },
-            { label: "V_low = ir × pull_down_ohm", value: level, unit: "V" },
+            { label: "clamp diode leakage ir", value: l.ir, unit: "A" },
+            { label: "V_low = ir × pull_down_ohm", value: l.level, unit: "V" },
             { label: "margin = vil − V_low", value: margin, unit: "V" },
           ],
         };
@@ -65,22 +37,48 @@ export const logicLow = defineRule({
         return { reason: "an open-drain output cannot drive the NPN's base high", steps: [] };
       case "npn":
         return {
-          reason: `the output high of ${volts(level)} must exceed ${formatVolts(m.needed)} to saturate the NPN, which then pulls the input to ${formatVolts(NPN_VCE_SAT_V)} against V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
+          reason: `the output high of ${volts(l.level)} must exceed ${formatVolts(l.needed)} to saturate the NPN, which then pulls the input to ${formatVolts(NPN_VCE_SAT_V)} against V_IL ${formatVolts(vil)}: ${spareOrShort(margin, "V")}`,
           steps: [
-            { label: "V_OH", value: level, unit: "V" },
+            { label: "V_OH", value: l.level, unit: "V" },
             { label: "margin = min(V_OH − 1.0 V, vil − 0.2 V)", value: margin, unit: "V" },
           ],
         };
       case "direct":
         return {
-          reason: `the output low of ${volts(level)} reaches the input directly; ${m.tooLow ? "needs at least −0.30 V (below that the input's protection conducts)" : `needs at most V_IL ${formatVolts(vil)}`}: ${spareOrShort(margin, "V")}`,
+          reason: `the output low of ${volts(l.level)} reaches the input directly; ${l.tooLow ? "needs at least −0.30 V (below that the input's protection conducts)" : `needs at most V_IL ${formatVolts(vil)}`}: ${spareOrShort(margin, "V")}`,
           steps: [
-            { label: "V_low = V− + out_neg_headroom_v", value: level, unit: "V" },
-            { label: "vil − V_low", value: vil - level, unit: "V" },
-            { label: "V_low + 0.3 V", value: level + INPUT_CLAMP_V, unit: "V" },
+            { label: "V_low = V− + out_neg_headroom_v", value: l.level, unit: "V" },
+            { label: "vil − V_low", value: vil - l.level, unit: "V" },
+            { label: "V_low + 0.3 V", value: l.level + INPUT_CLAMP_V, unit: "V" },
             { label: "margin = the smaller", value: margin, unit: "V" },
           ],
         };
     }
   },
 });
+
+/** The level the logic input sees when the signal is negative, by level shift; `needed` is the bound that binds. */
+function lowLevel({ stage, design, rails }: RoleContext, part: Part) {
+  const { vil_v: vil, level_shift: shift, pull_down_ohm: pull } = design.logic;
+  if (shift === "diode-clamp") {
+    const ir = stage.stage === "sign" && stage.clamp ? stage.clamp.ir_na * 1e-9 : 0;
+    const level = ir * pull;
+    return { case: "clamp-leakage", needed: vil, level, margin: vil - level, ir } as const;
+  }
+  if (shift === "npn-inverter") {
+    const drive = NPN_VBE_ON_V + INPUT_CLAMP_V;
+    const high = outputHigh(part, rails);
+    if (high === null) return { case: "cannot-drive", needed: drive, level: 0, margin: -drive, ir: 0 } as const;
+    return {
+      case: "npn",
+      needed: drive,
+      level: high,
+      margin: Math.min(high - drive, vil - NPN_VCE_SAT_V),
+      ir: 0,
+    } as const;
+  }
+  const low = outputLow(part, rails);
+  const tooLow = low + INPUT_CLAMP_V < vil - low;
+  const margin = Math.min(vil - low, low + INPUT_CLAMP_V);
+  return { case: "direct", needed: tooLow ? -INPUT_CLAMP_V : vil, level: low, margin, ir: 0, tooLow } as const;
+}

@@ -1,4 +1,4 @@
-import { defineRule, driftSpanC } from "../src/core/engine/finding.ts";
+import { defineRule, driftSpanC, record, stageAs } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
@@ -25,36 +25,39 @@ export const offset = defineRule({
   policy: "offset_share",
   kinds: ["op-amp"],
   needs: { "op-amp": ["vos_max_mv", "ib_max_na"] },
-  measure({ stage, design, policy }, part) {
-    const p = part as OpAmp;
-    if (stage.stage !== "op-amp") throw new Error("offset applies to op-amp stages only");
-    const o = stageOffset(p, stage.vos_multiplier, stage.bias_ohm, design.temperature.min_c, design.temperature.max_c);
-    const error = o.output_v / stage.output_per_input;
-    const limit = policy.offset_share * design.accuracy.required_v;
-    const margin = limit - error;
-    return { verdict: shareVerdict(margin, limit, policy), needed: limit, available: error, margin, limit };
-  },
-  describe({ available: error, margin, limit }, { stage, design }, part) {
+  measure({ stage, design, policy }, part, out) {
+    const s = stageAs(stage, "op-amp", "offset");
     const o = stageOffset(
       part as OpAmp,
-      stage.stage === "op-amp" ? stage.vos_multiplier : 1,
-      stage.stage === "op-amp" ? stage.bias_ohm : 0,
+      s.vos_multiplier,
+      s.bias_ohm,
       design.temperature.min_c,
       design.temperature.max_c,
     );
-    const multiplier = stage.stage === "op-amp" ? stage.vos_multiplier : 1;
-    const bias = stage.stage === "op-amp" ? stage.bias_ohm : 0;
-    const k = stage.stage === "op-amp" ? stage.output_per_input : 1;
-    const mult = multiplier === 1 ? "" : `${round3(multiplier)}·`;
+    const error = o.output_v / s.output_per_input;
+    const limit = policy.offset_share * design.accuracy.required_v;
+    const margin = limit - error;
+    record(out, shareVerdict(margin, limit, policy), limit, error, margin, limit);
+  },
+  describe({ available: error, margin, needed: limit }, { stage, design }, part) {
+    const s = stageAs(stage, "op-amp", "offset");
+    const o = stageOffset(
+      part as OpAmp,
+      s.vos_multiplier,
+      s.bias_ohm,
+      design.temperature.min_c,
+      design.temperature.max_c,
+    );
+    const mult = s.vos_multiplier === 1 ? "" : `${round3(s.vos_multiplier)}·`;
     const drift = o.drift > 0 ? ` incl. ${mv(o.drift)} drift` : "";
-    const scale = k === 1 ? "" : `, ÷ ${round3(k)} to the input`;
+    const scale = s.output_per_input === 1 ? "" : `, ÷ ${round3(s.output_per_input)} to the input`;
     return {
-      reason: `adds ${mv(error)} at the input (${mult}${mv(o.vos)} offset${drift} + ${formatSI(o.ib, "A")} × ${formatSI(bias, "Ω")}${scale}); the limit is ${mv(limit)}: ${spareOrShortSmall(margin)}`,
+      reason: `adds ${mv(error)} at the input (${mult}${mv(o.vos)} offset${drift} + ${formatSI(o.ib, "A")} × ${formatSI(s.bias_ohm, "Ω")}${scale}); the limit is ${mv(limit)}: ${spareOrShortSmall(margin)}`,
       steps: [
         { label: "Vos at 25 °C", value: o.vos25, unit: "V" },
         { label: "drift × temperature span", value: o.drift, unit: "V" },
         { label: "Ib", value: o.ib, unit: "A" },
-        { label: "R through which Ib flows", value: bias, unit: "Ω" },
+        { label: "R through which Ib flows", value: s.bias_ohm, unit: "Ω" },
         { label: `output error = ${mult}Vos + Ib·R`, value: o.output_v, unit: "V" },
         { label: "input-referred error = output error / k", value: error, unit: "V" },
         { label: "limit = offset_share × required_v", value: limit, unit: "V" },

@@ -1,4 +1,5 @@
-import { defineRule, railPhrase, rangeMargin, volts } from "../src/core/engine/finding.ts";
+import { defineRule, railPhrase, rangeMargin, volts, record, stageAs } from "../src/core/engine/finding.ts";
+import type { Rails, Range } from "../src/core/engine/types.ts";
 import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
 import { formatVolts } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
@@ -13,35 +14,32 @@ export const outputSwing = defineRule({
   policy: "headroom_margin_v",
   kinds: ["op-amp"],
   needs: { "op-amp": ["out_neg_headroom_v", "out_pos_headroom_v"] },
-  measure({ rails, stage, policy }, part) {
-    const p = part as OpAmp;
-    if (stage.stage !== "op-amp") throw new Error("output-swing applies to op-amp stages only");
-    const reach = { low: rails.negative_v + p.out_neg_headroom_v, high: rails.positive_v - p.out_pos_headroom_v };
-    const m = rangeMargin(stage.output, reach);
-    return {
-      verdict: voltageVerdict(m.margin, policy),
-      needed: m.needed,
-      available: m.reached,
-      margin: m.margin,
-      limit: Math.max(Math.abs(m.needed), policy.headroom_margin_v),
-      reach,
-      side: m.side,
-    };
+  measure({ rails, stage, policy }, part, out) {
+    const s = stageAs(stage, "op-amp", "output-swing");
+    const m = rangeMargin(s.output, outputReach(part as OpAmp, rails));
+    const limit = Math.max(Math.abs(m.needed), policy.headroom_margin_v);
+    record(out, voltageVerdict(m.margin, policy), m.needed, m.reached, m.margin, limit);
   },
-  describe({ needed, available, margin, reach, side }, { rails, stage }, part) {
+  describe({ needed, available, margin }, { rails, stage }, part) {
     const p = part as OpAmp;
+    const s = stageAs(stage, "op-amp", "output-swing");
+    const reach = outputReach(p, rails);
+    const side = rangeMargin(s.output, reach).side;
     const headroom = side === "high" ? p.out_pos_headroom_v : p.out_neg_headroom_v;
     const only = margin < 0 ? "only " : "";
-    const output = stage.stage === "op-amp" ? stage.output : { low: needed, high: needed };
     return {
       reason: `needs the output to reach ${volts(needed)}; ${railPhrase(side, rails)} it reaches ${only}${volts(available)} (${formatVolts(headroom)} headroom): ${spareOrShort(margin, "V")}`,
       steps: [
         { label: "lowest output = V− + out_neg_headroom_v", value: reach.low, unit: "V" },
         { label: "highest output = V+ − out_pos_headroom_v", value: reach.high, unit: "V" },
-        { label: "needed low", value: output.low, unit: "V" },
-        { label: "needed high", value: output.high, unit: "V" },
+        { label: "needed low", value: s.output.low, unit: "V" },
+        { label: "needed high", value: s.output.high, unit: "V" },
         { label: "margin = min(needed low − lowest, highest − needed high)", value: margin, unit: "V" },
       ],
     };
   },
 });
+
+function outputReach(p: OpAmp, rails: Rails): Range {
+  return { low: rails.negative_v + p.out_neg_headroom_v, high: rails.positive_v - p.out_pos_headroom_v };
+}

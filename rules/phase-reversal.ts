@@ -1,4 +1,4 @@
-import { defineRule } from "../src/core/engine/finding.ts";
+import { defineRule, record } from "../src/core/engine/finding.ts";
 import { formatVolts } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 import { commonModeMargin } from "./input-common-mode.ts";
@@ -15,20 +15,14 @@ export const phaseReversal = defineRule({
   policy: null,
   kinds: ["op-amp"],
   needs: { "op-amp": ["phase_reversal"] },
-  measure(ctx, part) {
-    const p = part as OpAmp;
-    const m = commonModeMargin(ctx, part);
-    const reverses = p.phase_reversal === true;
-    const verdict = !reverses ? "pass" : m.margin < 0 ? "fail" : "marginal";
-    return {
-      verdict,
-      needed: 0,
-      available: m.margin,
-      margin: reverses ? m.margin : Math.max(0, m.margin),
-      reverses,
-    } as const;
+  measure(ctx, part, out) {
+    const cm = commonModeMargin(ctx, part).margin;
+    const reverses = (part as OpAmp).phase_reversal === true;
+    const verdict = !reverses ? "pass" : cm < 0 ? "fail" : "marginal";
+    record(out, verdict, 0, cm, reverses ? cm : Math.max(0, cm), undefined);
   },
-  describe({ available: cmMargin, reverses }) {
+  describe({ available: cmMargin }, _ctx, part) {
+    const reverses = (part as OpAmp).phase_reversal === true;
     const reason = !reverses
       ? "does not reverse its output phase when the inputs leave the common-mode range"
       : cmMargin < 0

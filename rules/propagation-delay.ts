@@ -1,4 +1,6 @@
-import { defineRule } from "../src/core/engine/finding.ts";
+import type { Part } from "../src/core/catalogue.ts";
+import type { Rails } from "../src/core/engine/types.ts";
+import { defineRule, record } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
 import { formatQuantity, formatSI } from "../src/core/units.ts";
 import { outputHigh, outputLow } from "./levels.ts";
@@ -13,33 +15,19 @@ export const propagationDelay = defineRule({
   policy: "timing_fraction",
   kinds: ["comparator", "op-amp"],
   needs: { comparator: ["tpd_ns"], "op-amp": ["slew_v_per_us"] },
-  measure({ design, rails, policy }, part) {
+  measure({ design, rails, policy }, part, out) {
     const limit = policy.timing_fraction / design.signal.max_frequency_hz;
-    if (part.kind === "op-amp") {
-      const swing = (outputHigh(part, rails) ?? rails.positive_v) - outputLow(part, rails);
-      const slew = part.slew_v_per_us * 1e6;
-      const delay = swing / slew;
-      const margin = limit - delay;
-      const computed = shareVerdict(margin, limit, policy);
-      const verdict = computed === "pass" ? "marginal" : computed;
-      return { verdict, needed: limit, available: delay, margin, limit, swing, slew };
-    }
-    if (part.kind !== "comparator") throw new Error("propagation-delay applies to comparators and op amps");
-    const delay = part.tpd_ns * 1e-9;
+    const delay = switchingDelay(part, rails).delay;
     const margin = limit - delay;
-    return {
-      verdict: shareVerdict(margin, limit, policy),
-      needed: limit,
-      available: delay,
-      margin,
-      limit,
-      swing: 0,
-      slew: 0,
-    };
+    const computed = shareVerdict(margin, limit, policy);
+    // An op amp's overload recovery is not rated, so it is at best marginal here.
+    const verdict = part.kind === "op-amp" && computed === "pass" ? "marginal" : computed;
+    record(out, verdict, limit, delay, margin, limit);
   },
-  describe({ available: delay, margin, limit, swing, slew }, { design, policy }, part) {
+  describe({ available: delay, margin, needed: limit }, { design, rails, policy }, part) {
     const period = `${policy.timing_fraction * 100} % of the ${formatSI(1 / design.signal.max_frequency_hz, "s")} period`;
     if (part.kind === "op-amp") {
+      const { swing, slew } = switchingDelay(part, rails);
       return {
         reason: `an op amp used as a comparator: about ${formatSI(delay, "s")} to slew ${formatSI(swing, "V")} at ${formatQuantity(slew, "V/s")} against a limit of ${formatSI(limit, "s")} (${period}): ${spareOrShort(margin, "s")}; its overload recovery is not rated, so at best marginal`,
         steps: [
@@ -61,3 +49,12 @@ export const propagationDelay = defineRule({
     };
   },
 });
+
+/** A comparator's rated delay, or the time an op amp takes to slew from one output level to the other. */
+function switchingDelay(part: Part, rails: Rails): { delay: number; swing: number; slew: number } {
+  if (part.kind === "comparator") return { delay: part.tpd_ns * 1e-9, swing: 0, slew: 0 };
+  if (part.kind !== "op-amp") throw new Error("propagation-delay applies to comparators and op amps");
+  const swing = (outputHigh(part, rails) ?? rails.positive_v) - outputLow(part, rails);
+  const slew = part.slew_v_per_us * 1e6;
+  return { delay: swing / slew, swing, slew };
+}

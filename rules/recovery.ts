@@ -1,4 +1,4 @@
-import { defineRule, stageAs } from "../src/core/engine/finding.ts";
+import { defineRule, stageAs, record } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { Diode } from "../src/core/schemas/diode.ts";
@@ -15,12 +15,12 @@ export const recovery = defineRule({
   policy: "timing_fraction",
   kinds: ["diode"],
   needs: { diode: ["trr_ns"] },
-  measure({ stage, policy }, part) {
+  measure({ stage, policy }, part, out) {
     const limit = stageAs(stage, "diode", "recovery").recovery_limit_s;
     if (limit === undefined) throw new Error("recovery needs a diode stage with a time limit");
     const trr = ((part as Diode).trr_ns ?? 0) * 1e-9;
     const margin = limit - trr;
-    return { verdict: shareVerdict(margin, limit, policy), needed: limit, available: trr, margin, limit };
+    record(out, shareVerdict(margin, limit, policy), limit, trr, margin, limit);
   },
   describe({ needed: limit, available: trr, margin }, { stage }) {
     const what = stageAs(stage, "diode", "recovery").recovery_what ?? "timing allowance";

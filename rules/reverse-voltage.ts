@@ -1,4 +1,4 @@
-import { defineRule, stageAs } from "../src/core/engine/finding.ts";
+import { defineRule, stageAs, record } from "../src/core/engine/finding.ts";
 import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
 import { formatVolts } from "../src/core/units.ts";
 import type { Diode } from "../src/core/schemas/diode.ts";
@@ -12,11 +12,11 @@ export const reverseVoltage = defineRule({
   policy: "headroom_margin_v",
   kinds: ["diode"],
   needs: { diode: ["vr_max_v"] },
-  measure({ stage, policy }, part) {
+  measure({ stage, policy }, part, out) {
     const needed = stageAs(stage, "diode", "reverse-voltage").reverse_v;
     const rated = (part as Diode).vr_max_v;
     const margin = rated - needed;
-    return { verdict: voltageVerdict(margin, policy), needed, available: rated, margin, limit: needed };
+    record(out, voltageVerdict(margin, policy), needed, rated, margin, needed);
   },
   describe({ needed, available: rated, margin }, { stage }) {
     const what = stageAs(stage, "diode", "reverse-voltage").reverse_what;

@@ -1,4 +1,5 @@
-import { defineRule } from "../src/core/engine/finding.ts";
+import type { Stage } from "../src/core/engine/types.ts";
+import { defineRule, record } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { Comparator } from "../src/core/schemas/comparator.ts";
@@ -13,16 +14,15 @@ export const signDeadBand = defineRule({
   policy: "sign_share",
   kinds: ["comparator", "op-amp"],
   needs: { comparator: ["vos_max_mv"], "op-amp": ["vos_max_mv"] },
-  measure({ stage, design, policy }, part) {
-    const p = part as Comparator | OpAmp;
-    const k = stage.stage === "sign" ? stage.output_per_input : 1;
-    const vos = p.vos_max_mv * 1e-3;
-    const band = (2 * vos) / k;
+  measure({ stage, design, policy }, part, out) {
+    const band = (2 * (part as Comparator | OpAmp).vos_max_mv * 1e-3) / dividerRatio(stage);
     const limit = policy.sign_share * design.accuracy.required_v;
     const margin = limit - band;
-    return { verdict: shareVerdict(margin, limit, policy), needed: limit, available: band, margin, limit, vos, k };
+    record(out, shareVerdict(margin, limit, policy), limit, band, margin, limit);
   },
-  describe({ available: band, margin, limit, vos, k }) {
+  describe({ available: band, margin, needed: limit }, { stage }, part) {
+    const vos = (part as Comparator | OpAmp).vos_max_mv * 1e-3;
+    const k = dividerRatio(stage);
     return {
       reason: `the sign can be wrong within ${formatSI(band, "V")} of zero at the input (2 × ${formatSI(vos, "V")} ÷ ${Number(k.toPrecision(3))}); the limit is ${formatSI(limit, "V")}: ${spareOrShortSmall(margin)}`,
       steps: [
@@ -35,3 +35,7 @@ export const signDeadBand = defineRule({
     };
   },
 });
+
+function dividerRatio(stage: Stage): number {
+  return stage.stage === "sign" ? stage.output_per_input : 1;
+}

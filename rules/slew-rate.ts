@@ -1,4 +1,4 @@
-import { defineRule } from "../src/core/engine/finding.ts";
+import { defineRule, record, stageAs } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
 import { formatQuantity, formatSI } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
@@ -13,15 +13,15 @@ export const slewRate = defineRule({
   policy: "marginal_fraction",
   kinds: ["op-amp"],
   needs: { "op-amp": ["slew_v_per_us"] },
-  measure({ stage, design, policy }, part) {
-    if (stage.stage !== "op-amp") throw new Error("slew-rate applies to op-amp stages only");
-    const needed = 2 * Math.PI * design.signal.max_frequency_hz * stage.slew_amplitude_v;
+  measure({ stage, design, policy }, part, out) {
+    const s = stageAs(stage, "op-amp", "slew-rate");
+    const needed = 2 * Math.PI * design.signal.max_frequency_hz * s.slew_amplitude_v;
     const slew = (part as OpAmp).slew_v_per_us * 1e6;
     const margin = slew - needed;
-    return { verdict: shareVerdict(margin, needed, policy), needed, available: slew, margin, limit: needed };
+    record(out, shareVerdict(margin, needed, policy), needed, slew, margin, needed);
   },
   describe({ needed, available: slew, margin }, { stage, design }) {
-    const amplitude = stage.stage === "op-amp" ? stage.slew_amplitude_v : 0;
+    const amplitude = stageAs(stage, "op-amp", "slew-rate").slew_amplitude_v;
     return {
       reason: `needs ${formatQuantity(needed, "V/s")} (2π × ${formatSI(design.signal.max_frequency_hz, "Hz")} × ${formatSI(amplitude, "V")}); slews ${formatQuantity(slew, "V/s")}: ${spareOrShort(margin, "V/s")}`,
       steps: [

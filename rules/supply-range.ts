@@ -1,4 +1,4 @@
-import { defineRule } from "../src/core/engine/finding.ts";
+import { defineRule, record } from "../src/core/engine/finding.ts";
 import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
 import { formatVolts } from "../src/core/units.ts";
 import type { Comparator } from "../src/core/schemas/comparator.ts";
@@ -13,31 +13,23 @@ export const supplyRange = defineRule({
   policy: "headroom_margin_v",
   kinds: ["op-amp", "comparator"],
   needs: { "op-amp": ["supply_min_v", "supply_max_v"], comparator: ["supply_min_v", "supply_max_v"] },
-  measure({ rails, policy }, part) {
+  measure({ rails, policy }, part, out) {
     const p = part as OpAmp | Comparator;
     const vs = rails.positive_v - rails.negative_v;
-    const belowMax = p.supply_max_v - vs;
     const aboveMin = vs - p.supply_min_v;
+    const belowMax = p.supply_max_v - vs;
     const margin = Math.min(aboveMin, belowMax);
     const binding = aboveMin <= belowMax ? p.supply_min_v : p.supply_max_v;
-    return {
-      verdict: voltageVerdict(margin, policy),
-      needed: vs,
-      available: binding,
-      margin,
-      limit: vs,
-      aboveMin,
-      belowMax,
-    };
+    record(out, voltageVerdict(margin, policy), vs, binding, margin, vs);
   },
-  describe({ needed: vs, margin, aboveMin, belowMax }, { rails }, part) {
+  describe({ needed: vs, margin }, { rails }, part) {
     const p = part as OpAmp | Comparator;
     return {
       reason: `needs a supply of ${formatVolts(vs)} (V+ ${formatVolts(rails.positive_v)}, V− ${formatVolts(rails.negative_v)}); rated ${formatVolts(p.supply_min_v)} to ${formatVolts(p.supply_max_v)}: ${spareOrShort(margin, "V")}`,
       steps: [
         { label: "Vs = V+ − V−", value: vs, unit: "V" },
-        { label: "Vs − supply_min_v", value: aboveMin, unit: "V" },
-        { label: "supply_max_v − Vs", value: belowMax, unit: "V" },
+        { label: "Vs − supply_min_v", value: vs - p.supply_min_v, unit: "V" },
+        { label: "supply_max_v − Vs", value: p.supply_max_v - vs, unit: "V" },
         { label: "margin = the smaller", value: margin, unit: "V" },
       ],
     };

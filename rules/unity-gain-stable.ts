@@ -1,4 +1,4 @@
-import { defineRule } from "../src/core/engine/finding.ts";
+import { defineRule, record } from "../src/core/engine/finding.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 export const unityGainStable = defineRule({
@@ -10,14 +10,9 @@ export const unityGainStable = defineRule({
   policy: null,
   kinds: ["op-amp"],
   needs: { "op-amp": ["unity_gain_stable"] },
-  measure(_ctx, part) {
+  measure(_ctx, part, out) {
     const stable = (part as OpAmp).unity_gain_stable;
-    return {
-      verdict: stable ? "pass" : "fail",
-      needed: 1,
-      available: stable ? 1 : 0,
-      margin: stable ? 0 : -1,
-    } as const;
+    record(out, stable ? "pass" : "fail", 1, stable ? 1 : 0, stable ? 0 : -1, undefined);
   },
   describe({ available }, { stage }) {
     const gain = stage.stage === "op-amp" ? stage.noise_gain : 1;

@@ -2,7 +2,7 @@
 import type { Part, PartKind } from "../catalogue.ts";
 import type { Policy, Role } from "../schemas/design.ts";
 import { RULES } from "../../../rules/index.ts";
-import { finding } from "./finding.ts";
+import { finding, measured } from "./finding.ts";
 import { VERDICTS, type Finding, type RoleContext, type Rule, type Stage, type Verdict } from "./types.ts";
 import { severity, unratedFinding, worst } from "./verdict.ts";
 
@@ -47,9 +47,7 @@ class LazyPartResult implements PartResult {
   get findings(): Finding[] {
     this.#findings ??= this.#rules.map((rule) => {
       const missing = missingColumns(rule, this.part);
-      return missing.length > 0
-        ? unratedFinding(rule.id, missing, rule.unit)
-        : finding(rule, rule.measure(this.#ctx, this.part), this.#ctx, this.part);
+      return missing.length > 0 ? unratedFinding(rule.id, missing, rule.unit) : finding(rule, this.#ctx, this.part);
     });
     return this.#findings;
   }
@@ -64,6 +62,13 @@ function missingColumns(rule: Rule, part: Part): string[] {
   if (needs === undefined) return [];
   const cells = part as Record<string, unknown>;
   return needs.filter((c) => cells[c] === undefined);
+}
+
+function lacksColumn(rule: Rule, part: Part): boolean {
+  const needs = rule.needs[part.kind];
+  if (needs === undefined) return false;
+  for (const c of needs) if ((part as Record<string, unknown>)[c] === undefined) return true;
+  return false;
 }
 
 // Every column some rule needs. Most catalogues fill them all, so whether a
@@ -92,6 +97,9 @@ export function partsWithGaps(parts: readonly Part[]): Uint8Array {
   return gaps;
 }
 
+// One record every rule writes into in turn: the hot path allocates nothing per part.
+const scratch = measured();
+
 /**
  * The hot path: every rule's numbers for one part, folded straight into a
  * severity (returned, after allow_unrated) and the least relative margin
@@ -107,13 +115,14 @@ export function scorePart(
 ): number {
   let worstSeverity = 0;
   let least = Infinity;
+  const m = scratch;
   for (let r = 0; r < rules.length; r++) {
     const rule = rules[r] as Rule;
-    if (mayLack && missingColumns(rule, part).length > 0) {
+    if (mayLack && lacksColumn(rule, part)) {
       worstSeverity = Math.max(worstSeverity, UNRATED);
       continue;
     }
-    const m = rule.measure(ctx, part);
+    rule.measure(ctx, part, m);
     worstSeverity = Math.max(worstSeverity, severity(m.verdict));
     if (m.limit !== undefined && m.limit > 0) least = Math.min(least, m.margin / m.limit);
   }

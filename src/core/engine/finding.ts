@@ -3,9 +3,30 @@ import type { Part } from "../catalogue.ts";
 import type { Explanation, Finding, Measured, Rails, Range, RoleContext, Rule, Stage, Step, Verdict } from "./types.ts";
 import { formatVolts } from "../units.ts";
 
-/** Identity, so a rule's `describe` is typed by what its own `measure` returns. */
-export function defineRule<M extends Measured>(rule: Rule<M>): Rule<M> {
+/** Identity, so a rule module's object literal is checked and typed as a Rule. */
+export function defineRule(rule: Rule): Rule {
   return rule;
+}
+
+/** A fresh record for `measure` to fill. */
+export function measured(): Measured {
+  return { verdict: "pass", needed: 0, available: 0, margin: 0, limit: undefined };
+}
+
+/** Fills a rule's record; every rule ends its `measure` with it. */
+export function record(
+  out: Measured,
+  verdict: Verdict,
+  needed: number,
+  available: number,
+  margin: number,
+  limit: number | undefined,
+): void {
+  out.verdict = verdict;
+  out.needed = needed;
+  out.available = available;
+  out.margin = margin;
+  out.limit = limit;
 }
 
 /**
@@ -23,7 +44,7 @@ class LazyFinding implements Finding {
   readonly limit?: number;
   #explain: (() => Explanation) | Explanation;
 
-  constructor(rule: Rule, m: Measured, ctx: RoleContext, part: Part) {
+  constructor(rule: Rule, m: Readonly<Measured>, ctx: RoleContext, part: Part) {
     this.rule = rule.id;
     this.verdict = m.verdict;
     this.needed = m.needed;
@@ -53,8 +74,10 @@ class LazyFinding implements Finding {
   }
 }
 
-/** The finding of a rule from what it measured; its text is written on first read. */
-export function finding(rule: Rule, m: Measured, ctx: RoleContext, part: Part): Finding {
+/** The finding of a rule for one part; its text is written on first read. */
+export function finding(rule: Rule, ctx: RoleContext, part: Part): Finding {
+  const m = measured();
+  rule.measure(ctx, part, m);
   return new LazyFinding(rule, m, ctx, part);
 }
 

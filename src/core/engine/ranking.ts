@@ -87,25 +87,30 @@ export class RoleRanking {
 
   /** Id of the best-ranked fit, found in one pass rather than by sorting. */
   bestFit(): string | undefined {
+    const parts = this.#parts;
     let best = -1;
-    for (let i = 0; i < this.#parts.length; i++) {
+    let bestMajor = Infinity;
+    let bestRelative = 0;
+    for (let i = 0; i < parts.length; i++) {
       if ((this.#severity[i] as number) > LAST_FIT) continue;
-      if (best < 0 || this.#compare(i, best) < 0) best = i;
+      const major = this.#major(i);
+      if (major > bestMajor) continue;
+      const relative = this.#relative[i] as number;
+      const better =
+        major < bestMajor ||
+        relative > bestRelative ||
+        (relative === bestRelative && idOrder(parts[i] as Part, parts[best] as Part) < 0);
+      if (better) {
+        best = i;
+        bestMajor = major;
+        bestRelative = relative;
+      }
     }
-    return best < 0 ? undefined : (this.#parts[best] as Part).id;
+    return best < 0 ? undefined : (parts[best] as Part).id;
   }
 
   #major(i: number): number {
     return majorKey(this.#severity[i] as number, this.#parts[i] as Part);
-  }
-
-  #compare(i: number, j: number): number {
-    const parts = this.#parts;
-    return (
-      this.#major(i) - this.#major(j) ||
-      (this.#relative[j] as number) - (this.#relative[i] as number) ||
-      idOrder(parts[i] as Part, parts[j] as Part)
-    );
   }
 
   #ranked(fit: boolean): PartResult[] {

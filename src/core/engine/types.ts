@@ -100,16 +100,16 @@ export type RuleContext<P extends Part = Part> = RoleContext & { part: P };
 
 /**
  * The numbers a rule measures for one part: all the engine needs to judge and
- * rank it. A rule adds what its sentence needs (intermediate values), so the
- * text can be written later, only for the findings someone reads.
+ * rank it. The engine hands every rule the same record to fill, part after
+ * part, so weighing a catalogue allocates nothing per part.
  */
 export type Measured = {
   verdict: Verdict;
   needed: number;
   available: number;
   margin: number;
-  /** Scale for ranking by relative margin; absent for yes/no rules. */
-  limit?: number;
+  /** Scale for ranking by relative margin; undefined for yes/no rules. */
+  limit: number | undefined;
 };
 
 /** The sentence and the arithmetic of one finding. */
@@ -133,9 +133,9 @@ export type RuleInfo = {
   needs: Partial<Record<PartKind, readonly string[]>>;
 };
 
-export type Rule<M extends Measured = Measured> = RuleInfo & {
-  /** Pure arithmetic, no text: runs for every candidate on every evaluation. */
-  measure(ctx: RoleContext, part: Part): M;
-  /** Words and steps for what `measure` gave; runs only when a finding is read. */
-  describe(m: M, ctx: RoleContext, part: Part): Explanation;
+export type Rule = RuleInfo & {
+  /** Pure arithmetic, no text, into `out` (see `record`): runs for every candidate on every evaluation. */
+  measure(ctx: RoleContext, part: Part, out: Measured): void;
+  /** Words and steps for what `measure` wrote; runs only when a finding is read. */
+  describe(m: Readonly<Measured>, ctx: RoleContext, part: Part): Explanation;
 };

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { defineRule, driftSpanC, finding, railPhrase, rangeMargin } from "../../../src/core/engine/finding.ts";
+import { defineRule, driftSpanC, finding, railPhrase, rangeMargin, record } from "../../../src/core/engine/finding.ts";
 import { design as makeDesign } from "../../helpers/designs.ts";
 import { opAmp } from "../../helpers/parts.ts";
 import { bufferStage, SPLIT_5V } from "../../helpers/rules.ts";
@@ -16,7 +16,7 @@ describe("finding", () => {
     policy: null,
     kinds: ["op-amp"],
     needs: {},
-    measure: () => ({ verdict: "pass", needed: 0.025, available: 0.01, margin: 0.015, limit: 0.025 }) as const,
+    measure: (_ctx, _part, out) => record(out, "pass", 0.025, 0.01, 0.015, 0.025),
     describe: (m) => {
       calls++;
       return { reason: `adds ${m.available * 1000} mV`, steps: [{ label: "error", value: m.available, unit: "V" }] };
@@ -33,7 +33,7 @@ describe("finding", () => {
 
   it("writes its reason and steps once, on first read, and keeps them in JSON", () => {
     calls = 0;
-    const f = finding(rule, rule.measure(ctx, part), ctx, part);
+    const f = finding(rule, ctx, part);
     expect(calls).toBe(0);
     expect(f.reason).toBe("adds 10 mV");
     expect(f.steps).toHaveLength(1);
@@ -52,12 +52,12 @@ describe("finding", () => {
   });
 
   it("leaves limit out of JSON when it has none", () => {
-    const yesNo = {
+    const yesNo = defineRule({
       ...rule,
       id: "unity-gain-stable",
-      measure: () => ({ verdict: "pass", needed: 1, available: 1, margin: 0 }) as const,
-    };
-    const f = finding(yesNo, yesNo.measure(), ctx, part);
+      measure: (_ctx, _part, out) => record(out, "pass", 1, 1, 0, undefined),
+    });
+    const f = finding(yesNo, ctx, part);
     expect(Object.keys(JSON.parse(JSON.stringify(f)))).not.toContain("limit");
   });
 });
