@@ -11,6 +11,7 @@ import { measureEngine, type EngineRow } from "./engine.ts";
 import { syntheticCatalogue, syntheticDesigns } from "./generate.ts";
 import { timeBuild, writeDataFolder } from "./site-build.ts";
 import { measureTryPage } from "./try-page.ts";
+import { benchResults, type BenchResults } from "./results.ts";
 import { measureValidation } from "./validate.ts";
 import { tryPageWeight } from "./weight.ts";
 
@@ -49,7 +50,7 @@ log(`validate ${validation.rows} rows: ${Math.round(validation.rows_per_s).toLoc
 
 // 3. Site builds, 4. the try page in Chromium, 5. weight.
 const work = mkdtempSync(join(tmpdir(), "railsieve-bench-"));
-let results;
+let results: BenchResults;
 try {
   const largeDir = join(work, "data-large");
   const largeDesigns = syntheticDesigns(demoDesigns, LARGE_DESIGNS, 1);
@@ -67,7 +68,9 @@ try {
   if (!chromium) throw new Error(`bench: no Chromium for the try-page figures; install it with: ${INSTALL_HINT}`);
   const browser = await launchChromium(chromium);
   const tryDemo = await measureTryPage({ siteDir: demoSite, edits: EDITS, browser });
-  log(`try page, demo: median ${tryDemo.median_ms.toFixed(1)} ms, p95 ${tryDemo.p95_ms.toFixed(1)} ms (${EDITS} edits)`);
+  log(
+    `try page, demo: median ${tryDemo.median_ms.toFixed(1)} ms, p95 ${tryDemo.p95_ms.toFixed(1)} ms (${EDITS} edits)`,
+  );
   const tryLarge = await measureTryPage({ siteDir: largeSite, edits: EDITS, browser });
   log(
     `try page, ${LARGE_PARTS} parts: median ${tryLarge.median_ms.toFixed(1)} ms, p95 ${tryLarge.p95_ms.toFixed(1)} ms (${EDITS} edits)`,
@@ -75,9 +78,11 @@ try {
   await browser.close();
 
   const weight = tryPageWeight(demoSite);
-  log(`weight: try-page JavaScript ${weight.try_js_gzip_bytes} B gzipped, catalogue JSON ${weight.catalogue_json_gzip_bytes} B`);
+  log(
+    `weight: try-page JavaScript ${weight.try_js_gzip_bytes} B gzipped, catalogue JSON ${weight.catalogue_json_gzip_bytes} B`,
+  );
 
-  results = {
+  results = benchResults.parse({
     engine: engine.map(({ parts, ms_per_design, baseline_ms_per_design, ratio }) => ({
       parts,
       ms_per_design: round(ms_per_design),
@@ -88,7 +93,7 @@ try {
     build: { demo_s: round(demoBuild.seconds), large_s: round(largeBuild.seconds), large_pages: largeBuild.pages },
     try_page: { demo_p95_ms: round(tryDemo.p95_ms), large_p95_ms: round(tryLarge.p95_ms) },
     weight,
-  };
+  });
 } finally {
   rmSync(work, { recursive: true, force: true });
 }
@@ -127,7 +132,9 @@ log(quick ? "targets (quick run: small sizes, not judged)" : "targets");
 for (const [what, met, figure] of targets) {
   log(`  ${quick ? "·" : met ? "met " : "MISS"}  ${what.padEnd(56)} ${figure}`);
 }
-log(`bench finished in ${((performance.now() - started) / 1000).toFixed(0)} s; one run on one machine (${process.version})`);
+log(
+  `bench finished in ${((performance.now() - started) / 1000).toFixed(0)} s; one run on one machine (${process.version})`,
+);
 
 writeFileSync(resolve(root, "bench-results.json"), `${JSON.stringify(results, null, 2)}\n`);
 log("wrote bench-results.json and bench/out/bench.txt");

@@ -1,0 +1,25 @@
+// The shape of bench-results.json (issue 9), exactly: other tools read it, so
+// the harness checks what it writes against this before writing it.
+import { z } from "zod";
+
+const positive = z.number().finite().positive();
+
+export const benchResults = z.strictObject({
+  engine: z.array(
+    z.strictObject({
+      parts: z.number().int().positive(),
+      ms_per_design: positive,
+      baseline_ms_per_design: positive,
+      ratio: positive,
+    }),
+  ),
+  validate_rows_per_s: positive,
+  build: z.strictObject({ demo_s: positive, large_s: positive, large_pages: z.number().int().positive() }),
+  try_page: z.strictObject({ demo_p95_ms: positive, large_p95_ms: positive }),
+  weight: z.strictObject({
+    try_js_gzip_bytes: z.number().int().positive(),
+    catalogue_json_gzip_bytes: z.number().int().positive(),
+  }),
+});
+
+export type BenchResults = z.output<typeof benchResults>;
