@@ -59,3 +59,11 @@ export function renderRejectionReasons(findings: readonly Finding[]): string {
   if (open.length === 1 && open[0]) return line(open[0]);
   return `<ul class="reasons">${open.map((f) => `<li>${line(f)}</li>`).join("")}</ul>`;
 }
+
+/** "It passes supply-range, offset and slew-rate.": the rules a rejection is not about, by name. */
+export function renderPassedRules(findings: readonly Finding[]): string {
+  const names = findings.filter((f) => f.verdict === "pass").map((f) => escapeHtml(f.rule));
+  if (names.length === 0) return "";
+  const list = names.length === 1 ? names[0] : `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]}`;
+  return `<p class="passes">It passes ${list}.</p>`;
+}

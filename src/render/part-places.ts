@@ -1,14 +1,18 @@
-// A part page's full entries: for each design, each role that weighed the part,
-// with every finding, the arithmetic and, for an amplifier, its rail diagram.
-// This is where a rejection's whole case lives; the design page lists the part
-// in a row that links here.
+// A part page's full entries: for each design, each role that weighed the part.
+// A fit shows every finding, all the arithmetic and, for an amplifier, the rail
+// diagram. A rejection shows the rules that reject it (and any marginal one) with
+// their arithmetic, names the rules it passes, and draws the diagram when its
+// input or output range is among what falls short. This is where a rejection's
+// whole case lives; the design page lists the part in a row that links here. A
+// part page holds one entry per role per design (30-odd for an op amp), so a
+// rejection is written as what decides it rather than every passing sentence.
 import type { Part } from "../core/catalogue.ts";
 import { placeAnchor, resultAnchor, type SiteLinks } from "../site/links.ts";
 import type { PartPlace } from "../site/part-uses.ts";
 import { ROLE_NAMES } from "../site/roles.ts";
 import { escapeHtml } from "./escape.ts";
-import { renderArithmetic, renderFindingsTable } from "./findings.ts";
-import { renderRailDiagram } from "./rail-diagram.ts";
+import { renderArithmetic, renderFindingsTable, renderPassedRules } from "./findings.ts";
+import { DRAWN_RULES, renderRailDiagram } from "./rail-diagram.ts";
 import { partMarks } from "./role-lists.ts";
 import { renderVerdict } from "./verdict.ts";
 
@@ -29,18 +33,23 @@ function renderPlace(place: PartPlace, { part, design, links }: DesignPlacesInpu
   // Under topology "all" a design weighs the part in both front ends; say which one this is.
   const topology = design.topology === "all" ? ` <span class="mark">${escapeHtml(place.topology)}</span>` : "";
   const onPage = links.designUrl(design.id, resultAnchor(role.role, part.id));
-  const diagram =
-    part.kind !== "diode" && role.stage.stage !== "diode"
-      ? `<div class="diagram">${renderRailDiagram({ part, stage: role.stage, rails: place.rails, findings: result.findings, id: `rd-${anchor}`, legend: false })}</div>`
-      : "";
-  const label = `Findings for ${part.name} as ${roleName.toLowerCase()} in ${design.title}`;
+  const fit = rank !== undefined;
+  const { findings } = result;
+  const amplifier = part.kind !== "diode" && role.stage.stage !== "diode";
+  const drawn = amplifier && (fit || findings.some((f) => f.verdict !== "pass" && DRAWN_RULES.includes(f.rule)));
+  const diagram = drawn
+    ? `<div class="diagram">${renderRailDiagram({ part, stage: role.stage, rails: place.rails, findings, id: `rd-${anchor}`, legend: false })}</div>`
+    : "";
+  const shown = fit ? findings : findings.filter((f) => f.verdict !== "pass");
+  const label = `${fit ? "Findings" : "Rules not passed"} for ${part.name} as ${roleName.toLowerCase()} in ${design.title}`;
   return (
     `<li class="result result-${result.verdict}" id="${escapeHtml(anchor)}">` +
     `<div class="result-head"><h4>${escapeHtml(roleName)}</h4>${renderVerdict(result.verdict)} <span>${escapeHtml(standing)}</span>${partMarks(result, role)}${topology}` +
     ` <a href="${escapeHtml(onPage)}">on the design page</a></div>` +
     diagram +
-    renderFindingsTable(result.findings, label, links.rulesUrl) +
-    renderArithmetic(result.findings, { failing: rank === undefined }) +
+    renderFindingsTable(shown, label, links.rulesUrl) +
+    (fit ? "" : renderPassedRules(findings)) +
+    renderArithmetic(findings, { failing: !fit }) +
     `</li>`
   );
 }

@@ -73,6 +73,9 @@ const LEGEND = 24;
 const BAR = 12;
 const ROW_RULE: Record<DiagramRow["name"], string> = { input: "input-common-mode", output: "output-swing" };
 
+/** The rules whose ranges the diagram draws: a page may draw it only where one of them matters. */
+export const DRAWN_RULES: readonly string[] = Object.values(ROW_RULE);
+
 function round(n: number): number {
   return Math.round(n * 10) / 10;
 }

@@ -86,7 +86,7 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
     expect(await cell.textContent()).toBe("rejected");
   });
 
-  it("follows the part's verdict to its whole case: every finding, the failing arithmetic and the rail diagram", async () => {
+  it("follows the part's verdict to its case: the rules that reject it, their arithmetic, the rest by name", async () => {
     const evaluation = evaluateDesign(data.designs.find((d) => d.design?.id === DESIGN)!.design!, data.catalogue);
     if (!evaluation.ok) throw new Error(`${DESIGN} does not evaluate`);
     const rejection = evaluation.result.roles
@@ -96,10 +96,14 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
     await page.waitForURL(t.url(`parts/${firstHit}/#in-${DESIGN}--buffer`));
     const entry = page.locator(`#in-${DESIGN}--buffer`);
     expect(await entry.isVisible()).toBe(true);
-    for (const f of rejection.findings) {
+    const open = rejection.findings.filter((f) => f.verdict !== "pass");
+    expect(await entry.locator("table.findings > tbody > tr").count()).toBe(open.length);
+    for (const f of open) {
       const row = entry.locator("table.findings tr", { has: page.locator(`th a:text-is("${f.rule}")`) });
       expect(await row.locator("td").last().textContent()).toBe(f.reason);
     }
+    const passes = await entry.locator("p.passes").textContent();
+    for (const f of rejection.findings.filter((x) => x.verdict === "pass")) expect(passes).toContain(f.rule);
     const failing = rejection.findings.find((f) => f.rule === "supply-range")!;
     expect(failing.verdict).toBe("fail");
     expect(failing.reason).toMatch(/\d\.\d+ V/);
@@ -107,9 +111,27 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
     await entry.locator("details.steps > summary").click();
     const steps = entry.locator('details.steps table[aria-label="supply-range: arithmetic"] th');
     expect(await steps.allTextContents()).toEqual(failing.steps.map((s) => s.label));
-    const diagram = entry.locator("svg.rail-diagram");
-    expect(await diagram.locator("title").textContent()).toBe(`Rail diagram: ${rejection.part.name} as the buffer`);
-    expect((await diagram.locator("text").allTextContents()).join(" ")).toMatch(/V− −3\.\d+ V/);
+    // Its input and output ranges are not what rejects it, so no diagram here; where it fits, one is drawn.
+    const onRange = open.some((f) => f.rule === "input-common-mode" || f.rule === "output-swing");
+    expect(await entry.locator("svg.rail-diagram").count()).toBe(onRange ? 1 : 0);
+    const fits = data.designs.flatMap((d) => {
+      const e = evaluateDesign(d.design!, data.catalogue);
+      if (!e.ok) return [];
+      const results = [
+        e.result,
+        ...(e.result.comparison?.results.filter((r) => r.topology !== e.result.topology) ?? []),
+      ];
+      return results.flatMap((r) =>
+        r.roles.filter((x) => x.fits.some((p) => p.part.id === firstHit)).map((x) => [d.design!.id, x] as const),
+      );
+    });
+    expect(fits.length).toBeGreaterThan(0);
+    const [fitDesign, fitRole] = fits[0]!;
+    const diagram = page.locator(`#in-${fitDesign}--${fitRole.role} svg.rail-diagram`);
+    expect(await diagram.locator("title").textContent()).toBe(
+      `Rail diagram: ${rejection.part.name} as ${fitRole.stage.label}`,
+    );
+    expect((await diagram.locator("text").allTextContents()).join(" ")).toMatch(/V\+ \+\d\.\d\d V/);
     await screenshot(entry, "part-page-entry");
 
     await entry.getByRole("link", { name: "on the design page" }).click();

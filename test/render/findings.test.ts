@@ -2,7 +2,12 @@
 // reject a part, with every piece of text escaped (catalogue text is free text).
 import { describe, expect, it } from "vitest";
 import type { Finding, Verdict } from "../../src/core/engine/types.ts";
-import { renderArithmetic, renderFindingsTable, renderRejectionReasons } from "../../src/render/findings.ts";
+import {
+  renderArithmetic,
+  renderFindingsTable,
+  renderPassedRules,
+  renderRejectionReasons,
+} from "../../src/render/findings.ts";
 
 const finding = (rule: string, verdict: Verdict, reason: string, steps: Finding["steps"] = []): Finding => ({
   rule,
@@ -68,5 +73,21 @@ describe("renderRejectionReasons", () => {
     ).toBe(
       `<ul class="reasons"><li>phase-reversal: needs &#39;phase_reversal&#39;, which is empty</li><li>offset: adds &lt;1 mV&gt; too much</li></ul>`,
     );
+  });
+});
+
+describe("renderPassedRules", () => {
+  it("names the rules passed, in order, and says nothing when none is", () => {
+    expect(
+      renderPassedRules([
+        finding("supply-range", "pass", ""),
+        finding("offset", "fail", ""),
+        finding("slew-rate", "pass", ""),
+        finding("bandwidth", "marginal", ""),
+        finding("zero-crossing", "pass", ""),
+      ]),
+    ).toBe('<p class="passes">It passes supply-range, slew-rate and zero-crossing.</p>');
+    expect(renderPassedRules([finding("offset", "pass", "")])).toBe('<p class="passes">It passes offset.</p>');
+    expect(renderPassedRules([finding("offset", "fail", "")])).toBe("");
   });
 });
