@@ -2,7 +2,7 @@
 // validation and the Astro build) on the demo data and on a generated
 // 2,000-part catalogue with 10 designs. Target: 60 s for the large one on a
 // 2-core machine, with no page grown past what a browser opens comfortably.
-import { mkdirSync, mkdtempSync, readdirSync, rmSync, statSync, writeFileSync } from "node:fs";
+import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join, relative, resolve } from "node:path";
 import { isDeepStrictEqual } from "node:util";
@@ -61,6 +61,20 @@ export function largeDataSet(demoDir: string): { catalogue: Catalogue; designs: 
 
 const TARGET_S = 60;
 
+/**
+ * CPU seconds used by this process's finished children (Linux: /proc/self/stat
+ * cutime + cstime, in USER_HZ = 100 ticks a second); undefined elsewhere. On a
+ * shared machine this moves less with other load than the wall time does.
+ */
+function childCpuSeconds(): number | undefined {
+  try {
+    const fields = readFileSync("/proc/self/stat", "utf8").split(") ")[1]?.split(" ");
+    return (Number(fields?.[13]) + Number(fields?.[14])) / 100;
+  } catch {
+    return undefined;
+  }
+}
+
 async function main(): Promise<void> {
   const work = mkdtempSync(join(tmpdir(), "railsieve-site-bench-"));
   try {
@@ -74,12 +88,16 @@ async function main(): Promise<void> {
       [`${catalogue.parts.length} parts, ${designs.length} designs`, largeDir, TARGET_S],
     ] as const) {
       const outDir = join(work, `site-${lines.length}`);
+      const cpuBefore = childCpuSeconds();
       const { seconds, pages } = await timeBuild(dataDir, outDir);
+      const cpuAfter = childCpuSeconds();
+      const cpu =
+        cpuBefore === undefined || cpuAfter === undefined ? "" : ` (${(cpuAfter - cpuBefore).toFixed(1)} s CPU)`;
       const sizes = htmlPages(outDir).sort((a, b) => b.bytes - a.bytes);
       const total = sizes.reduce((sum, p) => sum + p.bytes, 0);
       const largest = sizes[0];
       const line =
-        `${label.padEnd(26)} ${seconds.toFixed(1).padStart(6)} s  ${String(pages).padStart(5)} pages  ` +
+        `${label.padEnd(26)} ${seconds.toFixed(1).padStart(6)} s${cpu}  ${String(pages).padStart(5)} pages  ` +
         `${(total / 1e6).toFixed(1)} MB in all, largest ${largest ? `${(largest.bytes / 1e3).toFixed(0)} kB (${largest.path})` : "none"}` +
         (target === undefined ? "" : `  target ${target} s (${(seconds / target).toFixed(2)} of target)`);
       console.log(line);
