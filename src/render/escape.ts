@@ -9,7 +9,10 @@ const ENTITIES: Readonly<Record<string, string>> = {
   "'": "&#39;",
 };
 
+const SPECIAL = /[&<>"']/;
+
 /** Escapes text for an element body or a quoted attribute value. */
 export function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => ENTITIES[c] ?? c);
+  // Most text (reasons, numbers, ids) has nothing to escape; a test is cheaper than a replace that finds nothing.
+  return SPECIAL.test(text) ? text.replace(/[&<>"']/g, (c) => ENTITIES[c] ?? c) : text;
 }

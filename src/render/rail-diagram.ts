@@ -17,6 +17,11 @@ export type RailDiagramInput = {
   findings?: readonly Finding[];
   /** Prefix for the ids of <title> and <desc>; must be unique on the page. */
   id?: string;
+  /**
+   * Draw the key under the plot (default). A page that stacks many diagrams
+   * shows RAIL_LEGEND once instead and leaves the space out of each.
+   */
+  legend?: boolean;
 };
 
 export type Span = { low: number; high: number; x1: number; x2: number };
@@ -67,6 +72,9 @@ const ROW = 62;
 const LEGEND = 24;
 const BAR = 12;
 const ROW_RULE: Record<DiagramRow["name"], string> = { input: "input-common-mode", output: "output-swing" };
+
+/** The rules whose ranges the diagram draws: a page may draw it only where one of them matters. */
+export const DRAWN_RULES: readonly string[] = Object.values(ROW_RULE);
 
 function round(n: number): number {
   return Math.round(n * 10) / 10;
@@ -216,25 +224,47 @@ function bars(row: DiagramRow, plot: DiagramLayout["plot"]): string {
     const short = m.volts < 0 ? " rd-short" : "";
     const a = Math.min(m.x1, m.x2);
     const b = Math.max(m.x1, m.x2);
+    // One path for the dimension line and its two end ticks: a page of these diagrams is mostly margins.
     out.push(
-      `<g class="rd-margin${short}"><line x1="${a}" y1="${m.y}" x2="${b}" y2="${m.y}" stroke="currentColor" />` +
-        `<line x1="${a}" y1="${m.y - 4}" x2="${a}" y2="${m.y + 4}" stroke="currentColor" />` +
-        `<line x1="${b}" y1="${m.y - 4}" x2="${b}" y2="${m.y + 4}" stroke="currentColor" />` +
+      `<g class="rd-margin${short}"><path d="M${a} ${m.y}H${b}M${a} ${m.y - 4}V${m.y + 4}M${b} ${m.y - 4}V${m.y + 4}" fill="none" stroke="currentColor" />` +
         `<text x="${m.labelX}" y="${m.y + 15}" text-anchor="middle" fill="currentColor">${escapeHtml(m.label)}</text></g>`,
     );
   }
   return out.join("");
 }
 
+/** The key: filled bar, dashed box and dimension line, drawn from `x` along the baseline `y`. */
+function legendMarks(x: number, y: number): string {
+  return [
+    `<g class="rd-legend">`,
+    `<rect class="rd-reach" x="${x}" y="${y - 8}" width="22" height="9" fill="#9ab" />`,
+    `<text x="${x + 28}" y="${y}" fill="currentColor">what the part reaches</text>`,
+    `<rect class="rd-need" x="${x + 180}" y="${y - 9}" width="22" height="11" fill="none" stroke="currentColor" stroke-width="2" stroke-dasharray="5 3" />`,
+    `<text x="${x + 208}" y="${y}" fill="currentColor">what the stage needs</text>`,
+    `<text x="${x + 364}" y="${y}" fill="currentColor">|—| margin</text>`,
+    `</g>`,
+  ].join("");
+}
+
+/** The key on its own (id prefix `rd-key`), for a page that draws its diagrams with `legend: false`. */
+export const RAIL_LEGEND =
+  `<svg class="rail-diagram rail-legend" viewBox="0 0 ${WIDTH} ${LEGEND}" width="${WIDTH}" height="${LEGEND}" role="img" aria-labelledby="rd-key-t">` +
+  `<title id="rd-key-t">Key to the rail diagrams: a filled bar is what the part reaches, a dashed box what the stage needs, and |—| the margin between them</title>` +
+  legendMarks(GUTTER, LEGEND - 7) +
+  `</svg>`;
+
 /** The diagram as an SVG string, every piece of text escaped. */
 export function renderRailDiagram(input: RailDiagramInput): string {
   const layout = layoutRailDiagram(input);
-  const { width, height, plot, rails, rows } = layout;
+  const { width, plot, rails, rows } = layout;
+  const legend = input.legend ?? true;
   const id = escapeHtml(input.id ?? `rd-${input.part.id}`);
   const name = escapeHtml(input.part.name);
   const stageName = escapeHtml(input.stage.label);
   const top = TOP - 8;
-  const bottom = height - LEGEND;
+  const bottom = layout.height - LEGEND;
+  // Without the key the picture ends just under the rails' lower ends.
+  const height = legend ? layout.height : bottom + 4;
   const desc = [
     `Rails: V− ${formatVolts(rails.negative.volts, { signed: true })}, V+ ${formatVolts(rails.positive.volts, { signed: true })}.`,
     ...rows.map(describeRow),
@@ -263,18 +293,7 @@ export function renderRailDiagram(input: RailDiagramInput): string {
   }
   svg.push(`</g>`);
   for (const row of rows) svg.push(`<g class="rd-row rd-row-${row.name}">${bars(row, plot)}</g>`);
-  // Legend.
-  const ly = height - 7;
-  const lx = plot.left;
-  svg.push(
-    `<g class="rd-legend">`,
-    `<rect class="rd-reach" x="${lx}" y="${ly - 8}" width="22" height="9" fill="#9ab" />`,
-    `<text x="${lx + 28}" y="${ly}" fill="currentColor">what the part reaches</text>`,
-    `<rect class="rd-need" x="${lx + 180}" y="${ly - 9}" width="22" height="11" fill="none" stroke="currentColor" stroke-width="2" stroke-dasharray="5 3" />`,
-    `<text x="${lx + 208}" y="${ly}" fill="currentColor">what the stage needs</text>`,
-    `<text x="${lx + 364}" y="${ly}" fill="currentColor">|—| margin</text>`,
-    `</g>`,
-    `</svg>`,
-  );
+  if (legend) svg.push(legendMarks(plot.left, height - 7));
+  svg.push(`</svg>`);
   return svg.join("");
 }

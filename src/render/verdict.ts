@@ -12,8 +12,20 @@ export const VERDICT_LOOK: Readonly<Record<Verdict, VerdictLook>> = {
   fail: { word: "fail", glyph: "✕", meaning: "does not meet the rule" },
 };
 
-/** `<span class="verdict verdict-fail"><span aria-hidden="true">✕</span> fail</span>` */
-export function renderVerdict(verdict: Verdict): string {
+function markup(verdict: Verdict): string {
   const look = VERDICT_LOOK[verdict];
   return `<span class="verdict verdict-${verdict}"><span class="glyph" aria-hidden="true">${look.glyph}</span> ${escapeHtml(look.word)}</span>`;
+}
+
+// Four strings, written once: a large site shows a verdict in every row of every table.
+const MARKUP: Readonly<Record<Verdict, string>> = {
+  pass: markup("pass"),
+  marginal: markup("marginal"),
+  unrated: markup("unrated"),
+  fail: markup("fail"),
+};
+
+/** `<span class="verdict verdict-fail"><span aria-hidden="true">✕</span> fail</span>` */
+export function renderVerdict(verdict: Verdict): string {
+  return MARKUP[verdict];
 }

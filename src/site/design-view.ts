@@ -1,6 +1,7 @@
 // What a design page lists as the design's inputs and its derived values,
 // as label/value rows, so the page stays markup and the numbers stay testable.
-import type { Derived, DesignResult } from "../core/engine/result.ts";
+import type { PartResult } from "../core/engine/evaluate-part.ts";
+import type { Derived, DesignResult, RoleResult } from "../core/engine/result.ts";
 import { POLICY_DEFAULTS, type Design, type Policy, type Role } from "../core/schemas/design.ts";
 import { formatSI, formatVolts } from "../core/units.ts";
 import { trimZeros } from "../render/trim-zeros.ts";
@@ -18,6 +19,40 @@ const percent = (fraction: number) => `${Number((fraction * 100).toPrecision(3))
 const ratio = (k: number) => String(Number(k.toPrecision(4)));
 
 export const HIGH_VOLTAGE_V = 30;
+
+/**
+ * Fits a design page shows in full (rail diagram, findings, arithmetic) per
+ * role; the rest are one row each, linking to the part page that has them in
+ * full. A shortlist is read from the top; 10 covers the demo roles almost whole.
+ */
+export const FITS_IN_FULL = 10;
+
+/** A part a design page draws in full, with its place among the fits (none for a rejection). */
+export type ShownInFull = { result: PartResult; rank?: number };
+
+export type RoleView = {
+  /** The best fits, in rank order. */
+  topFits: ShownInFull[];
+  /** The part the design uses, when it is not among them: a BOM part ranked lower, or one that fails. */
+  used?: ShownInFull;
+  /** Ids drawn in full; their rows in the lists carry no anchor, so each id appears once on the page. */
+  inFull: ReadonlySet<string>;
+};
+
+/** Which parts of a role a design page draws in full. */
+export function roleView(role: RoleResult, count = FITS_IN_FULL): RoleView {
+  const topFits = role.fits.slice(0, count).map((result, i) => ({ result, rank: i + 1 }));
+  const index = role.chosen === undefined ? -1 : role.fits.findIndex((p) => p.part.id === role.chosen);
+  const rejected = index < 0 ? role.rejected.find((p) => p.part.id === role.chosen) : undefined;
+  const lower = index >= count ? role.fits[index] : undefined;
+  const used: ShownInFull | undefined = lower
+    ? { result: lower, rank: index + 1 }
+    : rejected
+      ? { result: rejected }
+      : undefined;
+  const inFull = new Set([...topFits, ...(used ? [used] : [])].map((p) => p.result.part.id));
+  return { topFits, ...(used ? { used } : {}), inFull };
+}
 
 /** SPEC §9: a visible caution above extra-low-voltage levels. */
 export function needsCaution(design: Design): boolean {

@@ -34,6 +34,8 @@ export function linksFor(base: string): SiteLinks {
 /** Id of one part's entry in a role on a design page; ids and roles are [a-z0-9-]. */
 export const resultAnchor = (role: Role, partId: string) => `${role}--${partId}`;
 export const roleAnchor = (role: Role) => `role-${role}`;
+/** Id of one design × role entry on a part page; roles hold no "--", so the pair reads back unambiguously. */
+export const placeAnchor = (designId: string, role: Role) => `in-${designId}--${role}`;
 
 // The default links read the base when called. In the browser it is the one
 // Vite compiles in. On the server Astro lets a BASE_URL variable left in the

@@ -7,4 +7,15 @@ import { setSiteBase } from "./links.ts";
 
 setSiteBase(base);
 
-export { catalogueUrl, designUrl, homeUrl, partUrl, resultAnchor, roleAnchor, rulesUrl, tryUrl, url } from "./links.ts";
+export {
+  catalogueUrl,
+  designUrl,
+  homeUrl,
+  partUrl,
+  placeAnchor,
+  resultAnchor,
+  roleAnchor,
+  rulesUrl,
+  tryUrl,
+  url,
+} from "./links.ts";

@@ -11,7 +11,8 @@ import { tryPageReady } from "./harness/steps.ts";
 
 type PageType = { type: string; path: string; scope?: AxeScope; ready?: (page: Page) => Promise<void> };
 
-// One page of each type. The >30 V design adds only its caution to the design page type.
+// One page of each type. The >30 V design adds only its caution to the design page type, the long
+// shortlist only its table of further fits.
 function pageTypes(): PageType[] {
   const { catalogue } = loadDataSet(site("demo").dataDir);
   const first = (kind: string) => catalogue.parts.find((p) => p.kind === kind)?.id;
@@ -23,6 +24,12 @@ function pageTypes(): PageType[] {
     { type: "diode part", path: `parts/${first("diode")}/` },
     { type: "design", path: "designs/bridge-10v-5v-adc/" },
     { type: "design caution", path: "designs/bus-48v/", scope: { include: ".caution" } },
+    // A buffer with more fits than the page draws in full lists the rest one row each.
+    {
+      type: "design fits beyond the first",
+      path: "designs/vibration-2v-split-2v5/",
+      scope: { include: ".fits-summary" },
+    },
     { type: "rules", path: "rules/" },
     { type: "try", path: "try/", ready: tryPageReady },
     { type: "not found", path: "no-such-page/" },

@@ -11,6 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { parseDesignValue } from "../../src/core/designs.ts";
 import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
 import { loadDataSet, type DataSet } from "../../src/node/load-data.ts";
+import { FITS_IN_FULL } from "../../src/site/design-view.ts";
 import { buildSearchIndex } from "../../src/site/search-index.ts";
 import { projectNode, ROOT } from "./harness/build-site.ts";
 import { browserReady, openBrowser, openTracked, site, troubles, type Tracked } from "./harness/session.ts";
@@ -81,32 +82,80 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
     expect(await value("gbw_mhz")).toMatch(/^3(\.0+)? MHz$/);
     expect(await value("ib_max_na")).toMatch(/^10(\.0+)? pA$/);
     expect(await value("slew_v_per_us")).toMatch(/^2(\.0+)? V\/µs$/);
-    const cell = page.locator(`table.matrix a[href$="designs/${DESIGN}/#buffer--${firstHit}"]`);
+    const cell = page.locator(`table.matrix a[href="#in-${DESIGN}--buffer"]`);
     expect(await cell.textContent()).toBe("rejected");
-    await cell.click();
+  });
+
+  it("follows the part's verdict to its case: the rules that reject it, their arithmetic, the rest by name", async () => {
+    const evaluation = evaluateDesign(data.designs.find((d) => d.design?.id === DESIGN)!.design!, data.catalogue);
+    if (!evaluation.ok) throw new Error(`${DESIGN} does not evaluate`);
+    const rejection = evaluation.result.roles
+      .find((r) => r.role === "buffer")!
+      .rejected.find((p) => p.part.id === firstHit)!;
+    await page.locator(`table.matrix a[href="#in-${DESIGN}--buffer"]`).click();
+    await page.waitForURL(t.url(`parts/${firstHit}/#in-${DESIGN}--buffer`));
+    const entry = page.locator(`#in-${DESIGN}--buffer`);
+    expect(await entry.isVisible()).toBe(true);
+    const open = rejection.findings.filter((f) => f.verdict !== "pass");
+    expect(await entry.locator("table.findings > tbody > tr").count()).toBe(open.length);
+    for (const f of open) {
+      const row = entry.locator("table.findings tr", { has: page.locator(`th a:text-is("${f.rule}")`) });
+      expect(await row.locator("td").last().textContent()).toBe(f.reason);
+    }
+    const passes = await entry.locator("p.passes").textContent();
+    for (const f of rejection.findings.filter((x) => x.verdict === "pass")) expect(passes).toContain(f.rule);
+    const failing = rejection.findings.find((f) => f.rule === "supply-range")!;
+    expect(failing.verdict).toBe("fail");
+    expect(failing.reason).toMatch(/\d\.\d+ V/);
+    // The arithmetic opens on request and shows the failing rule's steps.
+    await entry.locator("details.steps > summary").click();
+    const steps = entry.locator('details.steps table[aria-label="supply-range: arithmetic"] th');
+    expect(await steps.allTextContents()).toEqual(failing.steps.map((s) => s.label));
+    // Its input and output ranges are not what rejects it, so no diagram here; where it fits, one is drawn.
+    const onRange = open.some((f) => f.rule === "input-common-mode" || f.rule === "output-swing");
+    expect(await entry.locator("svg.rail-diagram").count()).toBe(onRange ? 1 : 0);
+    const fits = data.designs.flatMap((d) => {
+      const e = evaluateDesign(d.design!, data.catalogue);
+      if (!e.ok) return [];
+      const results = [
+        e.result,
+        ...(e.result.comparison?.results.filter((r) => r.topology !== e.result.topology) ?? []),
+      ];
+      return results.flatMap((r) =>
+        r.roles.filter((x) => x.fits.some((p) => p.part.id === firstHit)).map((x) => [d.design!.id, x] as const),
+      );
+    });
+    expect(fits.length).toBeGreaterThan(0);
+    const [fitDesign, fitRole] = fits[0]!;
+    const diagram = page.locator(`#in-${fitDesign}--${fitRole.role} svg.rail-diagram`);
+    expect(await diagram.locator("title").textContent()).toBe(
+      `Rail diagram: ${rejection.part.name} as ${fitRole.stage.label}`,
+    );
+    expect((await diagram.locator("text").allTextContents()).join(" ")).toMatch(/V\+ \+\d\.\d\d V/);
+    await screenshot(entry, "part-page-entry");
+
+    await entry.getByRole("link", { name: "on the design page" }).click();
     await page.waitForURL(t.url(`designs/${DESIGN}/#buffer--${firstHit}`));
   });
 
-  it("shows the design's buffer shortlist, every rejection with its reasons and numbers, and the rail diagrams", async () => {
+  it("shows the design's buffer shortlist in full, then every rejection with its reasons and numbers", async () => {
     const evaluation = evaluateDesign(data.designs.find((d) => d.design?.id === DESIGN)!.design!, data.catalogue);
     if (!evaluation.ok) throw new Error(`${DESIGN} does not evaluate`);
     const buffer = evaluation.result.roles.find((r) => r.role === "buffer")!;
     const role = page.locator("#role-buffer");
 
-    // The link from the part page lands on its rejection, opened and in view.
+    // The link from the part page lands on its row, in view, with the reason that rejects it.
     const target = page.locator(`#buffer--${firstHit}`);
     expect(await target.isVisible()).toBe(true);
     const rejection = buffer.rejected.find((p) => p.part.id === firstHit)!;
     const failing = rejection.findings.find((f) => f.rule === "supply-range")!;
-    expect(failing.verdict).toBe("fail");
-    const row = target.locator("table.findings tr", { has: page.locator(`th a:text-is("supply-range")`) });
-    expect(await row.locator("td").last().textContent()).toBe(failing.reason);
-    expect(failing.reason).toMatch(/\d\.\d+ V/);
+    expect(await target.locator("td").last().textContent()).toContain(`supply-range: ${failing.reason}`);
 
-    // Shortlist: as many fits as the engine finds, best first, every reason with a number.
+    // Shortlist: the demo's buffer has fewer fits than a page draws in full, best first, every reason with a number.
+    expect(buffer.fits.length).toBeGreaterThan(0);
+    expect(buffer.fits.length).toBeLessThanOrEqual(FITS_IN_FULL);
     const fits = role.locator("ol.results > li");
     expect(await fits.count()).toBe(buffer.fits.length);
-    expect(buffer.fits.length).toBeGreaterThan(0);
     expect(await fits.first().locator("h4 a").textContent()).toBe(buffer.fits[0]!.part.name);
     const fitReasons = await fits.locator("table.findings > tbody > tr > td:last-child").allInnerTexts();
     // SPEC §7: unity-gain-stable and phase-reversal are yes/no; every other rule states numbers.
@@ -119,21 +168,18 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
       expect(f.reason).toMatch(/\d/);
     }
 
-    // Rejections: all of them, each failing finding's reason on the page with its numbers.
-    // Arriving at a rejection's anchor opened the list already; a reader would not click it shut.
-    const details = role.locator("details.rejections");
-    expect(await details.evaluate((d) => (d as HTMLDetailsElement).open)).toBe(true);
-    const rejected = role.locator("details.rejections li.result");
+    // Rejections: all of them, one row each, every failing finding's reason on the page with its numbers.
+    const rejected = role.locator("table.rejected-summary > tbody > tr");
     expect(await rejected.count()).toBe(buffer.rejected.length);
-    const rejectionReasons = await rejected.locator("table.findings > tbody > tr > td:last-child").allInnerTexts();
+    const rejectionReasons = (await rejected.locator("td:last-child").allInnerTexts()).join("\n");
     for (const p of buffer.rejected) {
-      for (const f of p.findings.filter((f) => f.verdict === "fail")) expect(rejectionReasons).toContain(f.reason);
+      for (const f of p.findings.filter((f) => f.verdict === "fail"))
+        expect(rejectionReasons).toContain(`${f.rule}: ${f.reason}`);
     }
 
-    // One rail diagram per op amp in the role, drawing both rails.
+    // A rail diagram for each fit drawn in full, drawing both rails.
     const diagrams = role.locator("svg.rail-diagram");
-    const opAmps = [...buffer.fits, ...buffer.rejected].filter((p) => p.part.kind === "op-amp").length;
-    expect(await diagrams.count()).toBe(opAmps);
+    expect(await diagrams.count()).toBe(buffer.fits.filter((p) => p.part.kind === "op-amp").length);
     const first = diagrams.first();
     expect(await first.getAttribute("role")).toBe("img");
     expect(await first.locator("title").textContent()).toBe(

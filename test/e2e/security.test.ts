@@ -2,7 +2,7 @@
 // context, CSP on (issue 7 §5): no payload runs (window.__pwned stays unset),
 // none turns into markup, each reads literally as text, and the browser
 // reports no CSP violation. Covers the catalogue tables and search results,
-// part pages, design pages (with their rail diagrams) and the try page
+// part pages and design pages (with their rail diagrams) and the try page
 // (results, part lists, a tampered link, the downloads).
 import { readFileSync } from "node:fs";
 import Papa from "papaparse";
@@ -84,13 +84,25 @@ describe.skipIf(!browserReady)("hostile catalogue and designs", () => {
     expect(plain.map((p) => p.id)).toEqual([]);
   });
 
-  it("shows every name, note and tag literally on the part pages", async () => {
+  it("shows every name, note, tag and design title literally on the part pages, rail diagrams included", async () => {
+    const titles = data.designs.map((d) => d.design!.title);
+    let drawnAnywhere = 0;
     for (const part of data.catalogue.parts) {
       await page.goto(t.url(`parts/${part.id}/`));
-      expect(await missingText([part.name, part.notes, ...part.tags]), part.id).toEqual([]);
+      expect(await missingText([part.name, part.notes, ...part.tags, ...titles]), part.id).toEqual([]);
       expect(await page.title()).toContain(part.name);
+      // Every rail diagram's title names the part, character for character (none for a diode).
+      const diagrams = await page.locator("svg.rail-diagram > title").allTextContents();
+      const drawn = diagrams.filter((title) => title.startsWith("Rail diagram: "));
+      if (part.kind === "diode") expect(drawn, part.id).toEqual([]);
+      expect(
+        drawn.filter((title) => !title.startsWith(`Rail diagram: ${part.name} as `)),
+        part.id,
+      ).toEqual([]);
+      drawnAnywhere += drawn.length;
       await expectNothingRan(`parts/${part.id}/`);
     }
+    expect(drawnAnywhere).toBeGreaterThan(0);
   });
 
   it("shows every name literally in the catalogue tables", async () => {

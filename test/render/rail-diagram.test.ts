@@ -3,7 +3,7 @@
 // two ends), worked by hand below for ±5 V rails and a ±2.5 V window.
 import { describe, expect, it } from "vitest";
 import type { Finding, OpAmpStage, Rails, SignStage, Verdict } from "../../src/core/engine/types.ts";
-import { layoutRailDiagram, renderRailDiagram } from "../../src/render/rail-diagram.ts";
+import { layoutRailDiagram, RAIL_LEGEND, renderRailDiagram } from "../../src/render/rail-diagram.ts";
 import { comparator, diode, opAmp } from "../helpers/parts.ts";
 
 const rails: Rails = { positive_v: 5, negative_v: -5 };
@@ -171,6 +171,28 @@ describe("renderRailDiagram", () => {
     const desc = /<desc id="d1-d">(.*?)<\/desc>/.exec(svg)?.[1];
     expect(desc).toMatchInlineSnapshot(
       `"Rails: V− −5.00 V, V+ +5.00 V. Input common mode: needs −2.50 V to +2.50 V; the part reaches −5.10 V to +5.10 V, 2.60 V to spare at the low end and 2.60 V to spare at the high end. Output swing: needs −2.50 V to +2.50 V; the part reaches −4.95 V to +3.50 V, 2.45 V to spare at the low end and 1.00 V to spare at the high end."`,
+    );
+  });
+
+  it("draws a dimension line with both end ticks for each margin", () => {
+    const svg = renderRailDiagram({ part, stage: buffer, rails });
+    const layout = layoutRailDiagram({ part, stage: buffer, rails });
+    for (const m of layout.rows.flatMap((r) => r.margins)) {
+      const [a, b] = [Math.min(m.x1, m.x2), Math.max(m.x1, m.x2)];
+      expect(svg).toContain(`<path d="M${a} ${m.y}H${b}M${a} ${m.y - 4}V${m.y + 4}M${b} ${m.y - 4}V${m.y + 4}"`);
+    }
+  });
+
+  it("leaves the key out when the page draws one for all its diagrams, ending just under the rails", () => {
+    const layout = layoutRailDiagram({ part, stage: buffer, rails });
+    const without = renderRailDiagram({ part, stage: buffer, rails, legend: false });
+    expect(renderRailDiagram({ part, stage: buffer, rails })).toContain('<g class="rd-legend">');
+    expect(without).not.toContain("rd-legend");
+    // The rails run down to height − 24 (the key's band); the picture stops 4 below that.
+    expect(without).toContain(`viewBox="0 0 720 ${layout.height - 24 + 4}"`);
+    expect(RAIL_LEGEND).toContain('<g class="rd-legend">');
+    expect(RAIL_LEGEND).toMatch(
+      /^<svg class="rail-diagram rail-legend"[^>]* role="img" aria-labelledby="rd-key-t"><title id="rd-key-t">Key to the rail diagrams: /,
     );
   });
 });

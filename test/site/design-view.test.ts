@@ -5,7 +5,14 @@ import { catalogueFromParts } from "../../src/core/catalogue.ts";
 import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
 import type { DesignResult } from "../../src/core/engine/result.ts";
 import type { Design } from "../../src/core/schemas/design.ts";
-import { CAUTION_TEXT, derivedGroups, inputGroups, needsCaution, type ValueGroup } from "../../src/site/design-view.ts";
+import {
+  CAUTION_TEXT,
+  derivedGroups,
+  inputGroups,
+  needsCaution,
+  roleView,
+  type ValueGroup,
+} from "../../src/site/design-view.ts";
 import { design } from "../helpers/designs.ts";
 import { comparator, diode, opAmp } from "../helpers/parts.ts";
 
@@ -143,5 +150,46 @@ describe("needsCaution", () => {
     expect(CAUTION_TEXT).toMatchInlineSnapshot(
       `"Voltages above extra-low-voltage limits need isolation and protection designed to local codes and licensed practice, which this guide does not assess."`,
     );
+  });
+});
+
+describe("roleView", () => {
+  // Five op amps that all fit the ±5 V buffer; cost bands set their rank (SPEC §7: verdict, status, cost, …).
+  const fits = [1, 2, 3, 4, 5].map((n) => opAmp({ id: `oa-c${n}`, name: `Cost ${n}`, cost_band: n }));
+  // Accepts inputs only down to −5 + 2.6 = −2.40 V against the −2.50 V needed: rejected.
+  const short = opAmp({ id: "oa-short", name: "Short", icm_neg_headroom_v: 2.6 });
+  const five = catalogueFromParts([...fits, short, comparator({ supply_max_v: 36 }), diode()]);
+  const buffer = (bom: Record<string, string> = {}) => {
+    const e = evaluateDesign(design({ bom }), five);
+    if (!e.ok) throw new Error(JSON.stringify(e.problems));
+    const role = e.result.roles.find((r) => r.role === "buffer");
+    if (!role) throw new Error("no buffer role");
+    return role;
+  };
+  const ids = (shown: { result: { part: { id: string } }; rank?: number }[]) =>
+    shown.map((s) => [s.result.part.id, s.rank]);
+
+  it("draws the best fits in full, best first, and nothing else when the design uses one of them", () => {
+    const view = roleView(buffer(), 3);
+    expect(ids(view.topFits)).toEqual([
+      ["oa-c1", 1],
+      ["oa-c2", 2],
+      ["oa-c3", 3],
+    ]);
+    expect(view.used).toBeUndefined();
+    expect([...view.inFull]).toEqual(["oa-c1", "oa-c2", "oa-c3"]);
+  });
+
+  it("adds a BOM part ranked below them, with its rank", () => {
+    const view = roleView(buffer({ buffer: "oa-c5" }), 3);
+    expect(view.used && ids([view.used])).toEqual([["oa-c5", 5]]);
+    expect(view.inFull.has("oa-c5")).toBe(true);
+  });
+
+  it("adds a BOM part that fails, without a rank", () => {
+    const view = roleView(buffer({ buffer: "oa-short" }), 3);
+    expect(view.used?.result.part.id).toBe("oa-short");
+    expect(view.used?.result.verdict).toBe("fail");
+    expect(view.used?.rank).toBeUndefined();
   });
 });

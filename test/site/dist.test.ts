@@ -11,7 +11,7 @@ import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
 import type { RoleResult } from "../../src/core/engine/result.ts";
 import { loadDataSet } from "../../src/node/load-data.ts";
 import { escapeHtml } from "../../src/render/escape.ts";
-import { CAUTION_TEXT } from "../../src/site/design-view.ts";
+import { CAUTION_TEXT, FITS_IN_FULL } from "../../src/site/design-view.ts";
 import { RULES } from "../../rules/index.ts";
 import { buildSite } from "../e2e/harness/build-site.ts";
 
@@ -199,60 +199,97 @@ describe("the built site", () => {
   });
 });
 
+/** The one element with this id: from its opening tag to the matching close of `tag` (no nesting of `tag` inside). */
+function elementWithId(html: string, tag: string, id: string): string {
+  const at = html.indexOf(` id="${id}"`);
+  if (at < 0) return "";
+  const start = html.lastIndexOf(`<${tag}`, at);
+  return html.slice(start, html.indexOf(`</${tag}>`, at) + tag.length + 3);
+}
+
+function evaluated(id: string) {
+  const design = data.designs.find((d) => d.design?.id === id)?.design;
+  if (!design) throw new Error(`demo design ${id} is missing from data/designs`);
+  const evaluation = evaluateDesign(design, data.catalogue);
+  if (!evaluation.ok) throw new Error(`demo design ${id} does not evaluate`);
+  return evaluation.result;
+}
+
+function roleSection(designId: string, name: string): string {
+  const html = page(`${BASE}designs/${designId}/`);
+  const start = html.indexOf(`<section class="role" id="role-${name}"`);
+  expect(start).toBeGreaterThan(0);
+  return html.slice(start, html.indexOf("</section>", start));
+}
+
+const listedIn = (html: string, pattern: RegExp) => [...html.matchAll(pattern)].map((m) => m[1]);
+
 describe("a demo design page: bridge-10v-5v-adc", () => {
-  const entry = data.designs.find((d) => d.design?.id === "bridge-10v-5v-adc")?.design;
-  if (!entry) throw new Error("demo design bridge-10v-5v-adc is missing from data/designs");
-  const evaluation = evaluateDesign(entry, data.catalogue);
-  if (!evaluation.ok) throw new Error("demo design does not evaluate");
-  const role = (name: string) => evaluation.result.roles.find((r) => r.role === name) as RoleResult;
-  const section = (name: string) => {
-    const html = page(`${BASE}designs/bridge-10v-5v-adc/`);
-    const start = html.indexOf(`<section class="role" id="role-${name}"`);
-    expect(start).toBeGreaterThan(0);
-    return html.slice(start, html.indexOf("</section>", start));
-  };
-  const entryOf = (html: string, id: string) => {
-    const at = html.indexOf(`id="buffer--${id}"`);
-    const start = html.lastIndexOf("<li", at);
-    return at < 0 ? "" : html.slice(start, html.indexOf("</li>", at));
-  };
+  const result = evaluated("bridge-10v-5v-adc");
+  const role = (name: string) => result.roles.find((r) => r.role === name) as RoleResult;
+  const section = (name: string) => roleSection("bridge-10v-5v-adc", name);
+  /** The part page's entry for this design's buffer. */
+  const partEntry = (id: string) => elementWithId(page(`${BASE}parts/${id}/`), "li", "in-bridge-10v-5v-adc--buffer");
 
-  it("draws one rail diagram per op amp in the buffer role", () => {
+  it("draws the shortlist in full, a rail diagram for each fit, and lists every rejection once", () => {
     const buffer = section("buffer");
-    expect(buffer.match(/<svg class="rail-diagram"/g)?.length).toBe(data.catalogue.opAmps.length);
-    expect(data.catalogue.opAmps.length).toBe(role("buffer").fits.length + role("buffer").rejected.length);
-  });
-
-  it("lists the buffer's fits in ranked order, then every rejection", () => {
-    const buffer = section("buffer");
-    const [fitsHtml, rejectedHtml] = buffer.split('<details class="rejections"');
-    const listed = (html = "") =>
-      [...html.matchAll(/<li class="result result-[a-z]+" id="buffer--([a-z0-9-]+)"/g)].map((m) => m[1]);
-    expect(role("buffer").fits.length).toBeGreaterThan(0);
+    const fits = role("buffer").fits;
+    expect(fits.length).toBeGreaterThan(0);
+    expect(fits.length).toBeLessThanOrEqual(FITS_IN_FULL);
+    expect(buffer.match(/<svg class="rail-diagram"/g)?.length).toBe(fits.length);
+    expect(listedIn(buffer, /<li class="result result-[a-z]+" id="buffer--([a-z0-9-]+)"/g)).toEqual(
+      fits.map((p) => p.part.id),
+    );
     expect(role("buffer").rejected.length).toBeGreaterThan(0);
-    expect(listed(fitsHtml)).toEqual(role("buffer").fits.map((p) => p.part.id));
-    expect(listed(rejectedHtml)).toEqual(role("buffer").rejected.map((p) => p.part.id));
+    expect(listedIn(buffer, /<tr id="buffer--([a-z0-9-]+)"/g)).toEqual(role("buffer").rejected.map((p) => p.part.id));
   });
 
-  it("gives every rejection all its reasons, each failing measured one with a number and a unit", () => {
+  it("gives every rejection each reason that rejects it, with a number and a unit", () => {
     const buffer = section("buffer");
     for (const r of role("buffer").rejected) {
-      const html = entryOf(buffer, r.part.id);
-      for (const f of r.findings) expect(html, `${r.part.id} ${f.rule}`).toContain(escapeHtml(f.reason));
-      const failing = r.findings.filter((f) => f.verdict !== "pass");
+      const row = elementWithId(buffer, "tr", `buffer--${r.part.id}`);
+      const failing = r.findings.filter((f) => f.verdict === "fail" || f.verdict === "unrated");
       expect(failing.length, r.part.id).toBeGreaterThan(0);
+      for (const f of failing) expect(row, `${r.part.id} ${f.rule}`).toContain(escapeHtml(f.reason));
       for (const f of failing.filter((x) => x.unit !== ""))
         expect(f.reason, `${r.part.id} ${f.rule}`).toMatch(
           /\d(\.\d+)? ?(V|mV|µV|nV|A|mA|µA|nA|pA|s|ms|µs|ns|Hz|kHz|MHz|V\/µs|mV\/µs|Ω|kΩ)\b|'[a-z_]+'/,
         );
+      expect(row).toContain(`href="${BASE}parts/${r.part.id}/#in-bridge-10v-5v-adc--buffer"`);
     }
+  });
+
+  it("links each rejection to its case on the part page: what rejects it with the arithmetic, the rest by name", () => {
+    let drawn = 0;
+    for (const r of role("buffer").rejected) {
+      const html = partEntry(r.part.id);
+      expect(html, r.part.id).toContain(`class="result result-${r.verdict}"`);
+      const open = r.findings.filter((f) => f.verdict !== "pass");
+      for (const f of open) {
+        expect(html, `${r.part.id} ${f.rule}`).toContain(escapeHtml(f.reason));
+        for (const step of f.steps) expect(html, `${r.part.id} ${f.rule}`).toContain(`>${escapeHtml(step.label)}</th>`);
+      }
+      const passes = /<p class="passes">It passes ([^<]*)\.<\/p>/.exec(html)?.[1] ?? "";
+      const passed = r.findings.filter((f) => f.verdict === "pass").map((f) => f.rule);
+      expect(
+        passes.split(/, | and /).filter((x) => x !== ""),
+        r.part.id,
+      ).toEqual(passed);
+      // The diagram draws the input and output ranges; it is there when one of them is what falls short.
+      const onRange = open.some((f) => f.rule === "input-common-mode" || f.rule === "output-swing");
+      expect(html.match(/<svg class="rail-diagram"/g)?.length ?? 0, r.part.id).toBe(onRange ? 1 : 0);
+      if (onRange) drawn++;
+      expect(html).toContain(`href="${BASE}designs/bridge-10v-5v-adc/#buffer--${r.part.id}"`);
+    }
+    expect(drawn).toBeGreaterThan(0);
   });
 
   it("makes a headroom failure obvious: the split-supply class falls 1.34 V short of −2.50 V", () => {
     // SPEC §6: Vf(0.5 mA) of d-si-switch = 0.70 + 0.16·log10(0.5) = 0.652 V; V− = −(5 − 1.304)
     // + 0.5 mA/(980 Hz · 1 µF) + ½ · 0.5 mA/(980 Hz · 10 µF) = −3.161 V. With 2 V input and
     // output headroom the part reaches −1.16 V against the −2.50 V window: 1.34 V short.
-    const html = entryOf(section("buffer"), "oa-bip-split-gp");
+    expect(elementWithId(section("buffer"), "tr", "buffer--oa-bip-split-gp")).toMatch(/: 1\.34 V short(<\/li>|<\/td>)/);
+    const html = partEntry("oa-bip-split-gp");
     expect(html).toContain('class="result result-fail"');
     expect(html).toContain(">1.34 V short</text>");
     expect(html).toContain("V− −3.16 V</text>");
@@ -280,6 +317,28 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
   it("carries the safety caution only above 30 V", () => {
     expect(page(`${BASE}designs/bus-48v/`)).toContain(CAUTION_TEXT);
     expect(page(`${BASE}designs/bridge-10v-5v-adc/`)).not.toContain(CAUTION_TEXT);
+  });
+});
+
+describe("a long shortlist: vibration-2v-split-2v5's buffer", () => {
+  const buffer = evaluated("vibration-2v-split-2v5").roles.find((r) => r.role === "buffer") as RoleResult;
+  const section = () => roleSection("vibration-2v-split-2v5", "buffer");
+
+  it("draws the first fits in full, then the others one row each in rank order", () => {
+    expect(buffer.fits.length).toBeGreaterThan(FITS_IN_FULL);
+    const html = section();
+    const [top, rest] = html.split('<table class="fits-summary"');
+    expect(listedIn(top ?? "", /<li class="result result-[a-z]+" id="buffer--([a-z0-9-]+)"/g)).toEqual(
+      buffer.fits.slice(0, FITS_IN_FULL).map((p) => p.part.id),
+    );
+    const restHtml = (rest ?? "").slice(0, (rest ?? "").indexOf("</table>"));
+    expect(listedIn(restHtml, /<tr id="buffer--([a-z0-9-]+)"/g)).toEqual(
+      buffer.fits.slice(FITS_IN_FULL).map((p) => p.part.id),
+    );
+    expect(listedIn(restHtml, /<tr id="buffer--[a-z0-9-]+"><td class="num">(\d+)<\/td>/g)).toEqual(
+      buffer.fits.slice(FITS_IN_FULL).map((_, i) => String(FITS_IN_FULL + 1 + i)),
+    );
+    expect(html.match(/<svg class="rail-diagram"/g)?.length).toBe(FITS_IN_FULL);
   });
 });
 
@@ -313,8 +372,34 @@ describe("the other pages", () => {
     ]) {
       expect(html).toContain(text);
     }
-    const rows = html.slice(html.indexOf('<table class="matrix"')).match(/<th scope="row">/g)?.length;
-    expect(rows).toBe(data.designs.length);
+    const matrix = html.slice(
+      html.indexOf('<table class="matrix"'),
+      html.indexOf("</table>", html.indexOf('class="matrix"')),
+    );
+    expect(matrix.match(/<th scope="row">/g)?.length).toBe(data.designs.length);
+  });
+
+  it("gives a part every role of every design, the compared topology's roles included", () => {
+    const id = "oa-cmos-rrio-1m";
+    const html = page(`${BASE}parts/${id}/`);
+    for (const d of data.designs) {
+      const result = evaluated(d.design!.id);
+      const results = [result, ...(result.comparison?.results.filter((r) => r.topology !== result.topology) ?? [])];
+      for (const r of results.flatMap((x) => x.roles)) {
+        const place = [...r.fits, ...r.rejected].find((p) => p.part.id === id);
+        if (!place) continue;
+        const anchor = `in-${d.design!.id}--${r.role}`;
+        const entry = elementWithId(html, "li", anchor);
+        expect(entry, anchor).toContain(`class="result result-${place.verdict}"`);
+        // A fit with every finding; a rejection with the ones it does not pass (the rest by name).
+        const fit = r.fits.includes(place);
+        for (const f of place.findings.filter((x) => fit || x.verdict !== "pass"))
+          expect(entry, `${anchor} ${f.rule}`).toContain(escapeHtml(f.reason));
+        // The matrix cell for this design and role leads to the entry.
+        expect(html, anchor).toContain(`href="#${anchor}"`);
+      }
+    }
+    expect(html).toContain('href="#in-audio-1v5-20k--level-shift"');
   });
 
   it("explains every rule with its formula, columns, policy knob and source", () => {

@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { catalogueFromParts } from "../../src/core/catalogue.ts";
 import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
 import type { DesignEntry } from "../../src/site/design-entry.ts";
-import { partUses } from "../../src/site/part-uses.ts";
+import { partUses, placesOf } from "../../src/site/part-uses.ts";
 import { design } from "../helpers/designs.ts";
 import { comparator, diode, opAmp } from "../helpers/parts.ts";
 
@@ -61,5 +61,21 @@ describe("partUses", () => {
     const row = partUses(good, designs).rows[1];
     expect(row?.cells).toEqual([]);
     expect(row?.problems?.[0]).toMatch(/^bom\.buffer: names no part in the catalogue \(got 'no-such-part'/);
+  });
+
+  it('fills the roles of the topology a design under topology "all" compared but did not choose', () => {
+    const all = [entry("both", { topology: "all", adc: { reference_v: 5 } })];
+    const result = all[0]?.evaluation;
+    if (!result?.ok) throw new Error("design does not evaluate");
+    const other = result.result.comparison?.results.find((r) => r.topology !== result.result.topology);
+    expect(other).toBeDefined();
+    const cells = partUses(good, all).rows[0]?.cells ?? [];
+    for (const role of other?.roles ?? [])
+      expect(cells.find((c) => c.role === role.role)?.cell.state, role.role).not.toBe("unused");
+    expect(placesOf(good.id, "both", all).map((p) => [p.role.role, p.topology])).toEqual(
+      [result.result, other!].flatMap((r) =>
+        r.roles.filter((x) => x.kinds.includes("op-amp")).map((x) => [x.role, r.topology]),
+      ),
+    );
   });
 });
