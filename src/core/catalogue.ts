@@ -7,6 +7,7 @@ import { closest, type Problem } from "./problems.ts";
 import { comparatorColumns, comparatorRow } from "./schemas/comparator.ts";
 import { diodeColumns, diodeRow } from "./schemas/diode.ts";
 import { opAmpColumns, opAmpRow } from "./schemas/op-amp.ts";
+import { readerFor } from "./schemas/row.ts";
 
 export type { Catalogue, Part, PartKind };
 
@@ -43,7 +44,8 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
   const known = Object.keys(spec.columns);
   const problems: Problem[] = [];
   // Lone CR line ends (old spreadsheet exports) would otherwise put every row on "line 1".
-  const body = (text.startsWith("\uFEFF") ? text.slice(1) : text).replace(/\r\n?/g, "\n");
+  const unmarked = text.startsWith("\uFEFF") ? text.slice(1) : text;
+  const body = unmarked.includes("\r") ? unmarked.replace(/\r\n?/g, "\n") : unmarked;
 
   if (body.trim() === "") {
     return {
@@ -62,7 +64,12 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
     return { value: [], lines, problems };
   }
 
-  const parsed = Papa.parse<string[]>(body, { delimiter: ",", skipEmptyLines: "greedy" });
+  // Blank rows are dropped here rather than by papaparse's skipEmptyLines: "greedy",
+  // which joins every row into a new string to test it. Same rows, same error indices
+  // (papaparse numbers errors before it drops rows). The body has no CR left, so
+  // naming the line end only spares papaparse guessing it.
+  const parsed = Papa.parse<string[]>(body, { delimiter: ",", newline: "\n", skipEmptyLines: false });
+  parsed.data = parsed.data.filter((cells) => !isBlankRow(cells));
   const lineOf = lineStarts(body);
   const rowLines = rowLineNumbers(parsed.data, body, lineOf);
 
@@ -133,8 +140,10 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
   if (!headerOk) return { value: [], lines, problems };
 
   const schema = spec.row as unknown as RowSchema;
+  const read = readerFor(schema, columns);
   const parts: Part[] = [];
-  rows.forEach((cells, index) => {
+  for (let index = 0; index < rows.length; index++) {
+    const cells = rows[index] ?? [];
     const line = rowLines[index + 1] ?? index + 2;
     if (cells.length > columns.length) {
       problems.push({
@@ -142,7 +151,13 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
         line,
         message: `row has ${cells.length} cells (got ${cells.length - columns.length} more than the header, expected ${columns.length}; is there an unquoted comma?)`,
       });
-      return;
+      continue;
+    }
+    const fast = read?.(cells);
+    if (fast !== undefined) {
+      parts.push(fast);
+      lines.push(line);
+      continue;
     }
     const record: Record<string, string> = {};
     columns.forEach((c, i) => {
@@ -152,13 +167,13 @@ function parseRows(kind: PartKind, file: string, text: string): Loaded<Part[]> &
     if (result.success) {
       parts.push(result.data);
       lines.push(line);
-      return;
+      continue;
     }
     for (const issue of result.error.issues) {
       const column = issue.path.length > 0 ? String(issue.path[0]) : undefined;
       problems.push({ file, line, ...(column !== undefined ? { column } : {}), message: issue.message });
     }
-  });
+  }
   return { value: parts, lines, problems };
 }
 
@@ -172,22 +187,29 @@ function shorten(s: string): string {
   return s.length > 40 ? `${s.slice(0, 37)}…` : s;
 }
 
+/** Whether papaparse's "greedy" test would call the row empty: nothing but white space. */
+function isBlankRow(cells: readonly string[]): boolean {
+  for (const cell of cells) if (cell.trim() !== "") return false;
+  return true;
+}
+
+// indexOf rather than a loop over characters: it scans a long text many times faster.
 function findLongLine(text: string): { line: number; length: number } | undefined {
   let line = 1;
   let start = 0;
-  for (let i = 0; i <= text.length; i++) {
-    if (i === text.length || text.charCodeAt(i) === 10) {
-      if (i - start > MAX_LINE_CHARS) return { line, length: i - start };
-      line++;
-      start = i + 1;
-    }
+  for (;;) {
+    const nl = text.indexOf("\n", start);
+    const end = nl < 0 ? text.length : nl;
+    if (end - start > MAX_LINE_CHARS) return { line, length: end - start };
+    if (nl < 0) return undefined;
+    line++;
+    start = nl + 1;
   }
-  return undefined;
 }
 
 function lineStarts(text: string): number[] {
   const starts = [0];
-  for (let i = 0; i < text.length; i++) if (text.charCodeAt(i) === 10) starts.push(i + 1);
+  for (let nl = text.indexOf("\n"); nl >= 0; nl = text.indexOf("\n", nl + 1)) starts.push(nl + 1);
   return starts;
 }
 
@@ -209,12 +231,30 @@ function rowLineNumbers(rows: string[][], text: string, starts: number[]): numbe
     }
     return lo + 1;
   };
+  // The next quote and line end are found with indexOf and only looked up again once
+  // passed: a loop over every character cost more than parsing the rows.
+  let quote = text.indexOf('"');
+  let newline = text.indexOf("\n");
+  // Moves past one CSV record starting at `from`, honouring quotes.
+  const skipRow = (from: number): number => {
+    let i = from;
+    for (;;) {
+      if (quote >= 0 && quote < i) quote = text.indexOf('"', i);
+      if (newline >= 0 && newline < i) newline = text.indexOf("\n", i);
+      if (quote < 0 || (newline >= 0 && newline < quote)) return newline < 0 ? text.length : newline + 1;
+      // Inside a quoted cell "" stands for one quote; a lone quote ends the cell.
+      let close = text.indexOf('"', quote + 1);
+      while (close >= 0 && text.charCodeAt(close + 1) === 34) close = text.indexOf('"', close + 2);
+      if (close < 0) return text.length;
+      i = close + 1;
+    }
+  };
   for (let r = 0; r < rows.length; r++) {
     while (pos < text.length && (text[pos] === "\n" || text[pos] === "\r" || isBlankLine(text, pos))) {
       pos = skipLine(text, pos);
     }
     lines.push(lineAt(pos));
-    pos = skipRow(text, pos);
+    pos = skipRow(pos);
   }
   return lines;
 }
@@ -229,20 +269,6 @@ function isBlankLine(text: string, pos: number): boolean {
 function skipLine(text: string, pos: number): number {
   const nl = text.indexOf("\n", pos);
   return nl < 0 ? text.length : nl + 1;
-}
-
-// Moves past one CSV record starting at pos, honouring quotes.
-function skipRow(text: string, pos: number): number {
-  let inQuotes = false;
-  let i = pos;
-  for (; i < text.length; i++) {
-    const ch = text[i];
-    if (ch === '"') {
-      if (inQuotes && text[i + 1] === '"') i++;
-      else inQuotes = !inQuotes;
-    } else if (ch === "\n" && !inQuotes) return i + 1;
-  }
-  return i;
 }
 
 /** Joins the three kinds, adding cross-file checks (ids unique across all files). */

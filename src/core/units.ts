@@ -1,32 +1,54 @@
 // SI-prefixed number parsing and engineering formatting. Everything inside the
 // engine is in base SI units (V, A, Ω, F, Hz, s); text appears only at the edge.
 
-const PREFIX_EXPONENT: Readonly<Record<string, number>> = {
-  p: -12,
-  n: -9,
-  u: -6,
-  µ: -6, // U+00B5 micro sign
-  μ: -6, // U+03BC Greek mu, which some keyboards produce instead
-  m: -3,
-  k: 3,
-  K: 3,
-  M: 6,
-  G: 9,
-  T: 12,
-};
-
-const NUMBER_WITH_PREFIX = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)([pnuµμmkKMGT])?$/;
+// Keyed by UTF-16 code unit: the prefix is always the cell's last character.
+const PREFIX_EXPONENT: ReadonlyMap<number, number> = new Map(
+  Object.entries({
+    p: -12,
+    n: -9,
+    u: -6,
+    µ: -6, // U+00B5 micro sign
+    μ: -6, // U+03BC Greek mu, which some keyboards produce instead
+    m: -3,
+    k: 3,
+    K: 3,
+    M: 6,
+    G: 9,
+    T: 12,
+  }).map(([prefix, exponent]) => [prefix.charCodeAt(0), exponent]),
+);
 
 export type ParsedNumber = { ok: true; value: number } | { ok: false };
 
 /** Parses "0.5", "500m", "2.2k", "1.5M", "10u", "10µ", "1e-6". No units, no spaces inside. */
 export function parseSI(text: string): ParsedNumber {
-  const match = NUMBER_WITH_PREFIX.exec(text.trim());
-  if (!match) return { ok: false };
-  const mantissa = Number(match[1]);
-  const prefix = match[2];
-  const value = prefix === undefined ? mantissa : scaleByPowerOfTen(mantissa, PREFIX_EXPONENT[prefix] ?? 0);
-  return Number.isFinite(value) ? { ok: true, value } : { ok: false };
+  const value = siValue(text);
+  return value === undefined ? { ok: false } : { ok: true, value };
+}
+
+/**
+ * parseSI without the result object, for loops over every cell of a catalogue.
+ * The grammar is /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?[pnuµμmkKMGT]?$/ after a trim.
+ * Matching that regex took twice as long as this scan, which relies on Number()
+ * accepting exactly that grammar once the text holds only digits, signs, '.' and
+ * 'e'/'E': its hex, binary, octal and Infinity forms need other letters, and any
+ * text it refuses gives NaN, which fails the finiteness test below.
+ */
+export function siValue(text: string): number | undefined {
+  const t = text.trim();
+  const last = t.length - 1;
+  if (last < 0) return undefined;
+  const exponent = PREFIX_EXPONENT.get(t.charCodeAt(last));
+  const end = exponent === undefined ? t.length : last;
+  if (end === 0) return undefined;
+  for (let i = 0; i < end; i++) {
+    const c = t.charCodeAt(i);
+    // 0-9, '+', '-', '.', 'e', 'E'
+    if (!((c >= 48 && c <= 57) || c === 43 || c === 45 || c === 46 || c === 101 || c === 69)) return undefined;
+  }
+  const mantissa = Number(end === t.length ? t : t.slice(0, end));
+  const value = exponent === undefined ? mantissa : scaleByPowerOfTen(mantissa, exponent);
+  return Number.isFinite(value) ? value : undefined;
 }
 
 // Dividing by 10^n (rather than multiplying by 10^-n) keeps "1u" exactly 1e-6.

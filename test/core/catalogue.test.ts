@@ -1,5 +1,7 @@
 import { readdirSync } from "node:fs";
 import { join } from "node:path";
+import fc from "fast-check";
+import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
 import { buildCatalogue, catalogueFromParts, KINDS, parseCatalogueText } from "../../src/core/catalogue.ts";
 import { formatProblem } from "../../src/core/problems.ts";
@@ -279,6 +281,83 @@ describe("parseCatalogueText", () => {
       [3, "vf_1ma_v"],
       [5, "type"],
     ]);
+  });
+});
+
+// The line numbering as first written: papaparse dropping blank rows itself, and a
+// walk over the text one character at a time. parseCatalogueText now gets there
+// with indexOf and its own blank-row filter, and must name the same lines.
+function referenceLines(text: string): { rows: number[]; ids: string[]; quoteErrors: number[] } {
+  const body = text.replace(/\r\n?/g, "\n");
+  const parsed = Papa.parse<string[]>(body, { delimiter: ",", skipEmptyLines: "greedy" });
+  const starts = [0];
+  for (let i = 0; i < body.length; i++) if (body[i] === "\n") starts.push(i + 1);
+  const lineAt = (offset: number) => starts.filter((s) => s <= offset).length;
+  const isBlankLine = (pos: number) => {
+    if (pos > 0 && body[pos - 1] !== "\n") return false;
+    let i = pos;
+    while (i < body.length && (body[i] === " " || body[i] === "\t" || body[i] === ",")) i++;
+    return i < body.length ? body[i] === "\n" : i > pos;
+  };
+  const rows: number[] = [];
+  let pos = 0;
+  for (let r = 0; r < parsed.data.length; r++) {
+    while (pos < body.length && (body[pos] === "\n" || isBlankLine(pos))) {
+      const nl = body.indexOf("\n", pos);
+      pos = nl < 0 ? body.length : nl + 1;
+    }
+    rows.push(lineAt(pos));
+    let inQuotes = false;
+    for (; pos < body.length; pos++) {
+      if (body[pos] === '"') {
+        if (inQuotes && body[pos + 1] === '"') pos++;
+        else inQuotes = !inQuotes;
+      } else if (body[pos] === "\n" && !inQuotes) {
+        pos++;
+        break;
+      }
+    }
+  }
+  const quoteErrors = parsed.errors
+    .filter((e) => e.type === "Quotes")
+    .map((e) => (e.row !== undefined ? (rows[e.row] ?? 1) : 1));
+  return { rows, ids: parsed.data.map((cells) => (cells[0] ?? "").trim()), quoteErrors };
+}
+
+describe("line numbers", () => {
+  const notes = fc.oneof(
+    fc.constantFrom("", "plain", "a, b", 'say "hi"', "two\nlines", "three\r\nlines\nhere", '""', ",\n,"),
+    fc.string({ unit: fc.constantFrom("a", " ", ",", '"', "\n", "\r"), maxLength: 8 }),
+  );
+  // Lines as they may sit in a file: rows (notes quoted as a spreadsheet writes them,
+  // or raw, stray quotes and all), blank and comma-only lines.
+  const row = (id: string, notes: string) =>
+    Object.keys(DIODE_CELLS).map((c) => (c === "id" ? id : c === "notes" ? notes : (DIODE_CELLS[c] ?? "")));
+  // Lines as they may sit in a file: rows (notes quoted as a spreadsheet writes them,
+  // or raw, stray quotes and all), blank and comma-only lines. Ids tell the rows apart.
+  const line = (id: string) =>
+    fc.oneof(
+      notes.map((n) => csvLine(row(id, n))),
+      notes.map((n) => row(id, n).join(",")),
+      fc.constantFrom("", "   ", ",,,", " , ,"),
+    );
+
+  it("names the same line for every row as a character-by-character walk", () => {
+    const lines = fc.array(fc.nat(), { maxLength: 8 }).chain((ns) => fc.tuple(...ns.map((_, i) => line(`d-${i}`))));
+    fc.assert(
+      fc.property(lines, fc.constantFrom("\n", "\r\n", "\r"), (rows, eol) => {
+        const text = [csvLine(Object.keys(DIODE_CELLS)), ...rows].join(eol);
+        const parsed = parseCatalogueText("diode", "diodes.csv", text);
+        const reference = referenceLines(text);
+        if (reference.quoteErrors.length > 0) {
+          expect(parsed.problems.map((p) => p.line)).toEqual(reference.quoteErrors);
+          return;
+        }
+        expect(parsed.lines).toEqual(parsed.parts.map((p) => reference.rows[reference.ids.indexOf(p.id)]));
+        for (const p of parsed.problems) expect(reference.rows).toContain(p.line);
+      }),
+      { numRuns: 500 },
+    );
   });
 });
 

@@ -1,5 +1,6 @@
 // SI prefixes as defined by the SI Brochure, 9th ed. (BIPM, 2019), table 7:
 // p = 10⁻¹², n = 10⁻⁹, µ = 10⁻⁶, m = 10⁻³, k = 10³, M = 10⁶, G = 10⁹.
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { formatQuantity, formatSI, formatVolts, parseSI } from "../../src/core/units.ts";
 
@@ -67,6 +68,33 @@ describe("parseSI", () => {
     ["e3"],
   ])("rejects %j", (text) => {
     expect(parseSI(text)).toEqual({ ok: false });
+  });
+
+  // parseSI reads without a regex for speed; this is the grammar it promises (SPEC §4).
+  const GRAMMAR = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)([pnuµμmkKMGT])?$/;
+  const EXPONENT: Record<string, number> = { p: -12, n: -9, u: -6, µ: -6, μ: -6, m: -3, k: 3, K: 3, M: 6, G: 9, T: 12 };
+
+  function byGrammar(text: string): { ok: true; value: number } | { ok: false } {
+    const match = GRAMMAR.exec(text.trim());
+    if (!match) return { ok: false };
+    const mantissa = Number(match[1]);
+    const exponent = match[2] === undefined ? 0 : (EXPONENT[match[2]] ?? 0);
+    const value = exponent < 0 ? mantissa / 10 ** -exponent : mantissa * 10 ** exponent;
+    return Number.isFinite(value) ? { ok: true, value } : { ok: false };
+  }
+
+  it("reads exactly the texts the grammar accepts, as the grammar reads them", () => {
+    const symbol = fc.constantFrom(..."0123456789+-.eE pnuµμmkKMGTxXbBoO_,I\t\u00a0");
+    const numberish = fc.array(symbol, { maxLength: 10 }).map((cs) => cs.join(""));
+    const written = fc
+      .tuple(fc.double({ noNaN: true }), fc.constantFrom("", "p", "n", "u", "µ", "μ", "m", "k", "K", "M", "G", "T"))
+      .map(([v, prefix]) => `${v}${prefix}`);
+    fc.assert(
+      fc.property(fc.oneof(numberish, written, fc.string()), (text) => {
+        expect(parseSI(text)).toStrictEqual(byGrammar(text));
+      }),
+      { numRuns: 5000 },
+    );
   });
 });
 

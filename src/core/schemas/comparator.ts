@@ -1,8 +1,9 @@
 // comparators.csv (SPEC §4).
-import { z } from "zod";
+import type { z } from "zod";
 import { optionalNumber, requiredEnum, requiredNumber } from "./cells.ts";
 import { amplifierColumns, commonColumns } from "./common.ts";
 import { checkPushPullLevels, checkSupplyAndHeadroom } from "./row-checks.ts";
+import { partRow } from "./row.ts";
 
 export const OUTPUT_TYPES = ["push-pull", "open-drain"] as const;
 
@@ -18,10 +19,6 @@ export const comparatorColumns = {
   iq_ma: requiredNumber({ unit: "mA", label: "Supply current" }, { min: 0 }),
 };
 
-export const comparatorRow = z
-  .strictObject(comparatorColumns)
-  .superRefine(checkSupplyAndHeadroom)
-  .superRefine(checkPushPullLevels)
-  .transform((row) => ({ kind: "comparator" as const, ...row }));
+export const comparatorRow = partRow("comparator", comparatorColumns, checkSupplyAndHeadroom, checkPushPullLevels);
 
 export type Comparator = z.output<typeof comparatorRow>;

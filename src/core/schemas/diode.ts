@@ -1,7 +1,8 @@
 // diodes.csv (SPEC §4).
-import { z } from "zod";
+import type { z } from "zod";
 import { optionalNumber, requiredEnum, requiredNumber } from "./cells.ts";
 import { commonColumns } from "./common.ts";
+import { partRow } from "./row.ts";
 
 export const DIODE_TYPES = ["silicon", "schottky", "low-leakage"] as const;
 
@@ -17,17 +18,14 @@ export const diodeColumns = {
   if_max_ma: requiredNumber({ unit: "mA", label: "Forward current max" }, { above: 0 }),
 };
 
-export const diodeRow = z
-  .strictObject(diodeColumns)
-  .superRefine((row, ctx) => {
-    if (row.vf_10ma_v < row.vf_1ma_v) {
-      ctx.addIssue({
-        code: "custom",
-        path: ["vf_10ma_v"],
-        message: `forward voltage falls as current rises (got ${row.vf_10ma_v} V at 10 mA below ${row.vf_1ma_v} V at 1 mA, expected vf_10ma_v ≥ vf_1ma_v)`,
-      });
-    }
-  })
-  .transform((row) => ({ kind: "diode" as const, ...row }));
+export const diodeRow = partRow("diode", diodeColumns, (row, ctx) => {
+  if (row.vf_10ma_v < row.vf_1ma_v) {
+    ctx.addIssue({
+      code: "custom",
+      path: ["vf_10ma_v"],
+      message: `forward voltage falls as current rises (got ${row.vf_10ma_v} V at 10 mA below ${row.vf_1ma_v} V at 1 mA, expected vf_10ma_v ≥ vf_1ma_v)`,
+    });
+  }
+});
 
 export type Diode = z.output<typeof diodeRow>;

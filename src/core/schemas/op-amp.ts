@@ -1,9 +1,10 @@
 // op-amps.csv (SPEC §4). Values stay in the units their column names carry;
 // rules convert to SI where they compute.
-import { z } from "zod";
+import type { z } from "zod";
 import { optionalNumber, optionalYesNo, requiredNumber, requiredYesNo } from "./cells.ts";
 import { amplifierColumns, commonColumns } from "./common.ts";
 import { checkSupplyAndHeadroom } from "./row-checks.ts";
+import { partRow } from "./row.ts";
 
 export const opAmpColumns = {
   ...commonColumns,
@@ -22,9 +23,6 @@ export const opAmpColumns = {
   phase_reversal: optionalYesNo({ unit: "", label: "Phase reversal" }),
 };
 
-export const opAmpRow = z
-  .strictObject(opAmpColumns)
-  .superRefine(checkSupplyAndHeadroom)
-  .transform((row) => ({ kind: "op-amp" as const, ...row }));
+export const opAmpRow = partRow("op-amp", opAmpColumns, checkSupplyAndHeadroom);
 
 export type OpAmp = z.output<typeof opAmpRow>;
