@@ -22,15 +22,13 @@ export type Catalogue = {
  * Indexes parts whose ids are already unique (the loader checks that). `parts`
  * keeps file order; the lists by kind are in id order, the ranking's last key,
  * so the engine can rank ties without comparing strings. The parts are copied
- * in that order too, through JSON so that each part's numbers are allocated
- * with it: the engine walks each list on every evaluation, and parts laid out
- * in memory in the order it walks them are weighed about 1.7 times as fast at
- * 10,000 parts (bench/). JSON drops empty (undefined) cells, which every
- * reader already treats as absent: the browser gets its parts through JSON too.
+ * in that order too: the engine walks each list on every evaluation, and parts
+ * laid out in memory in the order it walks them are weighed about 1.5 times as
+ * fast at 10,000 parts (bench/), for a copy that costs less than one evaluation.
  */
 export function indexCatalogue(parts: readonly Part[]): Catalogue {
   const sorted = [...parts].sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
-  const byIdOrder = JSON.parse(JSON.stringify(sorted)) as Part[];
+  const byIdOrder = sorted.map((p) => ({ ...p }));
   const copies = new Map(sorted.map((p, i) => [p, byIdOrder[i] as Part]));
   const list = parts.map((p) => copies.get(p) as Part);
   return {
