@@ -8,8 +8,9 @@ import { severity } from "./verdict.ts";
 
 const LAST_FIT = severity("marginal");
 
-// Candidate lists come from the catalogue, which keeps them in id order (the
-// last ranking key); ties on every other key then fall back to list position.
+// Candidate lists keep file order. Many catalogues keep their files in id order
+// (the last ranking key): then ties on every other key fall back to list
+// position, and no ids are compared. Checked once per list.
 const inIdOrder = new WeakMap<readonly Part[], boolean>();
 
 function isInIdOrder(parts: readonly Part[]): boolean {
