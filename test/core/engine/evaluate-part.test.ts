@@ -76,6 +76,12 @@ describe("compareResults: each key decides only when the ones before it tie", ()
   });
 });
 
+describe("isFit", () => {
+  it("counts pass and marginal as fits, unrated and fail as rejections", () => {
+    expect(["pass", "marginal", "unrated", "fail"].map((v) => isFit(v as Verdict))).toEqual([true, true, false, false]);
+  });
+});
+
 describe("evaluatePart", () => {
   const rules = ["output-swing", "phase-reversal", "offset"].map((id) => RULES_BY_ID.get(id)!);
   const d = design();
