@@ -1,3 +1,5 @@
+import type { Part } from "../src/core/catalogue.ts";
+import type { RoleContext } from "../src/core/engine/types.ts";
 import { defineRule, driftSpanC, record, stageAs } from "../src/core/engine/finding.ts";
 import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
 import { formatSI } from "../src/core/units.ts";
@@ -25,29 +27,16 @@ export const offset = defineRule({
   policy: "offset_share",
   kinds: ["op-amp"],
   needs: { "op-amp": ["vos_max_mv", "ib_max_na"] },
-  measure({ stage, design, policy }, part, out) {
-    const s = stageAs(stage, "op-amp", "offset");
-    const o = stageOffset(
-      part as OpAmp,
-      s.vos_multiplier,
-      s.bias_ohm,
-      design.temperature.min_c,
-      design.temperature.max_c,
-    );
+  measure(ctx, part, out) {
+    const { design, policy } = ctx;
+    const { s, o } = offsetIn(ctx, part);
     const error = o.output_v / s.output_per_input;
     const limit = policy.offset_share * design.accuracy.required_v;
     const margin = limit - error;
     record(out, shareVerdict(margin, limit, policy), limit, error, margin, limit);
   },
-  describe({ available: error, margin, needed: limit }, { stage, design }, part) {
-    const s = stageAs(stage, "op-amp", "offset");
-    const o = stageOffset(
-      part as OpAmp,
-      s.vos_multiplier,
-      s.bias_ohm,
-      design.temperature.min_c,
-      design.temperature.max_c,
-    );
+  describe({ available: error, margin, needed: limit }, ctx, part) {
+    const { s, o } = offsetIn(ctx, part);
     const mult = s.vos_multiplier === 1 ? "" : `${round3(s.vos_multiplier)}·`;
     const drift = o.drift > 0 ? ` incl. ${mv(o.drift)} drift` : "";
     const scale = s.output_per_input === 1 ? "" : `, ÷ ${round3(s.output_per_input)} to the input`;
@@ -66,6 +55,19 @@ export const offset = defineRule({
     };
   },
 });
+
+/** The stage and its output offset for one part: measure and describe read the same numbers. */
+function offsetIn({ stage, design }: RoleContext, part: Part) {
+  const s = stageAs(stage, "op-amp", "offset");
+  const o = stageOffset(
+    part as OpAmp,
+    s.vos_multiplier,
+    s.bias_ohm,
+    design.temperature.min_c,
+    design.temperature.max_c,
+  );
+  return { s, o };
+}
 
 function mv(v: number): string {
   return formatSI(v, "V");
