@@ -95,6 +95,9 @@ class TryPage {
   /** The next address change gets its own history entry (set after each committed edit). */
   pushNext = false;
   scheduled = 0;
+  /** A timer writing the address after the frame an edit redrew (0: none pending), and the design it writes. */
+  addressTimer = 0;
+  addressDraft: Readonly<Draft> = this.draft;
   // The link check evaluates a design once; the update that follows reuses that evaluation.
   cached: { key: string; evaluation: Evaluation } | undefined;
 
@@ -125,6 +128,8 @@ class TryPage {
     page.form.addEventListener("input", (e) => this.onInput(e));
     page.form.addEventListener("change", (e) => {
       this.onInput(e);
+      // The committed value goes into the current entry before the next edit may push one.
+      this.flushAddress();
       this.pushNext = true;
     });
     page.form.addEventListener("submit", (e) => e.preventDefault());
@@ -132,7 +137,11 @@ class TryPage {
     page.results.addEventListener("click", (e) => this.onResultsClick(e));
     page.downloadDesign.addEventListener("click", () => this.downloadDesign());
     page.downloadCsv.addEventListener("click", () => this.downloadCsv());
-    window.addEventListener("popstate", () => this.fromUrl(false));
+    window.addEventListener("popstate", () => {
+      // The address now belongs to another history entry; a pending write would overwrite it.
+      this.cancelAddress();
+      this.fromUrl(false);
+    });
     this.fromUrl(true);
     page.root.removeAttribute("aria-busy");
     page.form.querySelectorAll("fieldset").forEach((f) => (f.disabled = false));
@@ -178,6 +187,7 @@ class TryPage {
   }
 
   loadDemo(): void {
+    this.flushAddress();
     const id = this.page.start.value;
     const demo = this.data.designs.find((d) => d.id === id);
     this.draft = demo ? draftFromInput(demo.input, DEFAULT_DRAFT) : { ...DEFAULT_DRAFT };
@@ -202,7 +212,7 @@ class TryPage {
     if (this.scheduled === 0) {
       this.scheduled = requestAnimationFrame(() => {
         this.scheduled = 0;
-        this.update({ writeUrl: "auto" });
+        this.update({ writeUrl: "after-frame" });
       });
     }
   }
@@ -217,7 +227,7 @@ class TryPage {
   }
 
   /** Checks the draft, evaluates it, redraws, and (when valid) moves the address along. */
-  update({ writeUrl }: { writeUrl: "auto" | "replace" | "none" }): void {
+  update({ writeUrl }: { writeUrl: "auto" | "after-frame" | "replace" | "none" }): void {
     const started = performance.now();
     const { page, doc } = this;
     const checked = checkDraft(this.draft);
@@ -252,7 +262,8 @@ class TryPage {
     say(page.status, `${line} ${this.catalogue.parts.length} parts checked.`);
     page.status.classList.toggle("try-holds", holds);
     page.status.classList.toggle("try-fails", !holds);
-    if (writeUrl !== "none") this.writeUrl(writeUrl === "replace");
+    if (writeUrl === "after-frame") this.queueAddress();
+    else if (writeUrl !== "none") this.writeUrl(writeUrl === "replace");
     // For benchmarks and the browser tests: schema check + engine, and the DOM update, in ms.
     const done = performance.now();
     // Only the latest pair is kept, so a long session does not grow the timeline.
@@ -263,8 +274,29 @@ class TryPage {
     page.root.dataset.updateMs = (done - started).toFixed(1);
   }
 
-  writeUrl(replace: boolean): void {
-    const query = encodeDraft(this.draft);
+  /**
+   * A history write costs a few ms that a keystroke's frame cannot spare, so it
+   * runs in a task after that frame; edits in between share one write.
+   */
+  queueAddress(): void {
+    // The draft of this update, which was valid: a later edit may not be.
+    this.addressDraft = this.draft;
+    if (this.addressTimer === 0) this.addressTimer = window.setTimeout(() => this.flushAddress(), 0);
+  }
+
+  flushAddress(): void {
+    if (this.addressTimer === 0) return;
+    this.cancelAddress();
+    this.writeUrl(false, this.addressDraft);
+  }
+
+  cancelAddress(): void {
+    window.clearTimeout(this.addressTimer);
+    this.addressTimer = 0;
+  }
+
+  writeUrl(replace: boolean, draft: Readonly<Draft> = this.draft): void {
+    const query = encodeDraft(draft);
     const href = `${this.doc.location.pathname}?${query}${this.doc.location.hash}`;
     if (`?${query}` === this.doc.location.search) return;
     if (this.pushNext && !replace) history.pushState(null, "", href);
