@@ -1,7 +1,8 @@
-// The try page's results as HTML strings: derived values, and per role the
-// shortlist, the rejections with their reasons and a rail diagram. Pure (no
-// DOM), so the unit tests read exactly what the page shows. Every piece of
-// catalogue or design text goes through escapeHtml: names are a team's free text.
+// The try page's results as a tree of HTML strings (pieces.ts): derived values,
+// and per role the shortlist, the rejections with their reasons and a rail
+// diagram. Pure (no DOM), so the unit tests read exactly what the page shows.
+// Every piece of catalogue or design text goes through escapeHtml: names are a
+// team's free text.
 import type { PartResult } from "../../core/engine/evaluate-part.ts";
 import type { DesignResult, RoleResult } from "../../core/engine/result.ts";
 import type { Finding } from "../../core/engine/types.ts";
@@ -12,6 +13,7 @@ import { partUrl } from "../../site/links.ts";
 import { summarizeDesign } from "../../site/design-summary.ts";
 import { derivedGroups } from "../../site/design-view.ts";
 import { ROLE_NAMES } from "../../site/roles.ts";
+import { pieceHtml, type Container, type Piece } from "./pieces.ts";
 import { renderBudget, renderComparison } from "./render-budget.ts";
 
 /** Rows shown before a "show all" button: keeps each keystroke's DOM work bounded on a large catalogue. */
@@ -22,13 +24,34 @@ export type ViewState = { expanded: ReadonlySet<string> };
 
 const KIND_WORD = { "op-amp": "op amp", comparator: "comparator", diode: "diode" } as const;
 
-/** The derived values grouped and worded as on the design pages. */
-export function renderDerived(result: DesignResult): string {
-  const groups = derivedGroups(result).map(
-    (g) =>
-      `<div class="try-derived-group"><h4>${escapeHtml(g.title)}</h4><dl>${g.rows.map((r) => `<div><dt>${escapeHtml(r.label)}</dt><dd>${escapeHtml(r.value)}</dd></div>`).join("")}</dl></div>`,
-  );
-  return `<div class="try-derived">${groups.join("")}</div>`;
+/** The derived values grouped and worded as on the design pages, one piece per value. */
+export function derivedPiece(result: DesignResult): Container {
+  const groups: Piece[] = derivedGroups(result).map((g) => ({
+    key: g.title,
+    open: `<div class="try-derived-group">`,
+    close: "</div>",
+    children: [
+      { key: "h", html: `<h4>${escapeHtml(g.title)}</h4>` },
+      {
+        key: "values",
+        open: "<dl>",
+        close: "</dl>",
+        children: g.rows.map((r) => ({
+          key: r.label,
+          html: `<div><dt>${escapeHtml(r.label)}</dt><dd>${escapeHtml(r.value)}</dd></div>`,
+        })),
+      },
+    ],
+  }));
+  return {
+    key: "derived",
+    open: `<section class="try-block" aria-labelledby="try-derived-h">`,
+    close: "</section>",
+    children: [
+      { key: "h", html: `<h3 id="try-derived-h">Derived values</h3>` },
+      { key: "groups", open: `<div class="try-derived">`, close: "</div>", children: groups },
+    ],
+  };
 }
 
 /** The finding closest to failing: the first not-pass one, else the smallest relative margin. */
@@ -58,15 +81,34 @@ function reason(f: Finding): string {
   return `<li><span class="try-rule">${escapeHtml(f.rule)}</span>: ${escapeHtml(f.reason)}</li>`;
 }
 
-function fitRow(p: PartResult, rank: number, role: RoleResult): string {
-  const f = tightest(p);
-  const what = f ? `<ul class="try-reasons">${reason(f)}</ul>` : "";
-  return `<tr data-part="${escapeHtml(p.part.id)}" data-verdict="${p.verdict}"><td>${rank}</td>${partCell(p, role)}<td>${renderVerdict(p.verdict)}</td><td>${what}</td></tr>`;
+/** A part's row, one piece per cell: an edit usually changes a reason's numbers and leaves the rest. */
+function row(p: PartResult, cells: Piece[]): Container {
+  return {
+    key: p.part.id,
+    open: `<tr data-part="${escapeHtml(p.part.id)}" data-verdict="${p.verdict}">`,
+    close: "</tr>",
+    children: cells,
+  };
 }
 
-function rejectedRow(p: PartResult, role: RoleResult): string {
+function fitRow(p: PartResult, rank: number, role: RoleResult): Container {
+  const f = tightest(p);
+  const what = f ? `<ul class="try-reasons">${reason(f)}</ul>` : "";
+  return row(p, [
+    { key: "rank", html: `<td>${rank}</td>` },
+    { key: "part", html: partCell(p, role) },
+    { key: "verdict", html: `<td>${renderVerdict(p.verdict)}</td>` },
+    { key: "why", html: `<td>${what}</td>` },
+  ]);
+}
+
+function rejectedRow(p: PartResult, role: RoleResult): Container {
   const open = p.findings.filter((f) => f.verdict === "fail" || f.verdict === "unrated");
-  return `<tr data-part="${escapeHtml(p.part.id)}" data-verdict="${p.verdict}">${partCell(p, role)}<td>${renderVerdict(p.verdict)}</td><td><ul class="try-reasons">${open.map(reason).join("")}</ul></td></tr>`;
+  return row(p, [
+    { key: "part", html: partCell(p, role) },
+    { key: "verdict", html: `<td>${renderVerdict(p.verdict)}</td>` },
+    { key: "why", html: `<td><ul class="try-reasons">${open.map(reason).join("")}</ul></td>` },
+  ]);
 }
 
 function moreButton(key: string, shown: number, total: number, expanded: boolean, what: string): string {
@@ -80,9 +122,19 @@ function moreButton(key: string, shown: number, total: number, expanded: boolean
 /** Column heads with a class each, so the fixed table layout can size them. */
 const COLUMNS = { rank: "#", part: "Part", verdict: "Verdict", closest: "Closest to its limit", why: "Why" } as const;
 
-function listTable(caption: string, head: (keyof typeof COLUMNS)[], rows: string[]): string {
+// Rows are keyed by part id, so a part that keeps its row keeps its element whatever its rank.
+function listTable(id: string, caption: string, head: (keyof typeof COLUMNS)[], rows: Container[]): Container {
   const cols = head.map((h) => `<th scope="col" class="try-col-${h}">${escapeHtml(COLUMNS[h])}</th>`).join("");
-  return `<table class="try-parts"><caption>${escapeHtml(caption)}</caption><thead><tr>${cols}</tr></thead><tbody>${rows.join("")}</tbody></table>`;
+  return {
+    key: id,
+    open: `<table class="try-parts" id="${id}">`,
+    close: "</table>",
+    children: [
+      { key: "caption", html: `<caption>${escapeHtml(caption)}</caption>` },
+      { key: "head", html: `<thead><tr>${cols}</tr></thead>` },
+      { key: "body", open: "<tbody>", close: "</tbody>", children: rows },
+    ],
+  };
 }
 
 function diagram(role: RoleResult, result: DesignResult): string {
@@ -99,7 +151,8 @@ function diagram(role: RoleResult, result: DesignResult): string {
   return `<figure class="try-diagram">${svg}<figcaption>${escapeHtml(`${pick.part.id} as the ${ROLE_NAMES[role.role].toLowerCase()}`)}</figcaption></figure>`;
 }
 
-export function renderRole(role: RoleResult, result: DesignResult, view: ViewState): string {
+/** One role: its heading and counts, the chosen op amp's rail diagram, the shortlist and the rejections. */
+export function rolePiece(role: RoleResult, result: DesignResult, view: ViewState): Container {
   const name = ROLE_NAMES[role.role];
   const id = `try-role-${role.role}`;
   const fitsKey = `${role.role}:fits`;
@@ -117,35 +170,50 @@ export function renderRole(role: RoleResult, result: DesignResult, view: ViewSta
         ? `BOM part: ${role.bom}.`
         : `Best fit: ${role.chosen}.`;
 
-  const out = [
-    `<section class="try-role" id="${id}" aria-labelledby="${id}-h">`,
-    `<h3 id="${id}-h">${escapeHtml(name)} <span class="try-kind">${escapeHtml(kinds)}</span></h3>`,
-    `<p class="try-role-label">${escapeHtml(role.label)}</p>`,
-    `<p class="try-role-count"><strong>${role.fits.length}</strong> of ${total} fit. ${escapeHtml(chosen)}</p>`,
-    diagram(role, result),
+  const children: Piece[] = [
+    { key: "h", html: `<h3 id="${id}-h">${escapeHtml(name)} <span class="try-kind">${escapeHtml(kinds)}</span></h3>` },
+    { key: "label", html: `<p class="try-role-label">${escapeHtml(role.label)}</p>` },
+    {
+      key: "count",
+      html: `<p class="try-role-count"><strong>${role.fits.length}</strong> of ${total} fit. ${escapeHtml(chosen)}</p>`,
+    },
   ];
+  const figure = diagram(role, result);
+  if (figure !== "") children.push({ key: "diagram", html: figure });
   if (role.fits.length > 0) {
-    out.push(
+    children.push(
       listTable(
+        `${id}-fits`,
         `${name}: shortlist, best first`,
         ["rank", "part", "verdict", "closest"],
         fits.map((p, i) => fitRow(p, i + 1, role)),
       ),
     );
-    out.push(moreButton(fitsKey, fits.length, role.fits.length, allFits, "fits"));
+    const more = moreButton(fitsKey, fits.length, role.fits.length, allFits, "fits");
+    if (more !== "") children.push({ key: fitsKey, html: more });
   }
   if (role.rejected.length > 0) {
-    out.push(
+    children.push(
       listTable(
+        `${id}-rejected`,
         `${name}: rejected, with reasons`,
         ["part", "verdict", "why"],
         rejected.map((p) => rejectedRow(p, role)),
       ),
     );
-    out.push(moreButton(rejectedKey, rejected.length, role.rejected.length, allRejected, "rejected parts"));
+    const more = moreButton(rejectedKey, rejected.length, role.rejected.length, allRejected, "rejected parts");
+    if (more !== "") children.push({ key: rejectedKey, html: more });
   }
-  out.push(`</section>`);
-  return out.join("");
+  return {
+    key: `role-${role.role}`,
+    open: `<section class="try-role" id="${id}" aria-labelledby="${id}-h">`,
+    close: "</section>",
+    children,
+  };
+}
+
+export function renderRole(role: RoleResult, result: DesignResult, view: ViewState): string {
+  return pieceHtml(rolePiece(role, result, view));
 }
 
 /** One sentence on whether the design holds (SPEC §10's exit-0 condition), worded as on the design pages. */
@@ -159,29 +227,24 @@ export function holdsLine(result: DesignResult): { holds: boolean; line: string 
   return { holds: summary.ok && summary.holds, line: summary.line };
 }
 
-/** One independently updated piece of the results: a role, the budget, the derived values … */
-export type ResultBlock = { key: string; html: string };
-
-/** Everything below the form for one evaluation, block by block, in page order. */
-export function renderBlocks(result: DesignResult, view: ViewState): ResultBlock[] {
+/** Everything below the form for one evaluation, in page order; blocks with nothing to say are left out. */
+export function resultPieces(result: DesignResult, view: ViewState): Piece[] {
   const notes =
     result.notes.length > 0
       ? `<ul class="try-notes">${result.notes.map((n) => `<li>${escapeHtml(n)}</li>`).join("")}</ul>`
       : "";
-  return [
-    {
-      key: "derived",
-      html: `<section class="try-block" aria-labelledby="try-derived-h"><h3 id="try-derived-h">Derived values</h3>${renderDerived(result)}</section>`,
-    },
+  const blocks = [
     { key: "comparison", html: renderComparison(result) },
     { key: "budget", html: renderBudget(result) },
     { key: "notes", html: notes },
-    ...result.roles.map((role) => ({ key: `role-${role.role}`, html: renderRole(role, result, view) })),
+  ];
+  return [
+    derivedPiece(result),
+    ...blocks.filter((b) => b.html !== ""),
+    ...result.roles.map((role) => rolePiece(role, result, view)),
   ];
 }
 
 export function renderResults(result: DesignResult, view: ViewState): string {
-  return renderBlocks(result, view)
-    .map((b) => b.html)
-    .join("");
+  return resultPieces(result, view).map(pieceHtml).join("");
 }

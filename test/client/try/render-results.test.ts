@@ -5,7 +5,14 @@ import type { DesignResult } from "../../../src/core/engine/result.ts";
 import { loadCatalogue } from "../../../src/node/load-data.ts";
 import { DEFAULT_DRAFT } from "../../../src/client/try/defaults.ts";
 import { checkDraft } from "../../../src/client/try/draft.ts";
-import { FIRST_ROWS, holdsLine, renderResults, renderRole } from "../../../src/client/try/render-results.ts";
+import { pieceHtml, type Piece } from "../../../src/client/try/pieces.ts";
+import {
+  FIRST_ROWS,
+  holdsLine,
+  renderResults,
+  renderRole,
+  resultPieces,
+} from "../../../src/client/try/render-results.ts";
 
 const { catalogue } = loadCatalogue("data");
 
@@ -120,5 +127,31 @@ describe("holdsLine", () => {
     const result = holdsLine(evaluate({ ...DEFAULT_DRAFT, ...change }));
     expect(result.holds).toBe(holds);
     expect(result.line).toMatch(line);
+  });
+});
+
+describe("resultPieces", () => {
+  // The page keeps one element per piece and finds it again by key (src/client/try/render.ts).
+  const result = evaluate({ ...DEFAULT_DRAFT, topology: "all" });
+  const everything = {
+    expanded: new Set(result.roles.flatMap((r) => [`${r.role}:fits`, `${r.role}:rejected`])),
+  };
+  const problems = (pieces: readonly Piece[], path: string): string[] => {
+    const keys = pieces.map((p) => p.key);
+    const repeated = keys.filter((k, i) => keys.indexOf(k) !== i).map((k) => `${path}: key '${k}' repeats`);
+    const notOneElement = pieces
+      .filter((p) => !/^<([a-z][a-z0-9]*)[\s>][\s\S]*<\/\1>$/.test(pieceHtml(p)))
+      .map((p) => `${path}/${p.key}: not one element`);
+    const inside = pieces.flatMap((p) => ("children" in p ? problems(p.children, `${path}/${p.key}`) : []));
+    return [...repeated, ...notOneElement, ...inside];
+  };
+
+  it.each([
+    ["the first rows", closed],
+    ["every list open", everything],
+  ])("keys each piece uniquely among its siblings and makes it one element, with %s", (_label, view) => {
+    const pieces = resultPieces(result, view);
+    expect(pieces.length).toBeGreaterThan(result.roles.length);
+    expect(problems(pieces, "")).toEqual([]);
   });
 });
