@@ -70,11 +70,16 @@ export function showParsed(doc: Document, field: Field, text: string): void {
   if (out.textContent !== shown) out.textContent = shown;
 }
 
+/** Form-wide lists (one per form) whose form shows no problem right now. */
+const clearForms = new WeakSet<HTMLElement>();
+
 /**
  * Shows each problem beside the field its JSON path names; problems that name
  * no field (or a hidden one) go to the form-wide list. Returns how many.
  */
 export function showProblems(doc: Document, problems: readonly Problem[], formList: HTMLElement): number {
+  // Most edits leave a valid form valid; then there is nothing to clear, and every field need not be visited.
+  if (problems.length === 0 && clearForms.has(formList)) return 0;
   const byField = new Map<string, string[]>();
   const loose: string[] = [];
   for (const p of problems) {
@@ -104,6 +109,8 @@ export function showProblems(doc: Document, problems: readonly Problem[], formLi
     }),
   );
   formList.hidden = loose.length === 0;
+  if (problems.length === 0) clearForms.add(formList);
+  else clearForms.delete(formList);
   return problems.length;
 }
 

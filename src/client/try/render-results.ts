@@ -139,7 +139,7 @@ function listTable(id: string, caption: string, head: (keyof typeof COLUMNS)[], 
 
 function diagram(role: RoleResult, result: DesignResult): string {
   if (role.stage.stage === "diode" || role.chosen === undefined) return "";
-  const pick = [...role.fits, ...role.rejected].find((p) => p.part.id === role.chosen);
+  const pick = role.resultOf(role.chosen);
   if (!pick || pick.part.kind === "diode") return "";
   const svg = renderRailDiagram({
     part: pick.part,

@@ -52,7 +52,8 @@ function drawChildren(parent: Element, pieces: readonly Piece[], jobs: Job[]): v
       if (el !== undefined) parent.insertBefore(el, cursor);
     }
     spare?.delete(piece.key);
-    if (el !== undefined && el.localName !== tagOf(source)) {
+    const changed = el === undefined || drawn.get(el)?.source !== source;
+    if (el !== undefined && changed && el.localName !== tagOf(source)) {
       el.remove();
       el = undefined;
     }
@@ -62,7 +63,7 @@ function drawChildren(parent: Element, pieces: readonly Piece[], jobs: Job[]): v
       jobs.push({ piece, html: pieceHtml(piece), slot });
       continue;
     }
-    if (drawn.get(el)?.source !== source) {
+    if (changed) {
       jobs.push({ piece, html: "html" in piece ? piece.html : `${piece.open}${piece.close}`, el });
     }
     if (!("html" in piece)) drawChildren(el, piece.children, jobs);
