@@ -25,23 +25,28 @@ function percentile(sorted: readonly number[], p: number): number {
   return sorted[Math.max(0, Math.ceil(p * sorted.length) - 1)] ?? NaN;
 }
 
-/** Builds the site for `dataDir`, opens its try page and times `edits` edits of V+. */
-export async function measureTryPage(opts: {
-  dataDir: string;
-  edits: number;
-  browser?: Browser;
-}): Promise<TryPageTiming> {
+/** Which site to time: one built here from a data folder, or one already built (base "/"). */
+export type TryPageSite = { dataDir: string; siteDir?: never } | { siteDir: string; dataDir?: never };
+
+/** Opens the try page of the site and times `edits` edits of V+ after a few warm-up edits. */
+export async function measureTryPage(opts: TryPageSite & { edits: number; browser?: Browser }): Promise<TryPageTiming> {
   const work = mkdtempSync(join(tmpdir(), "railsieve-bench-site-"));
   let browser = opts.browser;
   const own = browser === undefined;
   try {
-    await buildSite({ dataDir: resolve(opts.dataDir), outDir: join(work, "site"), base: "/" });
+    let siteDir: string;
+    if (opts.dataDir !== undefined) {
+      siteDir = join(work, "site");
+      await buildSite({ dataDir: resolve(opts.dataDir), outDir: siteDir, base: "/" });
+    } else {
+      siteDir = opts.siteDir;
+    }
     if (!browser) {
       const chromium = findChromium();
       if (!chromium) throw new Error(`bench: no Chromium; install it with: ${INSTALL_HINT}`);
       browser = await launchChromium(chromium);
     }
-    const server = await serveFolder(join(work, "site"), "/");
+    const server = await serveFolder(siteDir, "/");
     const page = await browser.newPage();
     try {
       await page.goto(`${server.home}try/`);
