@@ -2,7 +2,7 @@
 // severities and relative margins: a part becomes a result object only when a
 // page or report reads the list it is in, and each list is sorted on first read.
 import type { Part } from "../catalogue.ts";
-import { idOrder, majorKey, partResult, type PartResult } from "./evaluate-part.ts";
+import { idOrder, partResult, type PartResult } from "./evaluate-part.ts";
 import type { RoleContext, Rule } from "./types.ts";
 import { severity } from "./verdict.ts";
 
@@ -27,6 +27,7 @@ export class RoleRanking {
   readonly #ctx: RoleContext;
   readonly #parts: readonly Part[];
   readonly #severity: Uint8Array;
+  readonly #majorKey: Uint16Array;
   readonly #relative: Float64Array;
   readonly #bom: string | undefined;
   #fits: PartResult[] | undefined;
@@ -37,6 +38,8 @@ export class RoleRanking {
     ctx: RoleContext,
     parts: readonly Part[],
     severities: Uint8Array,
+    /** majorKey of each part, worked out while the engine had the part at hand. */
+    majorKeys: Uint16Array,
     relative: Float64Array,
     bom: string | undefined,
   ) {
@@ -44,6 +47,7 @@ export class RoleRanking {
     this.#ctx = ctx;
     this.#parts = parts;
     this.#severity = severities;
+    this.#majorKey = majorKeys;
     this.#relative = relative;
     this.#bom = bom;
   }
@@ -111,7 +115,7 @@ export class RoleRanking {
   }
 
   #major(i: number): number {
-    return majorKey(this.#severity[i] as number, this.#parts[i] as Part);
+    return this.#majorKey[i] as number;
   }
 
   #ranked(fit: boolean): PartResult[] {
@@ -120,9 +124,7 @@ export class RoleRanking {
     const relative = this.#relative;
     const chosen: number[] = [];
     for (let i = 0; i < parts.length; i++) if ((severities[i] as number) <= LAST_FIT === fit) chosen.push(i);
-    // Keys once per part, not once per comparison.
-    const major = new Float64Array(parts.length);
-    for (const i of chosen) major[i] = this.#major(i);
+    const major = this.#majorKey;
     const byPosition = isInIdOrder(parts);
     chosen.sort(
       (i, j) =>

@@ -2,7 +2,7 @@
 import type { Part, PartKind } from "../catalogue.ts";
 import type { Design, Role } from "../schemas/design.ts";
 import { RULES_BY_ID, type RuleId } from "../../../rules/index.ts";
-import { partsWithGaps, scorePart } from "./evaluate-part.ts";
+import { majorKey, partsWithGaps, scorePart } from "./evaluate-part.ts";
 import { RoleRanking } from "./ranking.ts";
 import type { RoleResult } from "./result.ts";
 import type { Rails, RoleContext, Rule, Stage } from "./types.ts";
@@ -40,12 +40,16 @@ export function runRole(
   const ctx: RoleContext = { role, stage, design, policy: design.policy, rails };
   const n = candidates.length;
   const severities = new Uint8Array(n);
+  const majorKeys = new Uint16Array(n);
   const relative = new Float64Array(n);
   const gaps = partsWithGaps(candidates);
   for (let i = 0; i < n; i++) {
-    severities[i] = scorePart(rules, ctx, candidates[i] as Part, gaps[i] === 1, relative, i);
+    const part = candidates[i] as Part;
+    const severity = scorePart(rules, ctx, part, gaps[i] === 1, relative, i);
+    severities[i] = severity;
+    majorKeys[i] = majorKey(severity, part);
   }
-  const ranking = new RoleRanking(rules, ctx, candidates, severities, relative, bom);
+  const ranking = new RoleRanking(rules, ctx, candidates, severities, majorKeys, relative, bom);
   const chosen = bom ?? ranking.bestFit();
   return {
     role,

@@ -3,7 +3,7 @@
 // margin (largest first), then id.
 import { describe, expect, it } from "vitest";
 import type { Part } from "../../../src/core/catalogue.ts";
-import { compareResults } from "../../../src/core/engine/evaluate-part.ts";
+import { compareResults, majorKey } from "../../../src/core/engine/evaluate-part.ts";
 import { RoleRanking } from "../../../src/core/engine/ranking.ts";
 import type { Verdict } from "../../../src/core/engine/types.ts";
 import { severity } from "../../../src/core/engine/verdict.ts";
@@ -32,8 +32,9 @@ const rules = [RULES_BY_ID.get("offset")!];
 function ranking(rows: readonly Row[], bom?: string): RoleRanking {
   const parts: Part[] = rows.map((r) => opAmp({ id: r.id, status: r.status ?? "listed", cost_band: r.cost_band ?? 1 }));
   const severities = Uint8Array.from(rows, (r) => severity(r.verdict));
+  const majorKeys = Uint16Array.from(parts, (p, i) => majorKey(severities[i]!, p));
   const relative = Float64Array.from(rows, (r) => r.relative ?? 0);
-  return new RoleRanking(rules, ctx, parts, severities, relative, bom);
+  return new RoleRanking(rules, ctx, parts, severities, majorKeys, relative, bom);
 }
 
 const FITS = ["oa-stocked-1c", "oa-stocked-1a", "oa-stocked-1b", "oa-stocked-2", "oa-listed", "oa-marginal"];
