@@ -48,7 +48,12 @@ export function measureEngine(
 ): EngineRow[] {
   const subjects = sizes.map((n) => subject(base, designs, n));
   // Warm up on every size so the optimising compiler has seen them all.
-  for (const s of subjects) for (let i = 0; i < 3; i++) (s.engine(), s.bare());
+  for (const s of subjects) {
+    for (let i = 0; i < 3; i++) {
+      s.engine();
+      s.bare();
+    }
+  }
   const times = subjects.map(() => ({
     engine: [] as number[],
     bare: [] as number[],

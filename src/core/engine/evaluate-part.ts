@@ -155,11 +155,23 @@ export function partVerdict(findings: readonly Finding[], policy: Policy): Verdi
   return v === "unrated" && policy.allow_unrated ? "marginal" : v;
 }
 
-const STATUS_ORDER: Record<string, number> = { stocked: 0, approved: 1, listed: 2 };
+/** stocked, approved, listed, then anything else; a switch, as it runs for every candidate. */
+function statusOrder(status: string): number {
+  switch (status) {
+    case "stocked":
+      return 0;
+    case "approved":
+      return 1;
+    case "listed":
+      return 2;
+    default:
+      return 3;
+  }
+}
 
 /** Verdict, status and cost band (unrated cost last) folded into one integer, smallest first. */
 export function majorKey(severityOfPart: number, part: Part): number {
-  return severityOfPart * 64 + (STATUS_ORDER[part.status] ?? 3) * 8 + (part.cost_band ?? 6);
+  return severityOfPart * 64 + statusOrder(part.status) * 8 + (part.cost_band ?? 6);
 }
 
 export function idOrder(a: Part, b: Part): number {

@@ -31,6 +31,9 @@ export class RoleRanking {
   readonly #relative: Float64Array;
   readonly #bom: string | undefined;
   #fits: PartResult[] | undefined;
+  /** Place in the list of ids looked up so far (−1: not a candidate). */
+  readonly #placeOf = new Map<string, number>();
+  readonly #made = new Map<number, PartResult>();
   #rejected: PartResult[] | undefined;
 
   constructor(
@@ -42,6 +45,8 @@ export class RoleRanking {
     majorKeys: Uint16Array,
     relative: Float64Array,
     bom: string | undefined,
+    /** Place of the BOM part among `parts`, found while scoring (−1: not a candidate). */
+    bomPlace = -1,
   ) {
     this.#rules = rules;
     this.#ctx = ctx;
@@ -50,6 +55,7 @@ export class RoleRanking {
     this.#majorKey = majorKeys;
     this.#relative = relative;
     this.#bom = bom;
+    if (bom !== undefined && bomPlace >= 0) this.#placeOf.set(bom, bomPlace);
   }
 
   get fits(): PartResult[] {
@@ -69,25 +75,35 @@ export class RoleRanking {
     return count;
   }
 
-  /** One part's result without ranking the rest (the lists' own object once they are made). */
+  /**
+   * One part's result without ranking the rest. The engine asks for the BOM part
+   * and the best fit, whose places it already knows; any other id costs one scan.
+   */
   resultOf(id: string): PartResult | undefined {
-    const listed =
-      (this.#fits ?? []).find((p) => p.part.id === id) ?? (this.#rejected ?? []).find((p) => p.part.id === id);
-    if (listed) return listed;
-    const i = this.#parts.findIndex((p) => p.id === id);
+    let i = this.#placeOf.get(id);
+    if (i === undefined) {
+      i = this.#parts.findIndex((p) => p.id === id);
+      this.#placeOf.set(id, i);
+    }
     return i < 0 ? undefined : this.#result(i);
   }
 
+  /** The result object of the part at place i; the lists and resultOf share it. */
   #result(i: number): PartResult {
-    const part = this.#parts[i] as Part;
-    return partResult(
-      this.#rules,
-      this.#ctx,
-      part,
-      part.id === this.#bom,
-      this.#severity[i] as number,
-      this.#relative[i] as number,
-    );
+    let made = this.#made.get(i);
+    if (made === undefined) {
+      const part = this.#parts[i] as Part;
+      made = partResult(
+        this.#rules,
+        this.#ctx,
+        part,
+        part.id === this.#bom,
+        this.#severity[i] as number,
+        this.#relative[i] as number,
+      );
+      this.#made.set(i, made);
+    }
+    return made;
   }
 
   /** Id of the best-ranked fit, found in one pass rather than by sorting. */
@@ -111,7 +127,10 @@ export class RoleRanking {
         bestRelative = relative;
       }
     }
-    return best < 0 ? undefined : (parts[best] as Part).id;
+    if (best < 0) return undefined;
+    const id = (parts[best] as Part).id;
+    this.#placeOf.set(id, best);
+    return id;
   }
 
   #major(i: number): number {

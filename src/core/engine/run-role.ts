@@ -41,15 +41,17 @@ export function runRole(
   const n = candidates.length;
   const severities = new Uint8Array(n);
   const majorKeys = new Uint16Array(n);
+  let bomPlace = -1;
   const relative = new Float64Array(n);
   const gaps = partsWithGaps(candidates);
   for (let i = 0; i < n; i++) {
     const part = candidates[i] as Part;
+    if (bom !== undefined && part.id === bom) bomPlace = i;
     const severity = scorePart(rules, ctx, part, gaps[i] === 1, relative, i);
     severities[i] = severity;
     majorKeys[i] = majorKey(severity, part);
   }
-  const ranking = new RoleRanking(rules, ctx, candidates, severities, majorKeys, relative, bom);
+  const ranking = new RoleRanking(rules, ctx, candidates, severities, majorKeys, relative, bom, bomPlace);
   const chosen = bom ?? ranking.bestFit();
   return {
     role,
