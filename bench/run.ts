@@ -56,7 +56,9 @@ try {
   const demoSite = join(work, "site-demo");
   const largeSite = join(work, "site-large");
   const demoBuild = await timeBuild(demoDir, demoSite);
-  log(`build demo data: ${demoBuild.seconds.toFixed(1)} s, ${demoBuild.pages} pages`);
+  log(
+    `build demo data: ${demoBuild.seconds.toFixed(1)} s, ${demoBuild.pages} pages (${(demoBuild.pages / demoBuild.seconds).toFixed(0)} pages/s)`,
+  );
   const largeBuild = await timeBuild(largeDir, largeSite);
   log(
     `build ${LARGE_PARTS} parts + ${LARGE_DESIGNS} designs: ${largeBuild.seconds.toFixed(1)} s, ${largeBuild.pages} pages (${(largeBuild.pages / largeBuild.seconds).toFixed(0)} pages/s)`,
