@@ -9,6 +9,7 @@ import type { Finding } from "../../core/engine/types.ts";
 import { escapeHtml } from "../../render/escape.ts";
 import { renderRailDiagram } from "../../render/rail-diagram.ts";
 import { renderVerdict } from "../../render/verdict.ts";
+import { closestFinding } from "../../site/deciding.ts";
 import { partUrl } from "../../site/links.ts";
 import { summarizeDesign } from "../../site/design-summary.ts";
 import { derivedGroups } from "../../site/design-view.ts";
@@ -54,22 +55,6 @@ export function derivedPiece(result: DesignResult): Container {
   };
 }
 
-/** The finding closest to failing: the first not-pass one, else the smallest relative margin. */
-function tightest(p: PartResult): Finding | undefined {
-  let best: Finding | undefined;
-  let bestRel = Infinity;
-  for (const f of p.findings) {
-    if (f.verdict !== "pass") return f;
-    if (f.margin === null || f.limit === undefined || !(f.limit > 0)) continue;
-    const rel = f.margin / f.limit;
-    if (rel < bestRel) {
-      bestRel = rel;
-      best = f;
-    }
-  }
-  return best;
-}
-
 function partCell(p: PartResult, role: RoleResult): string {
   const bom = p.bom ? ` <span class="try-badge">BOM</span>` : "";
   const chosen = !p.bom && role.chosen === p.part.id ? ` <span class="try-badge">chosen</span>` : "";
@@ -92,7 +77,7 @@ function row(p: PartResult, cells: Piece[]): Container {
 }
 
 function fitRow(p: PartResult, rank: number, role: RoleResult): Container {
-  const f = tightest(p);
+  const f = closestFinding(p);
   const what = f ? `<ul class="try-reasons">${reason(f)}</ul>` : "";
   return row(p, [
     { key: "rank", html: `<td>${rank}</td>` },
