@@ -1,0 +1,26 @@
+// bench-results.json has exactly the fields of issue 9: nothing missing, nothing extra.
+import { describe, expect, it } from "vitest";
+import { benchResults } from "../../bench/results.ts";
+
+const valid = {
+  engine: [{ parts: 10000, ms_per_design: 13.4, baseline_ms_per_design: 4.36, ratio: 3.08 }],
+  validate_rows_per_s: 158077,
+  build: { demo_s: 2.3, large_s: 13.0, large_pages: 2015 },
+  try_page: { demo_p95_ms: 10.5, large_p95_ms: 16.6 },
+  weight: { try_js_gzip_bytes: 58226, catalogue_json_gzip_bytes: 4915 },
+};
+
+describe("benchResults", () => {
+  it("takes the issue's shape", () => {
+    expect(benchResults.parse(valid)).toEqual(valid);
+  });
+
+  it.each([
+    ["an extra top-level field", { ...valid, memory_mb: 3 }],
+    ["an extra engine field", { ...valid, engine: [{ ...valid.engine[0], ranked_ms_per_design: 25 }] }],
+    ["a missing field", { ...valid, build: { demo_s: 2.3, large_s: 13.0 } }],
+    ["a figure that is not a number", { ...valid, try_page: { demo_p95_ms: NaN, large_p95_ms: 16.6 } }],
+  ])("refuses %s", (_what, results) => {
+    expect(benchResults.safeParse(results).success).toBe(false);
+  });
+});
