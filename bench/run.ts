@@ -16,6 +16,12 @@ import { measureValidation } from "./validate.ts";
 import { tryPageWeight } from "./weight.ts";
 
 const quick = process.argv.includes("--quick");
+// Checked first, so a missing browser costs a line, not a minute of benchmarks.
+const chromium = findChromium();
+if (!chromium) {
+  console.error(`bench: the try-page figures need Chromium; install it with: ${INSTALL_HINT}`);
+  process.exit(1);
+}
 const root = resolve(import.meta.dirname, "..");
 const demoDir = resolve(root, "data");
 const demo = loadDataSet(demoDir);
@@ -64,8 +70,6 @@ try {
     `build ${LARGE_PARTS} parts + ${LARGE_DESIGNS} designs: ${largeBuild.seconds.toFixed(1)} s, ${largeBuild.pages} pages (${(largeBuild.pages / largeBuild.seconds).toFixed(0)} pages/s)`,
   );
 
-  const chromium = findChromium();
-  if (!chromium) throw new Error(`bench: no Chromium for the try-page figures; install it with: ${INSTALL_HINT}`);
   const browser = await launchChromium(chromium);
   const tryDemo = await measureTryPage({ siteDir: demoSite, edits: EDITS, browser });
   log(
