@@ -1,9 +1,9 @@
 // Runs a role's rules on one part and ranks the parts of a role (SPEC §7).
 import type { Part, PartKind } from "../catalogue.ts";
-import type { Policy, Role } from "../schemas/design.ts";
+import type { Policy } from "../schemas/design.ts";
 import { RULES } from "../../../rules/index.ts";
 import { finding, measured } from "./finding.ts";
-import { VERDICTS, type Finding, type RoleContext, type Rule, type Stage, type Verdict } from "./types.ts";
+import { VERDICTS, type Finding, type RoleContext, type Rule, type Verdict } from "./types.ts";
 import { severity, unratedFinding, worst } from "./verdict.ts";
 
 const UNRATED = severity("unrated");
@@ -64,13 +64,6 @@ function missingColumns(rule: Rule, part: Part): string[] {
   return needs.filter((c) => cells[c] === undefined);
 }
 
-function lacksColumn(rule: Rule, part: Part): boolean {
-  const needs = rule.needs[part.kind];
-  if (needs === undefined) return false;
-  for (const c of needs) if ((part as Record<string, unknown>)[c] === undefined) return true;
-  return false;
-}
-
 // Every column some rule needs. Most catalogues fill them all, so whether a
 // part leaves any empty is worked out once per candidate list (parts are
 // immutable), and the per-rule check runs only for the parts that do.
@@ -83,6 +76,7 @@ const NEEDED_COLUMNS: Record<PartKind, readonly string[]> = {
 function neededBy(kind: PartKind): string[] {
   return [...new Set(RULES.flatMap((r) => r.needs[kind] ?? []))];
 }
+
 const gapsByList = new WeakMap<readonly Part[], Uint8Array>();
 
 /** 1 for each part that leaves a column some rule needs empty. */
@@ -118,7 +112,7 @@ export function scorePart(
   const m = scratch;
   for (let r = 0; r < rules.length; r++) {
     const rule = rules[r] as Rule;
-    if (mayLack && lacksColumn(rule, part)) {
+    if (mayLack && missingColumns(rule, part).length > 0) {
       worstSeverity = Math.max(worstSeverity, UNRATED);
       continue;
     }
@@ -127,7 +121,12 @@ export function scorePart(
     if (m.limit !== undefined && m.limit > 0) least = Math.min(least, m.margin / m.limit);
   }
   relative[i] = Number.isFinite(least) ? least : 0;
-  return worstSeverity === UNRATED && ctx.policy.allow_unrated ? MARGINAL : worstSeverity;
+  return allowingUnrated(worstSeverity, ctx.policy);
+}
+
+/** With allow_unrated an unrated part counts as marginal. */
+function allowingUnrated(worstSeverity: number, policy: Policy): number {
+  return worstSeverity === UNRATED && policy.allow_unrated ? MARGINAL : worstSeverity;
 }
 
 /** One part's result, as a role's ranking makes it when read. */
@@ -149,10 +148,9 @@ export function evaluatePart(rules: readonly Rule[], ctx: RoleContext, part: Par
   return partResult(rules, ctx, part, bom, s, relative[0] as number);
 }
 
-/** The worst finding; with allow_unrated an unrated finding counts as marginal. */
+/** The worst finding's verdict, as scorePart folds it; with allow_unrated an unrated finding counts as marginal. */
 export function partVerdict(findings: readonly Finding[], policy: Policy): Verdict {
-  const v = worst(findings.map((f) => f.verdict));
-  return v === "unrated" && policy.allow_unrated ? "marginal" : v;
+  return VERDICTS[allowingUnrated(severity(worst(findings.map((f) => f.verdict))), policy)] ?? "fail";
 }
 
 /** stocked, approved, listed, then anything else; a switch, as it runs for every candidate. */
@@ -194,5 +192,3 @@ export function isFit(v: Verdict): boolean {
 export function isFitResult(r: PartResult | undefined): boolean {
   return r !== undefined && isFit(r.verdict);
 }
-
-export type { Role, Stage };

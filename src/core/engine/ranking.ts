@@ -108,49 +108,32 @@ export class RoleRanking {
 
   /** Id of the best-ranked fit, found in one pass rather than by sorting. */
   bestFit(): string | undefined {
-    const parts = this.#parts;
+    const compare = this.#comparator();
     let best = -1;
-    let bestMajor = Infinity;
-    let bestRelative = 0;
-    for (let i = 0; i < parts.length; i++) {
-      if ((this.#severity[i] as number) > LAST_FIT) continue;
-      const major = this.#major(i);
-      if (major > bestMajor) continue;
-      const relative = this.#relative[i] as number;
-      const better =
-        major < bestMajor ||
-        relative > bestRelative ||
-        (relative === bestRelative && idOrder(parts[i] as Part, parts[best] as Part) < 0);
-      if (better) {
-        best = i;
-        bestMajor = major;
-        bestRelative = relative;
-      }
+    for (let i = 0; i < this.#parts.length; i++) {
+      if ((this.#severity[i] as number) <= LAST_FIT && (best < 0 || compare(i, best) < 0)) best = i;
     }
     if (best < 0) return undefined;
-    const id = (parts[best] as Part).id;
+    const id = (this.#parts[best] as Part).id;
     this.#placeOf.set(id, best);
     return id;
   }
 
-  #major(i: number): number {
-    return this.#majorKey[i] as number;
+  /** compareResults on places in the list: major key, relative margin (largest first), id. */
+  #comparator(): (i: number, j: number) => number {
+    const parts = this.#parts;
+    const major = this.#majorKey;
+    const relative = this.#relative;
+    const byPosition = isInIdOrder(parts);
+    return (i, j) =>
+      (major[i] as number) - (major[j] as number) ||
+      (relative[j] as number) - (relative[i] as number) ||
+      (byPosition ? i - j : idOrder(parts[i] as Part, parts[j] as Part));
   }
 
   #ranked(fit: boolean): PartResult[] {
-    const parts = this.#parts;
-    const severities = this.#severity;
-    const relative = this.#relative;
     const chosen: number[] = [];
-    for (let i = 0; i < parts.length; i++) if ((severities[i] as number) <= LAST_FIT === fit) chosen.push(i);
-    const major = this.#majorKey;
-    const byPosition = isInIdOrder(parts);
-    chosen.sort(
-      (i, j) =>
-        (major[i] as number) - (major[j] as number) ||
-        (relative[j] as number) - (relative[i] as number) ||
-        (byPosition ? i - j : idOrder(parts[i] as Part, parts[j] as Part)),
-    );
-    return chosen.map((i) => this.#result(i));
+    for (let i = 0; i < this.#parts.length; i++) if ((this.#severity[i] as number) <= LAST_FIT === fit) chosen.push(i);
+    return chosen.sort(this.#comparator()).map((i) => this.#result(i));
   }
 }
