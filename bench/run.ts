@@ -8,8 +8,7 @@ import { join, resolve } from "node:path";
 import { loadDataSet } from "../src/node/load-data.ts";
 import { findChromium, INSTALL_HINT, launchChromium } from "../test/e2e/harness/chromium.ts";
 import { measureEngine, type EngineRow } from "./engine.ts";
-import { syntheticCatalogue, syntheticDesigns } from "./generate.ts";
-import { timeBuild, writeDataFolder } from "./site-build.ts";
+import { largeDataSet, timeBuild, writeDataFolder } from "./site-build.ts";
 import { measureTryPage } from "./try-page.ts";
 import { benchResults, type BenchResults } from "./results.ts";
 import { measureValidation } from "./validate.ts";
@@ -29,7 +28,6 @@ const demoDesigns = demo.designs.flatMap((d) => (d.design ? [d.design] : []));
 
 const SIZES = quick ? [300, 1000] : [1_000, 10_000, 100_000];
 const LARGE_PARTS = quick ? 200 : 2_000;
-const LARGE_DESIGNS = 10;
 const VALIDATE_PARTS = quick ? 2_000 : 100_000;
 const EDITS = quick ? 5 : 50;
 
@@ -57,8 +55,8 @@ const work = mkdtempSync(join(tmpdir(), "railsieve-bench-"));
 let results: BenchResults;
 try {
   const largeDir = join(work, "data-large");
-  const largeDesigns = syntheticDesigns(demoDesigns, LARGE_DESIGNS, 1);
-  writeDataFolder(largeDir, syntheticCatalogue(demo.catalogue, LARGE_PARTS, 1), largeDesigns);
+  const large = largeDataSet(demoDir, LARGE_PARTS);
+  writeDataFolder(largeDir, large.catalogue, large.designs);
   const demoSite = join(work, "site-demo");
   const largeSite = join(work, "site-large");
   const demoBuild = await timeBuild(demoDir, demoSite);
@@ -67,7 +65,7 @@ try {
   );
   const largeBuild = await timeBuild(largeDir, largeSite);
   log(
-    `build ${LARGE_PARTS} parts + ${LARGE_DESIGNS} designs: ${largeBuild.seconds.toFixed(1)} s, ${largeBuild.pages} pages (${(largeBuild.pages / largeBuild.seconds).toFixed(0)} pages/s)`,
+    `build ${LARGE_PARTS} parts + ${large.designs.length} designs: ${largeBuild.seconds.toFixed(1)} s, ${largeBuild.pages} pages (${(largeBuild.pages / largeBuild.seconds).toFixed(0)} pages/s)`,
   );
 
   const browser = await launchChromium(chromium);
