@@ -8,41 +8,29 @@ import type { Design } from "../../../src/core/schemas/design.ts";
 import { design, type DeepPartial } from "../../helpers/designs.ts";
 import { comparator, diode, opAmp } from "../../helpers/parts.ts";
 
+// Wide-supply rail-to-rail, twice under two ids, so only the id tells them apart in the ranking.
+const RRIO_12V = {
+  status: "listed",
+  cost_band: 2,
+  supply_min_v: 2.7,
+  supply_max_v: 12,
+  icm_neg_headroom_v: -0.1,
+  icm_pos_headroom_v: -0.1,
+  out_neg_headroom_v: 0.05,
+  out_pos_headroom_v: 0.05,
+  vos_max_mv: 1,
+  ib_max_na: 0.01,
+  gbw_mhz: 10,
+  slew_v_per_us: 5,
+};
+
 const CATALOGUE: Catalogue = catalogueFromParts([
   // Ground-sensing bipolar: to V+ − 1.5 V, 3–32 V.
   opAmp({ id: "oa-gs", status: "stocked", cost_band: 1 }),
   opAmp({ id: "oa-gs-approved", status: "approved", cost_band: 1 }),
   // Wide-supply rail-to-rail: passes everything on ±5 V, with more margin.
-  opAmp({
-    id: "oa-rrio-12v",
-    status: "listed",
-    cost_band: 2,
-    supply_min_v: 2.7,
-    supply_max_v: 12,
-    icm_neg_headroom_v: -0.1,
-    icm_pos_headroom_v: -0.1,
-    out_neg_headroom_v: 0.05,
-    out_pos_headroom_v: 0.05,
-    vos_max_mv: 1,
-    ib_max_na: 0.01,
-    gbw_mhz: 10,
-    slew_v_per_us: 5,
-  }),
-  opAmp({
-    id: "oa-rrio-12v-b",
-    status: "listed",
-    cost_band: 2,
-    supply_min_v: 2.7,
-    supply_max_v: 12,
-    icm_neg_headroom_v: -0.1,
-    icm_pos_headroom_v: -0.1,
-    out_neg_headroom_v: 0.05,
-    out_pos_headroom_v: 0.05,
-    vos_max_mv: 1,
-    ib_max_na: 0.01,
-    gbw_mhz: 10,
-    slew_v_per_us: 5,
-  }),
+  opAmp({ id: "oa-rrio-12v", ...RRIO_12V }),
+  opAmp({ id: "oa-rrio-12v-b", ...RRIO_12V }),
   // Classic split-supply class rated from 10 V.
   opAmp({ id: "oa-classic", status: "stocked", cost_band: 1, supply_min_v: 10, supply_max_v: 36 }),
   opAmp({ id: "oa-decomp", status: "stocked", cost_band: 1, unity_gain_stable: false }),
