@@ -1,6 +1,7 @@
 // CSV report: one row per design, role, part and rule, then the budget terms.
 import { csvLine } from "../core/csv-escape.ts";
 import type { DesignResult } from "../core/engine/result.ts";
+import { reportedFinding } from "./render-json.ts";
 
 const HEADER = [
   "design",
@@ -42,13 +43,7 @@ export function renderCsv(results: DesignResult[]): string {
                 part_verdict: p.verdict,
                 fits,
                 bom: p.bom ? "yes" : "no",
-                rule: f.rule,
-                verdict: f.verdict,
-                needed: f.needed,
-                available: f.available,
-                margin: f.margin,
-                unit: f.unit,
-                reason: f.reason,
+                ...reportedFinding(f),
               }),
             );
           }

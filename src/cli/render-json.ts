@@ -1,22 +1,28 @@
 // The JSON report of SPEC §10.
 import type { PartResult } from "../core/engine/evaluate-part.ts";
 import type { DesignResult } from "../core/engine/result.ts";
+import type { Finding } from "../core/engine/types.ts";
 import { designHolds } from "../core/engine/result.ts";
+
+/** What the JSON and CSV reports say of a finding: its data and sentence, not its steps (that is `explain`). */
+export function reportedFinding(f: Finding) {
+  return {
+    rule: f.rule,
+    verdict: f.verdict,
+    needed: f.needed,
+    available: f.available,
+    margin: f.margin,
+    unit: f.unit,
+    reason: f.reason,
+  };
+}
 
 function partJson(p: PartResult) {
   return {
     part: p.part.id,
     verdict: p.verdict,
     ...(p.bom ? { bom: true } : {}),
-    findings: p.findings.map((f) => ({
-      rule: f.rule,
-      verdict: f.verdict,
-      needed: f.needed,
-      available: f.available,
-      margin: f.margin,
-      unit: f.unit,
-      reason: f.reason,
-    })),
+    findings: p.findings.map(reportedFinding),
   };
 }
 
