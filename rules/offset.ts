@@ -1,7 +1,13 @@
-import type { Part } from "../src/core/catalogue.ts";
-import type { RoleContext } from "../src/core/engine/types.ts";
-import { defineRule, driftSpanC, record, stageAs } from "../src/core/engine/finding.ts";
-import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
+import {
+  defineRule,
+  driftSpanC,
+  record,
+  shareVerdict,
+  spareOrShortSmall,
+  stageAs,
+  type Part,
+  type RoleContext,
+} from "../src/core/rule-kit/index.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
@@ -57,15 +63,9 @@ export const offset = defineRule({
 });
 
 /** The stage and its output offset for one part: measure and describe read the same numbers. */
-function offsetIn({ stage, design }: RoleContext, part: Part) {
+function offsetIn({ stage, design }: RoleContext, part: OpAmp) {
   const s = stageAs(stage, "op-amp", "offset");
-  const o = stageOffset(
-    part as OpAmp,
-    s.vos_multiplier,
-    s.bias_ohm,
-    design.temperature.min_c,
-    design.temperature.max_c,
-  );
+  const o = stageOffset(part, s.vos_multiplier, s.bias_ohm, design.temperature.min_c, design.temperature.max_c);
   return { s, o };
 }
 

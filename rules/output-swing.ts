@@ -1,6 +1,15 @@
-import { defineRule, railPhrase, rangeMargin, volts, record, stageAs } from "../src/core/engine/finding.ts";
-import type { Rails, Range } from "../src/core/engine/types.ts";
-import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
+import {
+  defineRule,
+  railPhrase,
+  rangeMargin,
+  record,
+  spareOrShort,
+  stageAs,
+  voltageVerdict,
+  volts,
+  type Rails,
+  type Range,
+} from "../src/core/rule-kit/index.ts";
 import { formatVolts } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
@@ -16,12 +25,12 @@ export const outputSwing = defineRule({
   needs: { "op-amp": ["out_neg_headroom_v", "out_pos_headroom_v"] },
   measure({ rails, stage, policy }, part, out) {
     const s = stageAs(stage, "op-amp", "output-swing");
-    const m = rangeMargin(s.output, outputReach(part as OpAmp, rails));
+    const m = rangeMargin(s.output, outputReach(part, rails));
     const limit = Math.max(Math.abs(m.needed), policy.headroom_margin_v);
     record(out, voltageVerdict(m.margin, policy), m.needed, m.reached, m.margin, limit);
   },
   describe({ needed, available, margin }, { rails, stage }, part) {
-    const p = part as OpAmp;
+    const p = part;
     const s = stageAs(stage, "op-amp", "output-swing");
     const reach = outputReach(p, rails);
     const side = rangeMargin(s.output, reach).side;
