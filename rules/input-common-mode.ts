@@ -23,7 +23,7 @@ export const inputCommonMode = defineRule({
   unit: "V",
   checks: "The inputs stay inside the part's common-mode range over the whole signal window.",
   formula:
-    "low = V− + icm_neg_headroom_v, high = V+ − icm_pos_headroom_v; margin = min(needed low − low, high − needed high); needed is ±W for rectify-and-sign, b ± a·peak for the offset-to-mid-rail level shifter and V_ref for its reference buffer",
+    "low = V− + icm_neg_headroom_v, high = V+ − icm_pos_headroom_v; margin = min(needed low − low, high − needed high); needed is ±W for a follower after the divider, b ± a·peak for a level shifter and V_ref for the reference buffer of its network",
   source: "Datasheet input common-mode range, read inward from each rail (common practice).",
   policy: "headroom_margin_v",
   kinds: ["op-amp", "comparator"],

@@ -5,7 +5,6 @@ import {
   shareVerdict,
   spareOrShortSmall,
   stageAs,
-  type Part,
   type RoleContext,
 } from "../src/core/rule-kit/index.ts";
 import { formatSI } from "../src/core/units.ts";
@@ -27,7 +26,7 @@ export const offset = defineRule({
   checks:
     "Input offset voltage and bias current through the source resistance stay inside this stage's share of the accuracy.",
   formula:
-    "buffer: (Vos + Ib·R_th) / k; rectifier: (2·Vos + Ib·R_load) / k; Vos grows by drift × the largest distance of the temperature range from 25 °C; limit = offset_share · required_v; offset-to-mid-rail level shifter: (Vos + Ib·(R1‖R2‖R3)) / a; its reference buffer: Vos·(G/R2) / a",
+    "buffer: (Vos + Ib·R_th) / k; rectifier: (2·Vos + Ib·R_load) / k; Vos grows by drift × the largest distance of the temperature range from 25 °C; limit = offset_share · required_v; level shifter: (Vos + Ib·(R1‖R2‖R3)) / a; reference buffer of the level-shift network: Vos·(G/R2) / a",
   source:
     "V_err = V_OS + I_B·R_S (op-amp error analysis, e.g. Fiore, Operational Amplifiers & Linear Integrated Circuits, ch. 5).",
   policy: "offset_share",

@@ -18,7 +18,7 @@ export const outputSwing = defineRule({
   unit: "V",
   checks: "The output reaches both ends of what the stage must drive, at these rails.",
   formula:
-    "low = V− + out_neg_headroom_v, high = V+ − out_pos_headroom_v; buffer margin = min(−W − low, high − W); rectifier margin = min(−Vf − low, high − (W + Vf)); offset-to-mid-rail level shifter (V− = 0 V): needs b − a·peak … b + a·peak, its reference buffer V_ref",
+    "low = V− + out_neg_headroom_v, high = V+ − out_pos_headroom_v; buffer margin = min(−W − low, high − W); rectifier margin = min(−Vf − low, high − (W + Vf)); level shifter on one rail (V− = 0 V): needs b − a·peak … b + a·peak, the reference buffer of its network V_ref",
   source: "Datasheet output swing at the rated load, read inward from each rail (common practice).",
   policy: "headroom_margin_v",
   kinds: ["op-amp"],

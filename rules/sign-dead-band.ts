@@ -1,6 +1,5 @@
 import { defineRule, record, shareVerdict, spareOrShortSmall, type Stage } from "../src/core/rule-kit/index.ts";
 import { formatSI } from "../src/core/units.ts";
-import type { Comparator } from "../src/core/schemas/comparator.ts";
 
 export const signDeadBand = defineRule({
   id: "sign-dead-band",

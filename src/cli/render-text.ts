@@ -2,7 +2,7 @@
 import type { PartResult } from "../core/engine/evaluate-part.ts";
 import type { DesignResult, RoleResult } from "../core/engine/result.ts";
 import type { Verdict } from "../core/engine/types.ts";
-import { formatSI, formatVolts } from "../core/units.ts";
+import { formatSI } from "../core/units.ts";
 import { paint, type Io } from "./io.ts";
 import { shortfalls } from "./summary.ts";
 import { wrap } from "./wrap.ts";

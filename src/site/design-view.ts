@@ -17,7 +17,6 @@ const given = (value: number, unit: string) => trimZeros(formatSI(value, unit, {
 const celsius = (c: number) => `${String(c).replace("-", "\u2212")}\u00a0°C`;
 const signed = (v: number) => formatVolts(v, { signed: true });
 const percent = (fraction: number) => `${Number((fraction * 100).toPrecision(3))} %`;
-const ratio = (k: number) => String(Number(k.toPrecision(4)));
 
 export const HIGH_VOLTAGE_V = 30;
 

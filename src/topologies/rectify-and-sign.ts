@@ -17,7 +17,7 @@ import { supplyRange } from "../../rules/supply-range.ts";
 import { zeroCrossing } from "../../rules/zero-crossing.ts";
 import type { BudgetTerm, Conversion, RoleTerm } from "../core/engine/budget.ts";
 import { isFitResult } from "../core/engine/evaluate-part.ts";
-import type { Derived, DesignResult, DiodeUse, DisplayGroup, DisplayRow, RoleResult } from "../core/engine/result.ts";
+import type { Derived, DiodeUse, DisplayGroup, DisplayRow, RoleResult } from "../core/engine/result.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import { pumpRail } from "../core/math/charge-pump.ts";
 import { forwardVoltage } from "../core/math/diode.ts";

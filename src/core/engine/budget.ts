@@ -98,7 +98,7 @@ export function buildBudget(
 /** Firmware conversion: input volts = (code + 0.5) · volts_per_code − offset_v, then the sign. */
 export type Conversion = {
   volts_per_code: number;
-  /** Input volts subtracted after scaling (0 for rectify-and-sign). */
+  /** Input volts subtracted after scaling (0 when the sign comes from a comparator). */
   offset_v: number;
   /** The reading formula with this design's numbers. */
   formula: string;

@@ -59,7 +59,7 @@ export type Derived = {
   adc_step_at_input_v: number;
   rectifier_diode?: DiodeUse;
   clamp_diode?: DiodeUse;
-  /** offset-to-mid-rail only: the Millman network and the output span it gives. */
+  /** Level-shift front ends only: the Millman network and the output span it gives. */
   level_shift?: LevelShiftNetwork & { output_low_v: number; output_high_v: number };
 };
 
