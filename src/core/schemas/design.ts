@@ -2,6 +2,7 @@
 // "100k") is accepted wherever a number is. DesignInput is what a user writes,
 // Design the cleaned value with policy defaults filled in.
 import { z } from "zod";
+import { firstUnsafe, unsafeTextMessage } from "../text-safety.ts";
 import { ID_PATTERN } from "./cells.ts";
 import { closest } from "../problems.ts";
 import { parseSI } from "../units.ts";
@@ -149,7 +150,12 @@ function stripUndefined<T extends object>(o: T): Partial<T> {
 
 const text = (what: string, max: number) =>
   z.unknown().transform((value, ctx): string => {
-    if (typeof value === "string" && value.trim() !== "" && value.length <= max) return value;
+    if (typeof value === "string" && value.trim() !== "" && value.length <= max) {
+      const unsafe = firstUnsafe(value);
+      if (unsafe === undefined) return value;
+      ctx.addIssue({ code: "custom", message: `not a valid ${what}: ${unsafeTextMessage(unsafe)}` });
+      return z.NEVER;
+    }
     ctx.addIssue({
       code: "custom",
       message: `not a valid ${what} (got ${shown(value)}, expected text of 1 to ${max} characters)`,
@@ -232,6 +238,13 @@ export const designSchema = z
       issue(
         ["front_end", "window_v"],
         `window is wider than the ADC range (got ${d.front_end.window_v} V, expected at most adc.reference_v ${d.adc.reference_v} V)`,
+      );
+    }
+    // The converter runs from the positive rail; a reference above it would put full scale out of reach.
+    if (d.adc.reference_v > d.supply.positive_v) {
+      issue(
+        ["adc", "reference_v"],
+        `ADC reference is above the positive rail (got ${d.adc.reference_v} V, expected at most supply.positive_v ${d.supply.positive_v} V)`,
       );
     }
     if (d.logic.vil_v >= d.logic.vih_v) {
