@@ -31,6 +31,7 @@ describe("parseDesignValue", () => {
       speed_share: 0.25,
       sign_share: 0.5,
       timing_fraction: 0.01,
+      timing_share: 0.25, // issue 16: a stage's timing error (dead time, late sign) against required_v
       allow_unrated: false,
     });
   });

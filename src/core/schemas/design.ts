@@ -98,6 +98,7 @@ export const POLICY_DEFAULTS = {
   speed_share: 0.25,
   sign_share: 0.5,
   timing_fraction: 0.01,
+  timing_share: 0.25,
   allow_unrated: false,
 } as const;
 
@@ -108,6 +109,8 @@ const chargePump = z.strictObject({
   flying_cap_f: si({ above: 0 }),
   reservoir_cap_f: si({ above: 0 }),
   load_a: si({ min: 0 }),
+  // Optional (issue 16): output resistance of the pin that drives the pump.
+  drive_ohm: si({ min: 0, max: 1e6 }).optional(),
 });
 
 const negativeSupply = z
@@ -137,6 +140,7 @@ const policy = z
     speed_share: si({ above: 0, max: 1 }).optional(),
     sign_share: si({ above: 0, max: 1 }).optional(),
     timing_fraction: si({ above: 0, max: 1 }).optional(),
+    timing_share: si({ above: 0, max: 1 }).optional(),
     allow_unrated: z
       .boolean({ error: (i) => `not true or false (got ${shown(i.input)}, expected true or false)` })
       .optional(),
@@ -220,6 +224,8 @@ export const designSchema = z
       vil_v: si({ min: 0 }),
       level_shift: oneOf(LEVEL_SHIFTS),
       pull_down_ohm: si({ above: 0 }),
+      // Optional (issue 16): the lowest level the logic input tolerates; −0.3 V when absent.
+      pin_min_v: si({ min: -100, max: 0 }).optional(),
     }),
     accuracy: z.strictObject({ required_v: si({ above: 0 }) }),
     temperature: z.strictObject({ min_c: si({ min: -273.15 }), max_c: si({ max: 500 }) }),
