@@ -33,8 +33,8 @@ const TOP = 8;
 const TABLE_ROWS = 16;
 
 export function renderSimulationFigure(p: SimulationPicture): string {
-  const titleId = `${p.id}-title`;
-  const descId = `${p.id}-desc`;
+  const titleId = escapeHtml(`${p.id}-title`);
+  const descId = escapeHtml(`${p.id}-desc`);
   const n = p.time.length;
   const t0 = n > 0 ? (p.time[0] ?? 0) : 0;
   const t1 = n > 0 ? (p.time[n - 1] ?? 1) : 1;
