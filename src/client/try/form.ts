@@ -4,7 +4,7 @@
 // the BOM lists once the catalogue has arrived. Text goes in via textContent.
 import type { Part } from "../../core/catalogue.ts";
 import type { Problem } from "../../core/problems.ts";
-import { parseSI, formatSI } from "../../core/units.ts";
+import { parseSI, formatSI, formatPercent } from "../../core/units.ts";
 import { kindWords } from "../../core/kinds.ts";
 import { engine } from "../../engine.ts";
 import { applies, FIELDS, messageId, parsedId, type Draft, type Field } from "./fields.ts";
@@ -63,7 +63,7 @@ export function showParsed(doc: Document, field: Field, text: string): void {
   let shown = "";
   // A plain "5" needs no echo; "4.7u", "2e3" and fractions (shown as a percentage) do.
   if (parsed?.ok) {
-    if (field.unit === "fraction") shown = `= ${formatSI(parsed.value * 100, "%", { digits: 3 })}`;
+    if (field.unit === "fraction") shown = `= ${formatPercent(parsed.value)}`;
     else if (field.style === "si" && /[^\d.+-]/.test(text.trim())) shown = `= ${formatSI(parsed.value, field.unit)}`;
   }
   if (out.textContent !== shown) out.textContent = shown;
