@@ -48,7 +48,11 @@ export type ClampCheck =
  * `margin` is volts (rating − difference) except for "limited", where it is
  * amps (CLAMP_CURRENT_MAX_A − current).
  */
-export function checkClamp(differenceV: number, vdiffMaxV: number | undefined, seriesOhm: number | undefined): ClampCheck {
+export function checkClamp(
+  differenceV: number,
+  vdiffMaxV: number | undefined,
+  seriesOhm: number | undefined,
+): ClampCheck {
   if (vdiffMaxV === undefined) {
     return differenceV <= CLAMP_SAFE_V
       ? { case: "below-floor", margin: CLAMP_SAFE_V - differenceV }

@@ -16,7 +16,13 @@ export function riseTime1090(ohm: number, farad: number): number {
  * Time for an RC edge from `startV` towards `finalV` to reach `thresholdV`:
  * 0 when it starts at or past the threshold, Infinity when the edge never gets there.
  */
-export function timeToThreshold(ohm: number, farad: number, startV: number, finalV: number, thresholdV: number): number {
+export function timeToThreshold(
+  ohm: number,
+  farad: number,
+  startV: number,
+  finalV: number,
+  thresholdV: number,
+): number {
   const step = finalV - startV;
   const left = finalV - thresholdV;
   if (step === 0 || (thresholdV - startV) / step <= 0) return 0;
