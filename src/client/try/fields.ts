@@ -132,6 +132,11 @@ export const FIELDS: readonly Field[] = [
   num("supply.negative.flying_cap_f", "supply", "Flying capacitor", "F", { when: isPump }),
   num("supply.negative.reservoir_cap_f", "supply", "Reservoir capacitor", "F", { when: isPump }),
   num("supply.negative.load_a", "supply", "Load on V−", "A", { when: isPump }),
+  num("supply.negative.drive_ohm", "supply", "Drive pin output resistance", "Ω", {
+    when: isPump,
+    optional: true,
+    hint: "optional; empty counts none",
+  }),
 
   num("signal.peak_v", "signal", "Peak signal (±)", "V"),
   num("signal.max_frequency_hz", "signal", "Highest signal frequency", "Hz"),
@@ -165,6 +170,11 @@ export const FIELDS: readonly Field[] = [
     choices: LEVEL_SHIFTS.map((s) => ({ value: s, label: s })),
   },
   num("logic.pull_down_ohm", "logic", "Pull-down resistor", "Ω"),
+  num("logic.pin_min_v", "logic", "Lowest level the logic input tolerates", "V", {
+    ...plain,
+    optional: true,
+    hint: "optional; empty is −0.3 V",
+  }),
   num("logic.pull_up_ohm", "logic", "Pull-up resistor", "Ω", { optional: true, when: pulledUp }),
   num("logic.pin_cap_f", "logic", "Logic pin capacitance", "F", { optional: true, placeholder: "10p" }),
   num("logic.npn_base_ohm", "logic", "NPN base resistor", "Ω", { optional: true, when: isNpn }),
@@ -198,7 +208,8 @@ export const FIELDS: readonly Field[] = [
   policyNumber("offset_share", "Offset share of the accuracy", "fraction"),
   policyNumber("speed_share", "Bandwidth-error share of the accuracy", "fraction"),
   policyNumber("sign_share", "Dead-band share of the accuracy", "fraction"),
-  policyNumber("timing_fraction", "Timing share of the signal period", "fraction"),
+  policyNumber("timing_fraction", "Pump-diode recovery share of its half period", "fraction"),
+  policyNumber("timing_share", "Timing-error share of the accuracy (dead time, late sign)", "fraction"),
   {
     path: "policy.allow_unrated",
     group: "policy",
