@@ -48,3 +48,10 @@ export function pullUpEdge(ohm: number, farad: number, startV: number, finalV: n
   const threshold = timeToThreshold(ohm, farad, startV, finalV, thresholdV);
   return { seconds: Math.max(rise, threshold), rise_1090_s: rise, threshold_s: threshold, tau_s: ohm * farad };
 }
+
+/**
+ * Capacitance of a logic input with its trace when the design gives none:
+ * microcontroller inputs are about 5–10 pF and a short trace adds a few
+ * (common practice [M]).
+ */
+export const DEFAULT_PIN_CAP_F = 10e-12;
