@@ -37,6 +37,8 @@ type Base = {
   when?: (draft: Readonly<Record<string, string>>) => boolean;
   /** May be left empty (policy overrides, BOM). */
   optional?: boolean;
+  /** A yes/no choice whose values "true"/"false" go into the file as JSON booleans. */
+  boolean?: true;
 };
 
 export type NumberField = Base & { type: "number"; unit: string; style: NumberStyle; placeholder?: string };
@@ -49,6 +51,8 @@ export type Field = NumberField | TextField | ChoiceField | PartField;
 
 const isPump = (d: Readonly<Record<string, string>>) => d["supply.negative.kind"] === "charge-pump";
 const isFixed = (d: Readonly<Record<string, string>>) => d["supply.negative.kind"] === "fixed";
+const isNpn = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] === "npn-inverter";
+const pulledUp = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] !== "diode-clamp";
 
 /**
  * A role's BOM box shows when the chosen topology has the role (any topology
@@ -157,6 +161,7 @@ export const FIELDS: readonly Field[] = [
     choices: SERIES.map((s) => ({ value: s, label: s })),
   },
   num("front_end.rectifier_load_ohm", "front_end", "Rectifier resistors", "Ω"),
+  num("front_end.sign_series_ohm", "front_end", "Series resistor into the sign input", "Ω", { optional: true }),
 
   num("adc.bits", "adc", "ADC resolution", "bits", plain),
   num("adc.reference_v", "adc", "ADC reference", "V"),
@@ -178,6 +183,29 @@ export const FIELDS: readonly Field[] = [
     optional: true,
     hint: "optional; empty is −0.3 V",
   }),
+  num("logic.pull_up_ohm", "logic", "Pull-up resistor", "Ω", { optional: true, when: pulledUp }),
+  num("logic.pin_cap_f", "logic", "Logic pin capacitance", "F", { optional: true, placeholder: "10p" }),
+  num("logic.npn_base_ohm", "logic", "NPN base resistor", "Ω", { optional: true, when: isNpn }),
+  {
+    path: "logic.npn_base_clamp",
+    group: "logic",
+    label: "NPN base clamp diode",
+    type: "choice",
+    optional: true,
+    boolean: true,
+    when: isNpn,
+    choices: [
+      { value: "", label: "none" },
+      { value: "true", label: "diode across base and emitter" },
+      { value: "false", label: "none (stated)" },
+    ],
+  },
+  num("logic.npn_vebo_v", "logic", "NPN emitter-base rating V_EBO", "V", {
+    optional: true,
+    when: isNpn,
+    placeholder: "5",
+  }),
+  num("logic.npn_storage_s", "logic", "NPN storage time", "s", { optional: true, when: isNpn, placeholder: "300n" }),
 
   num("accuracy.required_v", "accuracy", "Required accuracy (input-referred)", "V"),
   num("temperature.min_c", "accuracy", "Lowest temperature", "°C", plain),
@@ -196,6 +224,7 @@ export const FIELDS: readonly Field[] = [
     label: "Accept unrated parts as marginal",
     type: "choice",
     optional: true,
+    boolean: true,
     choices: [
       { value: "", label: `default (${POLICY_DEFAULTS.allow_unrated ? "yes" : "no"})` },
       { value: "true", label: "yes" },

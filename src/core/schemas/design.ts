@@ -217,6 +217,8 @@ function designObject(names: DesignNames) {
       resistor_tolerance: si({ min: 0, max: 0.2 }),
       series: oneOf(SERIES),
       rectifier_load_ohm: si({ above: 0 }),
+      /** Series resistor into the sign input: limits the current when its input clamps conduct (issue 21). */
+      sign_series_ohm: si({ above: 0 }).optional(),
     }),
     adc: z.strictObject({
       bits: si({ integer: true, min: 1, max: 32 }),
@@ -231,6 +233,21 @@ function designObject(names: DesignNames) {
       pull_down_ohm: si({ above: 0 }),
       // Optional (issue 16): the lowest level the logic input tolerates; −0.3 V when absent.
       pin_min_v: si({ min: -100, max: 0 }).optional(),
+      // Sign-path fields (issue 21), all optional; defaults live in math/rc-edge.ts and math/npn-inverter.ts, marked there.
+      /** Capacitance of the logic pin and its trace (default 10 pF, common practice). */
+      pin_cap_f: si({ above: 0 }).optional(),
+      /** Pull-up of the pull-up level shift and the NPN inverter's collector. */
+      pull_up_ohm: si({ above: 0 }).optional(),
+      /** NPN inverter: resistor from the sign output to the base. */
+      npn_base_ohm: si({ above: 0 }).optional(),
+      /** NPN inverter: a diode across base and emitter that stops a negative output reverse-biasing the base. */
+      npn_base_clamp: z
+        .boolean({ error: (i) => `not true or false (got ${shown(i.input)}, expected true or false)` })
+        .optional(),
+      /** NPN inverter: the transistor's emitter-base reverse rating V_EBO (default 5 V, common practice). */
+      npn_vebo_v: si({ above: 0, max: 100 }).optional(),
+      /** NPN inverter: the transistor's storage time when it leaves saturation (default 300 ns, common practice). */
+      npn_storage_s: si({ min: 0, max: 1 }).optional(),
     }),
     accuracy: z.strictObject({ required_v: si({ above: 0 }) }),
     temperature: z.strictObject({ min_c: si({ min: -273.15 }), max_c: si({ max: 500 }) }),

@@ -118,6 +118,14 @@ describe("draftFromInput / rawFromDraft", () => {
       "policy.timing_fraction",
       "policy.timing_share",
       "policy.allow_unrated",
+      // The optional sign-path fields of issue 21.
+      "front_end.sign_series_ohm",
+      "logic.pull_up_ohm",
+      "logic.pin_cap_f",
+      "logic.npn_base_ohm",
+      "logic.npn_base_clamp",
+      "logic.npn_vebo_v",
+      "logic.npn_storage_s",
       ...[
         "buffer",
         "rectifier",
