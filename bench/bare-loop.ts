@@ -7,6 +7,17 @@
 import type { Catalogue, Part } from "../src/core/catalogue.ts";
 import type { Rails, Stage } from "../src/core/rule-kit/index.ts";
 import { forwardVoltage } from "../src/core/math/diode.ts";
+import { CLAMP_CURRENT_MAX_A, CLAMP_SAFE_V } from "../src/core/math/input-difference.ts";
+import {
+  baseDriveCurrent,
+  baseReverse,
+  NPN_STORAGE_DEFAULT_S,
+  NPN_VEBO_DEFAULT_V,
+  REVERSE_DERATING,
+} from "../src/core/math/npn-inverter.ts";
+import { clampSourceCurrent } from "../src/core/math/output-current.ts";
+import { DEFAULT_PIN_CAP_F, pullUpEdge } from "../src/core/math/rc-edge.ts";
+import { signTimeLimit } from "../rules/sign-path.ts";
 import type { Design } from "../src/core/schemas/design.ts";
 import { ALL_TOPOLOGIES, engine, evaluateDesign } from "../src/engine.ts";
 import type { RuleId } from "../rules/index.ts";
@@ -63,6 +74,9 @@ const COLUMNS = [
   "vr_max_v",
   "trr_ns",
   "if_max_ma",
+  "vdiff_max_v",
+  "overload_recovery_us",
+  "iout_max_ma",
 ] as const;
 
 export function tableOf(parts: readonly Part[]): Table {
@@ -169,6 +183,12 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
   const share = (i: number, m: number, limit: number) => {
     margin[i] = m;
     const s = m < 0 ? FAIL : m < fraction * Math.abs(limit) ? MARGINAL : PASS;
+    if (s > (sev[i] as number)) sev[i] = s;
+    if (limit > 0 && m / limit < (rel[i] as number)) rel[i] = m / limit;
+  };
+  // A rule that words its own verdict (the sign-path rules of issue 21): its margin, limit and severity as they are.
+  const put = (i: number, m: number, limit: number, s: number) => {
+    margin[i] = m;
     if (s > (sev[i] as number)) sev[i] = s;
     if (limit > 0 && m / limit < (rel[i] as number)) rel[i] = m / limit;
   };
@@ -346,6 +366,127 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
       }
       return;
     }
+    case "differential-input": {
+      const d = Math.max(Math.abs(range.low), Math.abs(range.high));
+      const series = design.front_end.sign_series_ohm;
+      for (let i = 0; i < n; i++) {
+        const rated = c.vdiff_max_v[i] as number;
+        if (rated !== rated) {
+          const m = CLAMP_SAFE_V - d;
+          put(i, m, CLAMP_SAFE_V, m >= 0 ? PASS : UNRATED);
+        } else if (rated >= d || series === undefined) voltage(i, rated - d, rated);
+        else {
+          const tolerated = rated + CLAMP_CURRENT_MAX_A * series;
+          put(i, tolerated - d, tolerated, tolerated < d ? FAIL : MARGINAL);
+        }
+      }
+      return;
+    }
+    case "overload-recovery": {
+      const limit = signTimeLimit({ design, policy } as Parameters<typeof signTimeLimit>[0]);
+      for (let i = 0; i < n; i++) {
+        const t = c.is_op_amp[i] === 1 ? (c.overload_recovery_us[i] as number) * 1e-6 : 0;
+        if (t !== t) unrated(i);
+        else share(i, limit - t, limit);
+      }
+      return;
+    }
+    case "rise-time": {
+      const limit = signTimeLimit({ design, policy } as Parameters<typeof signTimeLimit>[0]);
+      const { logic } = design;
+      const cap = logic.pin_cap_f ?? DEFAULT_PIN_CAP_F;
+      const clamp = stage.stage === "sign" ? stage.clamp : undefined;
+      for (let i = 0; i < n; i++) {
+        const outPos = c.out_pos_headroom_v[i] as number;
+        const outNeg = c.out_neg_headroom_v[i] as number;
+        const high = c.open_drain[i] === 1 ? null : P - (outPos === outPos ? outPos : 0);
+        let t = 0;
+        if (logic.level_shift === "diode-clamp") {
+          if (high !== null && high > 0) {
+            const vf = clamp ? forwardVoltage(clamp, clampSourceCurrent(high, logic.pull_down_ohm, clamp)) : 0;
+            t = pullUpEdge(logic.pull_down_ohm, cap, Math.max(0, high - vf), 0, logic.vil_v).seconds;
+          }
+        } else if (logic.pull_up_ohm === undefined) {
+          if (logic.level_shift === "npn-inverter" || high === null) {
+            put(i, limit, limit, UNRATED);
+            continue;
+          }
+        } else if (logic.level_shift === "npn-inverter") {
+          t =
+            (logic.npn_storage_s ?? NPN_STORAGE_DEFAULT_S) +
+            pullUpEdge(logic.pull_up_ohm, cap, 0.2, logic.vdd_v, logic.vih_v).seconds;
+        } else if (high === null) {
+          const low = N + (outNeg === outNeg ? outNeg : 0);
+          t = pullUpEdge(logic.pull_up_ohm, cap, low, logic.vdd_v, logic.vih_v).seconds;
+        }
+        share(i, limit - t, limit);
+      }
+      return;
+    }
+    case "output-current": {
+      const { logic } = design;
+      const clamp = stage.stage === "sign" ? stage.clamp : undefined;
+      const baseClamp = stage.stage === "sign" && logic.npn_base_clamp === true ? stage.base_clamp : undefined;
+      for (let i = 0; i < n; i++) {
+        const outPos = c.out_pos_headroom_v[i] as number;
+        const outNeg = c.out_neg_headroom_v[i] as number;
+        const high = c.open_drain[i] === 1 ? null : P - (outPos === outPos ? outPos : 0);
+        const low = N + (outNeg === outNeg ? outNeg : 0);
+        let current: number;
+        if (logic.level_shift === "diode-clamp") {
+          current =
+            high === null || !(high > 0)
+              ? 0
+              : clampSourceCurrent(high, logic.pull_down_ohm, clamp ?? { vf_1ma_v: 0, vf_10ma_v: 0 });
+        } else if (logic.level_shift === "pull-up") {
+          const r = logic.pull_up_ohm;
+          if (r === undefined) {
+            put(i, 0, 0, UNRATED);
+            continue;
+          }
+          current = Math.max(
+            Math.max(0, logic.vdd_v - low) / r,
+            high === null ? 0 : Math.max(0, high - logic.vdd_v) / r,
+          );
+        } else {
+          const r = logic.npn_base_ohm;
+          if (r === undefined) {
+            put(i, 0, 0, UNRATED);
+            continue;
+          }
+          const base = high === null ? 0 : baseDriveCurrent(high, r);
+          const sink = baseClamp ? baseReverse(low, { diode: baseClamp, base_ohm: r }).clamp_current_a : 0;
+          current = Math.max(base, sink);
+        }
+        const rated = (c.iout_max_ma[i] as number) * 1e-3;
+        if (rated !== rated) {
+          const m = 100e-6 - current;
+          put(i, m, 100e-6, m >= 0 ? PASS : UNRATED);
+        } else share(i, rated - current, rated);
+      }
+      return;
+    }
+    case "base-emitter-reverse": {
+      const { logic } = design;
+      const vebo = logic.npn_vebo_v ?? NPN_VEBO_DEFAULT_V;
+      const npn = logic.level_shift === "npn-inverter";
+      const noResistor = npn && logic.npn_base_clamp === true && logic.npn_base_ohm === undefined;
+      const deepest = Math.min(stage.stage === "sign" ? (stage.deepest_negative_v ?? N) : N, N);
+      const diode = stage.stage === "sign" && logic.npn_base_clamp === true ? stage.base_clamp : undefined;
+      const rb = logic.npn_base_ohm;
+      const clamp = diode && rb !== undefined ? { diode, base_ohm: rb } : undefined;
+      for (let i = 0; i < n; i++) {
+        if (!npn || noResistor) {
+          put(i, vebo, vebo, npn ? UNRATED : PASS);
+          continue;
+        }
+        const outNeg = c.out_neg_headroom_v[i] as number;
+        const reverse = baseReverse(deepest + (outNeg === outNeg ? outNeg : 0), clamp).reverse_v;
+        const m = vebo - reverse;
+        put(i, m, vebo, m < 0 ? FAIL : reverse > REVERSE_DERATING * vebo || m < headroom ? MARGINAL : PASS);
+      }
+      return;
+    }
     case "forward-current": {
       if (stage.stage !== "diode" || stage.forward_a === undefined) return;
       const needed = stage.forward_a;
@@ -380,5 +521,10 @@ const CASES: Record<Benchmarked, true> = {
   recovery: true,
   leakage: true,
   "forward-current": true,
+  "differential-input": true,
+  "overload-recovery": true,
+  "rise-time": true,
+  "output-current": true,
+  "base-emitter-reverse": true,
 };
 const BENCHMARKED = Object.keys(CASES);

@@ -19,11 +19,12 @@ export const forwardCurrent = defineRule({
     const margin = rated - needed;
     record(out, shareVerdict(margin, needed, policy), needed, rated, margin, needed);
   },
-  describe({ needed, available: rated, margin }) {
+  describe({ needed, available: rated, margin }, { stage }) {
+    const what = stageAs(stage, "diode", "forward-current").forward_what;
     return {
-      reason: `carries ${formatSI(needed, "A")} while conducting (twice the load); rated ${formatSI(rated, "A")}: ${spareOrShort(margin, "A")}`,
+      reason: `carries ${formatSI(needed, "A")} while conducting (${what ?? "twice the load"}); rated ${formatSI(rated, "A")}: ${spareOrShort(margin, "A")}`,
       steps: [
-        { label: "needed = 2 × load_a", value: needed, unit: "A" },
+        { label: what === undefined ? "needed = 2 × load_a" : `needed: ${what}`, value: needed, unit: "A" },
         { label: "if_max", value: rated, unit: "A" },
         { label: "margin = if_max − needed", value: margin, unit: "A" },
       ],

@@ -3,17 +3,22 @@
 // the roles that use it in a topology module (src/topologies/).
 import type { AnyRule } from "../src/core/rule-kit/index.ts";
 import { bandwidth } from "./bandwidth.ts";
+import { baseEmitterReverse } from "./base-emitter-reverse.ts";
+import { differentialInput } from "./differential-input.ts";
 import { forwardCurrent } from "./forward-current.ts";
 import { inputCommonMode } from "./input-common-mode.ts";
 import { leakage } from "./leakage.ts";
 import { logicHigh } from "./logic-high.ts";
 import { logicLow } from "./logic-low.ts";
 import { offset } from "./offset.ts";
+import { outputCurrent } from "./output-current.ts";
 import { outputSwing } from "./output-swing.ts";
+import { overloadRecoveryRule } from "./overload-recovery.ts";
 import { phaseReversal } from "./phase-reversal.ts";
 import { propagationDelay } from "./propagation-delay.ts";
 import { recovery } from "./recovery.ts";
 import { reverseVoltage } from "./reverse-voltage.ts";
+import { riseTime } from "./rise-time.ts";
 import { signDeadBand } from "./sign-dead-band.ts";
 import { slewRate } from "./slew-rate.ts";
 import { supplyRange } from "./supply-range.ts";
@@ -34,6 +39,11 @@ export const RULES = [
   logicLow,
   propagationDelay,
   signDeadBand,
+  differentialInput,
+  overloadRecoveryRule,
+  riseTime,
+  outputCurrent,
+  baseEmitterReverse,
   reverseVoltage,
   recovery,
   leakage,

@@ -9,6 +9,11 @@ import { logicHigh } from "../../rules/logic-high.ts";
 import { logicLow } from "../../rules/logic-low.ts";
 import { offset } from "../../rules/offset.ts";
 import { bandwidth } from "../../rules/bandwidth.ts";
+import { baseEmitterReverse } from "../../rules/base-emitter-reverse.ts";
+import { differentialInput } from "../../rules/differential-input.ts";
+import { outputCurrent } from "../../rules/output-current.ts";
+import { overloadRecoveryRule } from "../../rules/overload-recovery.ts";
+import { riseTime } from "../../rules/rise-time.ts";
 import { propagationDelay } from "../../rules/propagation-delay.ts";
 import { recovery } from "../../rules/recovery.ts";
 import { reverseVoltage } from "../../rules/reverse-voltage.ts";
@@ -22,6 +27,7 @@ import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../co
 import { pumpRail } from "../core/math/charge-pump.ts";
 import { forwardVoltage } from "../core/math/diode.ts";
 import { ratioDeviation } from "../core/math/divider.ts";
+import { NPN_VBE_ON_V } from "../core/math/npn-inverter.ts";
 import type { DiodeStage, OpAmpStage, Rails, SignStage } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
 import type { Diode } from "../core/schemas/diode.ts";
@@ -81,6 +87,8 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
 
   // 1. The negative rail, with the pump diode settled first.
   let negative_v: number;
+  // The deepest the rail goes (no load, or the ripple's trough), for reverse stress on the NPN's base.
+  let deepest_v: number;
   let negativeDerived: Derived["negative"];
   const noRails: Rails = { positive_v: positive, negative_v: 0 };
   if (neg.kind === "charge-pump") {
@@ -128,12 +136,15 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
       );
     }
     negative_v = rail.worst_v;
+    deepest_v = Math.min(rail.no_load_v, rail.dc_v - rail.ripple_v / 2);
     negativeDerived = { kind: "charge-pump", diode: pumpDiode, ...rail };
   } else if (neg.kind === "fixed") {
     negative_v = neg.v;
+    deepest_v = neg.v;
     negativeDerived = { kind: "fixed" };
   } else {
     negative_v = 0;
+    deepest_v = 0;
     negativeDerived = { kind: "ground" };
   }
   const rails: Rails = { positive_v: positive, negative_v };
@@ -181,6 +192,29 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     clampUse = use(d, positive / design.logic.pull_down_ohm, clampRole);
   }
 
+  // 3b. The NPN inverter's base clamp, when the design asks for one (issue 21).
+  let baseClamp: SignStage["base_clamp"];
+  if (design.logic.level_shift === "npn-inverter" && design.logic.npn_base_clamp === true) {
+    const rb = design.logic.npn_base_ohm;
+    const clampRole = role(
+      "base-clamp-diode",
+      {
+        stage: "diode",
+        label: "the NPN's base clamp",
+        reverse_v: NPN_VBE_ON_V,
+        reverse_what: "the NPN's V_BE while it is on",
+        forward_a: rb === undefined ? 0 : Math.max(0, -deepest_v) / rb,
+        forward_what:
+          rb === undefined
+            ? "unknown: the design gives no logic.npn_base_ohm"
+            : "at most |V−| / npn_base_ohm, with the sign output low",
+      },
+      rails,
+    );
+    const d = settleDiode(clampRole, "base clamp diode");
+    baseClamp = { id: d.id, vf_1ma_v: d.vf_1ma_v, vf_10ma_v: d.vf_10ma_v, ir_na: d.ir_na };
+  }
+
   // 4. The amplifiers.
   const buffer: OpAmpStage = {
     stage: "op-amp",
@@ -213,6 +247,8 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     input: { low: -W, high: W },
     output_per_input: k,
     ...(clamp ? { clamp } : {}),
+    ...(baseClamp ? { base_clamp: baseClamp } : {}),
+    deepest_negative_v: deepest_v,
   };
   role("buffer", buffer, rails);
   role("rectifier", rectifier, rails);
@@ -358,6 +394,13 @@ export const rectifyAndSign = defineTopology({
     "logic.vil_v",
     "logic.level_shift",
     "logic.pull_down_ohm",
+    "logic.pull_up_ohm",
+    "logic.pin_cap_f",
+    "logic.npn_base_ohm",
+    "logic.npn_base_clamp",
+    "logic.npn_vebo_v",
+    "logic.npn_storage_s",
+    "front_end.sign_series_ohm",
     "accuracy.required_v",
     "temperature.min_c",
     "temperature.max_c",
@@ -386,7 +429,19 @@ export const rectifyAndSign = defineTopology({
       field: "Sign comparator",
       label: "sign comparator driving a logic input (an op amp may stand in, at best marginal)",
       wants: "compare",
-      rules: [supplyRange, inputCommonMode, logicHigh, logicLow, propagationDelay, signDeadBand],
+      rules: [
+        supplyRange,
+        inputCommonMode,
+        logicHigh,
+        logicLow,
+        propagationDelay,
+        signDeadBand,
+        differentialInput,
+        overloadRecoveryRule,
+        riseTime,
+        outputCurrent,
+        baseEmitterReverse,
+      ],
     },
     {
       id: "pump-diode",
@@ -415,6 +470,18 @@ export const rectifyAndSign = defineTopology({
       wants: "clamp",
       rules: [reverseVoltage, leakage],
       when: [{ path: "logic.level_shift", is: ["diode-clamp"] }],
+    },
+    {
+      id: "base-clamp-diode",
+      name: "Base clamp diode",
+      field: "NPN base clamp diode",
+      label: "diode across the NPN's base and emitter, so a negative output cannot reverse-bias the base",
+      wants: "clamp",
+      rules: [reverseVoltage, forwardCurrent],
+      when: [
+        { path: "logic.level_shift", is: ["npn-inverter"] },
+        { path: "logic.npn_base_clamp", is: ["true"] },
+      ],
     },
   ],
   roleTerms: ROLE_TERMS,

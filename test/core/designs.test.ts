@@ -216,7 +216,7 @@ describe("parseDesignValue", () => {
           "designs/test-design.json: bom.buffer: not a valid id (got 'OA X', expected lower-case letters, digits and '-', starting with a letter or digit, at most 80 characters)",
         ],
         "bom role far from any": [
-          "designs/test-design.json: bom.op-amp: unknown role (got 'op-amp', expected one of buffer, rectifier, sign, pump-diode, rectifier-diode, clamp-diode, level-shift, reference-buffer)",
+          "designs/test-design.json: bom.op-amp: unknown role (got 'op-amp', expected one of buffer, rectifier, sign, pump-diode, rectifier-diode, clamp-diode, base-clamp-diode, level-shift, reference-buffer)",
         ],
         "bom role typo": [
           "designs/test-design.json: bom.bufer: unknown role (got 'bufer', expected 'buffer')",

@@ -40,6 +40,10 @@ export const OP_AMP_CELLS: Record<string, string> = {
   noise_nv_rthz: "40",
   unity_gain_stable: "yes",
   phase_reversal: "no",
+  // Sign-path ratings (issue 21), typical of the class (common practice [M]): no input clamps.
+  vdiff_max_v: "32",
+  overload_recovery_us: "10",
+  iout_max_ma: "20",
 };
 
 /** A push-pull CMOS comparator class, 1.8–5.5 V, rail-to-rail output. */
@@ -62,6 +66,9 @@ export const COMPARATOR_CELLS: Record<string, string> = {
   tpd_ns: "1300",
   hysteresis_mv: "",
   iq_ma: "0.05",
+  // Sign-path ratings (issue 21), typical of the class (common practice [M]).
+  vdiff_max_v: "5.5",
+  iout_max_ma: "10",
 };
 
 /** A silicon switching class (REFERENCES.md, common practice [M]). */

@@ -31,10 +31,14 @@ describe("rules with an empty needed column", () => {
     expect(f.reason).toBe(`not rated: needs '${column}', which is empty for this part`);
   });
 
-  it("the optional columns some rule needs are exactly phase_reversal and trr_ns", () => {
+  it("the optional columns some rule needs are exactly phase_reversal, overload_recovery_us and trr_ns", () => {
     const optional = needs
       .filter(([, kind, column]) => rowProblems(kind, { [column]: "" }).length === 0)
       .map(([rule, , column]) => `${rule}:${column}`);
-    expect(optional).toEqual(["phase-reversal:phase_reversal", "recovery:trr_ns"]);
+    expect(optional).toEqual([
+      "phase-reversal:phase_reversal",
+      "overload-recovery:overload_recovery_us",
+      "recovery:trr_ns",
+    ]);
   });
 });

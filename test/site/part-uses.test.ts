@@ -31,6 +31,7 @@ describe("partUses", () => {
       "pump-diode",
       "rectifier-diode",
       "clamp-diode",
+      "base-clamp-diode",
     ]);
   });
 

@@ -61,6 +61,10 @@ export type SignStage = {
   /** Divider ratio k, to refer the dead band to the input. */
   output_per_input: number;
   clamp?: ClampDiode;
+  /** NPN inverter with a base clamp: the diode across base and emitter. */
+  base_clamp?: ClampDiode;
+  /** The deepest V− the output can see (no load, ripple trough), for reverse stress; the worst-case rail when absent. */
+  deepest_negative_v?: number;
 };
 
 export type ClampDiode = { id: string; vf_1ma_v: number; vf_10ma_v: number; ir_na: number };
@@ -77,6 +81,8 @@ export type DiodeStage = {
   recovery_what?: string;
   /** Forward current the diode must carry, amps. */
   forward_a?: number;
+  /** Where that current comes from; "twice the load" (the pump) when absent. */
+  forward_what?: string;
   /** Leakage turns into an error across this resistance … */
   leakage_ohm?: number;
   /** … which must stay under this voltage at the point where it appears. */

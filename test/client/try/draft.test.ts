@@ -133,6 +133,7 @@ describe("draftFromInput / rawFromDraft", () => {
         "pump-diode",
         "rectifier-diode",
         "clamp-diode",
+        "base-clamp-diode",
         "level-shift",
         "reference-buffer",
       ].map((r) => `bom.${r}`),

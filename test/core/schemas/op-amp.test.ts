@@ -30,6 +30,9 @@ describe("opAmpRow", () => {
       noise_nv_rthz: 40,
       unity_gain_stable: true,
       phase_reversal: undefined,
+      vdiff_max_v: 32,
+      overload_recovery_us: 10,
+      iout_max_ma: 20,
     });
   });
 
