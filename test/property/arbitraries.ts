@@ -65,6 +65,9 @@ export const opAmpCells = fc.record({
   noise_nv_rthz: optional(cell(num(1, 200))),
   unity_gain_stable: yesNo,
   phase_reversal: fc.constantFrom("yes", "no", ""),
+  vdiff_max_v: optional(cell(num(0.3, 40))),
+  overload_recovery_us: optional(cell(decades(0.05, 200))),
+  iout_max_ma: optional(cell(num(0.5, 60))),
 });
 
 export const comparatorCells = fc.record({
@@ -86,6 +89,8 @@ export const comparatorCells = fc.record({
   tpd_ns: cell(decades(0.5, 20000)),
   hysteresis_mv: optional(cell(num(0, 20))),
   iq_ma: cell(decades(0.0003, 20)),
+  vdiff_max_v: optional(cell(num(0.3, 40))),
+  iout_max_ma: optional(cell(num(0.5, 60))),
 });
 
 export const diodeCells = fc.record({
@@ -172,6 +177,12 @@ export const designInputArb = num(1.8, 30).chain((positive) =>
       vil: num(0.2, 0.8),
       level_shift: fc.constantFrom(...LEVEL_SHIFTS),
       pull_down_ohm: decades(1e3, 1e6),
+      // The optional sign-path fields of issue 21, each left out half the time.
+      sign_series_ohm: fc.option(decades(100, 1e6), { nil: undefined }),
+      pull_up_ohm: fc.option(decades(1e3, 1e6), { nil: undefined }),
+      pin_cap_f: fc.option(decades(1e-12, 1e-10), { nil: undefined }),
+      npn_base_ohm: fc.option(decades(1e3, 1e6), { nil: undefined }),
+      npn_base_clamp: fc.option(fc.boolean(), { nil: undefined }),
       required_v: decades(1e-4, 1),
       min_c: fc.integer({ min: -40, max: 25 }),
       max_c: fc.integer({ min: 25, max: 125 }),
@@ -192,6 +203,7 @@ export const designInputArb = num(1.8, 30).chain((positive) =>
           resistor_tolerance: r.resistor_tolerance,
           series: r.series,
           rectifier_load_ohm: r.rectifier_load_ohm,
+          ...(r.sign_series_ohm === undefined ? {} : { sign_series_ohm: r.sign_series_ohm }),
         },
         adc: {
           bits: r.bits,
@@ -204,6 +216,10 @@ export const designInputArb = num(1.8, 30).chain((positive) =>
           vil_v: Number((r.vil * vih).toPrecision(4)),
           level_shift: r.level_shift,
           pull_down_ohm: r.pull_down_ohm,
+          ...(r.pull_up_ohm === undefined ? {} : { pull_up_ohm: r.pull_up_ohm }),
+          ...(r.pin_cap_f === undefined ? {} : { pin_cap_f: r.pin_cap_f }),
+          ...(r.npn_base_ohm === undefined ? {} : { npn_base_ohm: r.npn_base_ohm }),
+          ...(r.npn_base_clamp === undefined ? {} : { npn_base_clamp: r.npn_base_clamp }),
         },
         accuracy: { required_v: r.required_v },
         temperature: { min_c: r.min_c, max_c: r.max_c },
