@@ -90,6 +90,11 @@ export class HalfWaveRunner {
     return forwardVoltage(this.s.diode, Math.max(current, this.iOn));
   }
 
+  /** Open loop, or settling from it (as long again as it was open): errors now come from the crossing. */
+  inDeadTime(): boolean {
+    return this.region === OFF || this.lastEnd < this.holdUntil;
+  }
+
   /** Starts in the region the input puts it in, settled. */
   init(x: number): void {
     this.region = x < 0 ? D1 : D2;
