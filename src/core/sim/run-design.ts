@@ -10,7 +10,14 @@ import { simulateChain, type ChainRun } from "./simulate.ts";
 export type ChainBuilder = (result: DesignResult, catalogue: Catalogue) => ChainBuild;
 
 export type DesignSimulation =
-  | { ran: true; topology: string; chain: Chain; parts: Record<string, string>; run: ChainRun; report: SimulationReport }
+  | {
+      ran: true;
+      topology: string;
+      chain: Chain;
+      parts: Record<string, string>;
+      run: ChainRun;
+      report: SimulationReport;
+    }
   | { ran: false; topology: string; reason: string };
 
 export function simulateResult(

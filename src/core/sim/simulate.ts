@@ -1,6 +1,6 @@
 // Runs a chain (chain.ts) in the time domain and reports what the firmware reads.
 //
-// Integration: a fixed grid of `steps_per_period` steps per signal period (1024
+// Integration: a fixed grid of `steps_per_period` steps per signal period (512
 // unless asked), each stage advanced by its exact solution for an input that is
 // a straight line over the step (pole.ts, half-wave.ts). Where a rectifier's
 // loop is open or opens/closes inside a step, that step is redone for the whole
@@ -53,7 +53,7 @@ export type Trace = {
   stages: StageStats[];
 };
 
-export const STEPS_PER_PERIOD = 1024;
+export const STEPS_PER_PERIOD = 512;
 /** Points kept for the waveform table (statistics use every point). */
 const KEEP_AT_MOST = 8192;
 /** A refined step is redone in this many parts, at most MAX_DEPTH times over (8⁶ ≈ 2.6·10⁵ parts). */
