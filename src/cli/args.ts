@@ -36,6 +36,12 @@ export function flag(args: ParsedArgs, name: string): string | undefined {
   return typeof v === "string" ? v : undefined;
 }
 
+import { KINDS } from "../core/kinds.ts";
+import { TOPOLOGY_IDS } from "../engine.ts";
+
+const FILES = [...KINDS.map((k) => k.file), "designs/"].join(", ");
+const TOPOLOGY_CHOICES = `${TOPOLOGY_IDS.slice(0, -1).join(", ")}, or ${TOPOLOGY_IDS.at(-1) ?? "all"} (side by side)`;
+
 export const USAGE = `railsieve — shortlist op amps, comparators and diodes for a bipolar-to-ADC front end
 
 Usage:
@@ -43,9 +49,9 @@ Usage:
   railsieve check DESIGN.json… [--data DIR] [--format text|json|csv] [--topology NAME]
   railsieve explain PART-ID DESIGN.json [--role ROLE] [--data DIR]
 
-  --data DIR       catalogue folder (op-amps.csv, comparators.csv, diodes.csv, designs/); default ./data
+  --data DIR       catalogue folder (${FILES}); default ./data
   --format F       output of check: text (default), json or csv
-  --topology NAME  evaluate as rectify-and-sign, offset-to-mid-rail, or all (side by side)
+  --topology NAME  evaluate as ${TOPOLOGY_CHOICES}
   --role ROLE      explain one role only
 
 Exit status: 0 when everything asked holds, 1 when a BOM part fails or a role has no fit,

@@ -2,7 +2,8 @@ import { readdirSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { displayPath, loadDesignFiles } from "../../src/node/load-data.ts";
-import { checkDesignSet, parseDesignText, parseDesignValue } from "../../src/core/designs.ts";
+import { checkDesignSet } from "../../src/core/designs.ts";
+import { parseDesignText, parseDesignValue } from "../../src/engine.ts";
 import { formatProblem } from "../../src/core/problems.ts";
 import { POLICY_DEFAULTS } from "../../src/core/schemas/design.ts";
 import { designInput, type DeepPartial } from "../helpers/designs.ts";
@@ -174,7 +175,7 @@ describe("parseDesignValue", () => {
     ).toMatchInlineSnapshot(`
       {
         "far from any": [
-          "designs/test-design.json: front_end.colour: unknown key (got 'colour', expected one of 'window_v', 'divider_total_ohm', 'resistor_tolerance', 'series', 'rectifier_load_ohm')",
+          "designs/test-design.json: front_end.colour: unknown key (got 'colour', expected one of 'window_v', 'divider_total_ohm', 'resistor_tolerance', 'series', 'rectifier_load_ohm', 'sign_series_ohm')",
         ],
         "inside a charge pump": [
           "designs/test-design.json: supply.negative.flying_cap_f: required value is missing (got nothing, expected a number (or a string such as "100k"), greater than 0)",

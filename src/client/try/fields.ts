@@ -1,7 +1,9 @@
 // Every editable field of a design file (SPEC §5), in file order. One table
 // serves the page's markup (built at build time), the URL codec and the form
 // script, so a field's name, label and unit are written once.
-import { LEVEL_SHIFTS, POLICY_DEFAULTS, SERIES, TOPOLOGIES, type Role } from "../../core/schemas/design.ts";
+import type { RoleDef } from "../../core/engine/topology.ts";
+import { LEVEL_SHIFTS, POLICY_DEFAULTS, SERIES, type Role } from "../../core/schemas/design.ts";
+import { ALL_TOPOLOGIES, engine, roleApplies, TOPOLOGY_IDS } from "../../engine.ts";
 
 export type FieldGroup = { id: string; legend: string; hint?: string };
 
@@ -35,6 +37,8 @@ type Base = {
   when?: (draft: Readonly<Record<string, string>>) => boolean;
   /** May be left empty (policy overrides, BOM). */
   optional?: boolean;
+  /** A yes/no choice whose values "true"/"false" go into the file as JSON booleans. */
+  boolean?: true;
 };
 
 export type NumberField = Base & { type: "number"; unit: string; style: NumberStyle; placeholder?: string };
@@ -47,11 +51,19 @@ export type Field = NumberField | TextField | ChoiceField | PartField;
 
 const isPump = (d: Readonly<Record<string, string>>) => d["supply.negative.kind"] === "charge-pump";
 const isFixed = (d: Readonly<Record<string, string>>) => d["supply.negative.kind"] === "fixed";
-const isClamp = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] === "diode-clamp";
-// Roles per topology as the engine's rolesOf has them; "all" compares both front ends.
-const rectifies = (d: Readonly<Record<string, string>>) => d["topology"] !== "offset-to-mid-rail";
-const shifts = (d: Readonly<Record<string, string>>) =>
-  d["topology"] === "offset-to-mid-rail" || d["topology"] === "all";
+const isNpn = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] === "npn-inverter";
+const pulledUp = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] !== "diode-clamp";
+
+/**
+ * A role's BOM box shows when the chosen topology has the role (any topology
+ * for "all") and the role's own conditions hold, as the engine's rolesOf has it.
+ */
+const hasRole =
+  (role: RoleDef) =>
+  (d: Readonly<Record<string, string>>): boolean =>
+    engine.topologies.some(
+      (t) => (d["topology"] === t.id || d["topology"] === ALL_TOPOLOGIES) && t.roles.some((r) => r.id === role.id),
+    ) && roleApplies(role, (path) => d[path]);
 
 const num = (
   path: string,
@@ -107,7 +119,7 @@ export const FIELDS: readonly Field[] = [
     group: "design",
     label: "Topology",
     type: "choice",
-    choices: TOPOLOGIES.map((t) => ({ value: t, label: t })),
+    choices: TOPOLOGY_IDS.map((t) => ({ value: t, label: t })),
   },
 
   num("supply.positive_v", "supply", "Positive rail V+", "V"),
@@ -149,6 +161,7 @@ export const FIELDS: readonly Field[] = [
     choices: SERIES.map((s) => ({ value: s, label: s })),
   },
   num("front_end.rectifier_load_ohm", "front_end", "Rectifier resistors", "Ω"),
+  num("front_end.sign_series_ohm", "front_end", "Series resistor into the sign input", "Ω", { optional: true }),
 
   num("adc.bits", "adc", "ADC resolution", "bits", plain),
   num("adc.reference_v", "adc", "ADC reference", "V"),
@@ -170,6 +183,29 @@ export const FIELDS: readonly Field[] = [
     optional: true,
     hint: "optional; empty is −0.3 V",
   }),
+  num("logic.pull_up_ohm", "logic", "Pull-up resistor", "Ω", { optional: true, when: pulledUp }),
+  num("logic.pin_cap_f", "logic", "Logic pin capacitance", "F", { optional: true, placeholder: "10p" }),
+  num("logic.npn_base_ohm", "logic", "NPN base resistor", "Ω", { optional: true, when: isNpn }),
+  {
+    path: "logic.npn_base_clamp",
+    group: "logic",
+    label: "NPN base clamp diode",
+    type: "choice",
+    optional: true,
+    boolean: true,
+    when: isNpn,
+    choices: [
+      { value: "", label: "none" },
+      { value: "true", label: "diode across base and emitter" },
+      { value: "false", label: "none (stated)" },
+    ],
+  },
+  num("logic.npn_vebo_v", "logic", "NPN emitter-base rating V_EBO", "V", {
+    optional: true,
+    when: isNpn,
+    placeholder: "5",
+  }),
+  num("logic.npn_storage_s", "logic", "NPN storage time", "s", { optional: true, when: isNpn, placeholder: "300n" }),
 
   num("accuracy.required_v", "accuracy", "Required accuracy (input-referred)", "V"),
   num("temperature.min_c", "accuracy", "Lowest temperature", "°C", plain),
@@ -188,6 +224,7 @@ export const FIELDS: readonly Field[] = [
     label: "Accept unrated parts as marginal",
     type: "choice",
     optional: true,
+    boolean: true,
     choices: [
       { value: "", label: `default (${POLICY_DEFAULTS.allow_unrated ? "yes" : "no"})` },
       { value: "true", label: "yes" },
@@ -195,14 +232,7 @@ export const FIELDS: readonly Field[] = [
     ],
   },
 
-  bomRole("buffer", "Buffer op amp", rectifies),
-  bomRole("rectifier", "Rectifier op amp", rectifies),
-  bomRole("sign", "Sign comparator", rectifies),
-  bomRole("pump-diode", "Pump diode", (d) => rectifies(d) && isPump(d)),
-  bomRole("rectifier-diode", "Rectifier diode", rectifies),
-  bomRole("clamp-diode", "Clamp diode", (d) => rectifies(d) && isClamp(d)),
-  bomRole("level-shift", "Level-shift op amp", shifts),
-  bomRole("reference-buffer", "Reference buffer op amp", shifts),
+  ...engine.roles.map((role) => bomRole(role.id, role.field, hasRole(role))),
 ];
 
 export const FIELD_BY_PATH: ReadonlyMap<string, Field> = new Map(FIELDS.map((f) => [f.path, f]));

@@ -19,6 +19,9 @@ export const comparatorColumns = {
   tpd_overdrive_mv: optionalNumber({ unit: "mV", label: "Delay rated at overdrive" }, { above: 0 }),
   hysteresis_mv: optionalNumber({ unit: "mV", label: "Hysteresis" }, { min: 0 }),
   iq_ma: requiredNumber({ unit: "mA", label: "Supply current" }, { min: 0 }),
+  // Sign-path ratings (issue 21): empty means not rated, and a rule that needs one says unrated.
+  vdiff_max_v: optionalNumber({ unit: "V", label: "Differential input max" }, { min: 0 }),
+  iout_max_ma: optionalNumber({ unit: "mA", label: "Output current max" }, { above: 0 }),
 };
 
 export const comparatorRow = partRow("comparator", comparatorColumns, checkSupplyAndHeadroom, checkPushPullLevels);

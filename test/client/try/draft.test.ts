@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { parseDesignValue } from "../../../src/core/designs.ts";
+import { parseDesignValue } from "../../../src/engine.ts";
 import { parseSI } from "../../../src/core/units.ts";
 import { DEFAULT_DRAFT, DEFAULT_INPUT } from "../../../src/client/try/defaults.ts";
 import { checkDraft, draftFromInput, policyOverrides, rawFromDraft, siText } from "../../../src/client/try/draft.ts";
@@ -118,6 +118,14 @@ describe("draftFromInput / rawFromDraft", () => {
       "policy.timing_fraction",
       "policy.timing_share",
       "policy.allow_unrated",
+      // The optional sign-path fields of issue 21.
+      "front_end.sign_series_ohm",
+      "logic.pull_up_ohm",
+      "logic.pin_cap_f",
+      "logic.npn_base_ohm",
+      "logic.npn_base_clamp",
+      "logic.npn_vebo_v",
+      "logic.npn_storage_s",
       ...[
         "buffer",
         "rectifier",
