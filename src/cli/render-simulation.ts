@@ -2,11 +2,21 @@
 // and the waveforms as CSV for a spreadsheet. Pure text; the data comes from
 // src/core/sim/report.ts.
 import { csvLine } from "../core/csv-escape.ts";
-import { describeConditions, type RunSummary, type SimulationReport } from "../core/sim/report.ts";
+import {
+  describeConditions,
+  type RunSummary,
+  type SimulationOutcome,
+  type SimulationReport,
+} from "../core/sim/report.ts";
 import type { Trace } from "../core/sim/simulate.ts";
-import { formatSI } from "../core/units.ts";
+import { formatPercent, formatSI } from "../core/units.ts";
 
 const v = (x: number) => formatSI(x, "V");
+
+/** A result's simulation outcome as the report or the reason it did not run. */
+export function outcomeReport(o: SimulationOutcome): SimulationReport | SimulationSkip {
+  return o.ran ? o.report : { topology: o.topology, reason: o.reason };
+}
 
 /** What the simulation could not do for a topology (a role with no part, an unrated column). */
 export type SimulationSkip = { topology: string; reason: string };
@@ -18,8 +28,15 @@ export function simulationLine(r: SimulationReport | SimulationSkip): string {
   const c = r.comparison;
   if (!c) return head;
   if (c.within) return `${head}; inside the static worst case ${v(c.worst_case_v)} by ${v(c.margin_v)}`;
-  const why = c.distrust && c.distrust.because.length > 0 ? ` (${describeConditions(c.distrust.because)})` : "";
-  return `${head}; BEYOND the static worst case ${v(c.worst_case_v)} by ${v(-c.margin_v)}: distrust the budget, it leaves out what the simulation found${why}`;
+  return `${head}; BEYOND the static worst case ${v(c.worst_case_v)} by ${v(-c.margin_v)}: distrust the budget, ${whyBeyond(r)}`;
+}
+
+/** Why the simulation went beyond the budget: what the chain was doing, or the static error it found. */
+export function whyBeyond(r: SimulationReport): string {
+  const because = r.comparison?.distrust?.because ?? [];
+  if (because.length > 0) return `which leaves out what happened while ${describeConditions(because)}`;
+  const f = r.slow.fit;
+  return `whose static model differs from the circuit: even at ${formatSI(r.slow.frequency_hz, "Hz")} the reading is off by ${formatPercent(f.gain_error)} in gain and ${v(f.offset_v)} at zero`;
 }
 
 function runLines(label: string, s: RunSummary): string[] {

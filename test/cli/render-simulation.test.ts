@@ -16,7 +16,7 @@ describe("simulationLine", () => {
 
   it("beyond it, naming the model to distrust and why", () => {
     expect(simulationLine(reportOf("rectify-and-sign", run, 0.1))).toMatchInlineSnapshot(
-      `"simulation: largest error 176 mV at 200 Hz (rms 19.8 mV), 38.1 mV at 2.00 Hz; BEYOND the static worst case 100 mV by 75.6 mV: distrust the budget, it leaves out what the simulation found (rectifier-1 was crossing its diode drops at a zero crossing (dead time))"`,
+      `"simulation: largest error 176 mV at 200 Hz (rms 19.8 mV), 38.1 mV at 2.00 Hz; BEYOND the static worst case 100 mV by 75.6 mV: distrust the budget, which leaves out what happened while rectifier-1 was crossing its diode drops at a zero crossing (dead time)"`,
     );
   });
 

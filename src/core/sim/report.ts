@@ -15,6 +15,8 @@ export type RunSummary = {
   /** Stages that slewed or clipped during the period. */
   slewing: string[];
   clipped: string[];
+  /** Least-squares line through the error against the input: a gain error (share) and a zero error (V). */
+  fit: { gain_error: number; offset_v: number };
 };
 
 export type Comparison = {
@@ -35,6 +37,11 @@ export type SimulationReport = {
   comparison: Comparison | null;
 };
 
+/** What a design result carries of its simulation: the report, or why there is none. */
+export type SimulationOutcome =
+  | { ran: true; topology: string; parts: Record<string, string>; report: SimulationReport }
+  | { ran: false; topology: string; reason: string };
+
 export function summarizeRun(t: Trace): RunSummary {
   let dead: number | null = null;
   const slewing: string[] = [];
@@ -45,6 +52,7 @@ export function summarizeRun(t: Trace): RunSummary {
     if (s.clipped_s > 0) clipped.push(s.id);
   }
   return {
+    fit: fitError(t),
     frequency_hz: t.frequency_hz,
     max_error_v: t.max_error_v,
     max_error_at_s: t.max_error_at_s,
@@ -54,6 +62,30 @@ export function summarizeRun(t: Trace): RunSummary {
     slewing,
     clipped,
   };
+}
+
+/** error ≈ gain_error·input + offset, by least squares over the recorded points. */
+export function fitError(t: Trace): { gain_error: number; offset_v: number } {
+  const x = t.values[t.columns.indexOf("input")];
+  const e = t.values[t.columns.indexOf("error")];
+  if (!x || !e || x.length < 2) return { gain_error: 0, offset_v: 0 };
+  let sx = 0;
+  let se = 0;
+  let sxx = 0;
+  let sxe = 0;
+  const n = x.length;
+  for (let i = 0; i < n; i++) {
+    const xi = x[i] ?? 0;
+    const ei = e[i] ?? 0;
+    sx += xi;
+    se += ei;
+    sxx += xi * xi;
+    sxe += xi * ei;
+  }
+  const det = n * sxx - sx * sx;
+  if (!(det > 0)) return { gain_error: 0, offset_v: se / n };
+  const gain = (n * sxe - sx * se) / det;
+  return { gain_error: gain, offset_v: (se - gain * sx) / n };
 }
 
 /**
