@@ -253,7 +253,7 @@ describe("the sign path (issue 21)", () => {
         });
         const run = (vdiff: number) => {
           const part = c.opAmp
-            ? opAmp({ id: "under-test", vdiff_max_v: vdiff })
+            ? opAmp({ ...RAIL_TO_RAIL, id: "under-test", vdiff_max_v: vdiff })
             : comparator({ id: "under-test", vdiff_max_v: vdiff });
           const r = evaluate(d, catalogueFromParts([part, plainDiode]));
           return r?.roles.find((x) => x.role === "sign");
