@@ -1,14 +1,22 @@
 // Command-line parsing: positional words and --flags, with clear usage errors.
-export type ParsedArgs = { command?: string; positional: string[]; flags: Map<string, string | true> };
+export type ParsedArgs = {
+  command?: string;
+  positional: string[];
+  flags: Map<string, string | true>;
+  /** Every value of a flag that may be given more than once (--part), in order. */
+  repeated?: Map<string, string[]>;
+};
 
 export class UsageError extends Error {}
 
-const VALUE_FLAGS = new Set(["data", "format", "role", "topology"]);
+const VALUE_FLAGS = new Set(["data", "format", "role", "topology", "part"]);
+const REPEATABLE_FLAGS = new Set(["part"]);
 const BOOLEAN_FLAGS = new Set(["help", "no-color"]);
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {
   const positional: string[] = [];
   const flags = new Map<string, string | true>();
+  const repeated = new Map<string, string[]>();
   for (let i = 0; i < argv.length; i++) {
     const word = argv[i] ?? "";
     if (word === "-h") {
@@ -25,10 +33,15 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
       const value = inline ?? argv[++i];
       if (value === undefined || value === "") throw new UsageError(`option --${name} needs a value`);
       flags.set(name, value);
+      if (REPEATABLE_FLAGS.has(name)) repeated.set(name, [...(repeated.get(name) ?? []), value]);
     } else throw new UsageError(`unknown option --${name}`);
   }
   const [command, ...rest] = positional;
-  return { ...(command !== undefined ? { command } : {}), positional: rest, flags };
+  return { ...(command !== undefined ? { command } : {}), positional: rest, flags, repeated };
+}
+
+export function flagValues(args: ParsedArgs, name: string): string[] {
+  return args.repeated?.get(name) ?? [];
 }
 
 export function flag(args: ParsedArgs, name: string): string | undefined {
@@ -48,12 +61,15 @@ Usage:
   railsieve validate [--data DIR]
   railsieve check DESIGN.json… [--data DIR] [--format text|json|csv] [--topology NAME]
   railsieve explain PART-ID DESIGN.json [--role ROLE] [--data DIR]
+  railsieve simulate DESIGN.json [--part ROLE=ID]… [--topology NAME] [--format text|json|csv] [--data DIR]
 
   --data DIR       catalogue folder (${FILES}); default ./data
-  --format F       output of check: text (default), json or csv
+  --format F       output of check and simulate: text (default), json or csv
   --topology NAME  evaluate as ${TOPOLOGY_CHOICES}
   --role ROLE      explain one role only
+  --part ROLE=ID   simulate with this part in this role (as if the design's bom named it)
 
-Exit status: 0 when everything asked holds, 1 when a BOM part fails or a role has no fit,
+Exit status: 0 when everything asked holds, 1 when a BOM part fails or a role has no fit
+(simulate: when a simulation could not run or went beyond the static worst case),
 2 on invalid input.
 `;

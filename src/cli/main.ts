@@ -6,6 +6,7 @@ import { runCheck } from "./check.ts";
 import { runExplain } from "./explain.ts";
 import { safeIo, type Io } from "./io.ts";
 import { dataDir, renderProblems } from "./load.ts";
+import { runSimulate } from "./simulate.ts";
 import { runValidate } from "./validate.ts";
 
 export async function main(argv: readonly string[], rawIo: Io): Promise<number> {
@@ -27,11 +28,13 @@ export async function main(argv: readonly string[], rawIo: Io): Promise<number> 
         return runCheck(args, data, io);
       case "explain":
         return runExplain(args, data, io);
+      case "simulate":
+        return runSimulate(args, data, io);
       case undefined:
         io.err(USAGE);
         return 2;
       default:
-        throw new UsageError(`unknown command '${args.command}' (expected validate, check or explain)`);
+        throw new UsageError(`unknown command '${args.command}' (expected validate, check, explain or simulate)`);
     }
   } catch (e) {
     if (e instanceof UsageError) {
