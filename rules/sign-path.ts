@@ -3,7 +3,7 @@
 // Shared by the rise-time, overload-recovery, output-current and
 // base-emitter-reverse rules and by the late-sign sum, so each time is worked
 // out once, the same way.
-import type { Part, RoleContext } from "../src/core/rule-kit/index.ts";
+import type { PartOf, RoleContext } from "../src/core/rule-kit/index.ts";
 import { clampSourceCurrent } from "../src/core/math/output-current.ts";
 import { forwardVoltage } from "../src/core/math/diode.ts";
 import { NPN_STORAGE_DEFAULT_S, npnTurnOff, type NpnTurnOff } from "../src/core/math/npn-inverter.ts";
@@ -29,7 +29,7 @@ export type SignEdge =
   | { case: "no-pull-up"; seconds: 0 };
 
 /** The slower edge the level shift makes at the logic pin, per SPEC §7's three shifts. */
-export function signEdge(ctx: RoleContext, part: Part): SignEdge {
+export function signEdge(ctx: RoleContext, part: PartOf<"op-amp" | "comparator">): SignEdge {
   const { logic } = ctx.design;
   const cap = pinCap(ctx).farad;
   const high = outputHigh(part, ctx.rails);
@@ -66,7 +66,7 @@ export function signEdge(ctx: RoleContext, part: Part): SignEdge {
 }
 
 /** An op amp's rated overload recovery in seconds; 0 for a comparator; undefined when not rated. */
-export function overloadRecovery(part: Part): number | undefined {
+export function overloadRecovery(part: PartOf<"op-amp" | "comparator">): number | undefined {
   if (part.kind !== "op-amp") return 0;
   return part.overload_recovery_us === undefined ? undefined : part.overload_recovery_us * 1e-6;
 }
