@@ -3,8 +3,8 @@ export type ParsedArgs = { command?: string; positional: string[]; flags: Map<st
 
 export class UsageError extends Error {}
 
-const VALUE_FLAGS = new Set(["data", "format", "role", "topology"]);
-const BOOLEAN_FLAGS = new Set(["help", "no-color"]);
+const VALUE_FLAGS = new Set(["data", "format", "role", "topology", "guide-url", "port"]);
+const BOOLEAN_FLAGS = new Set(["help", "no-color", "strict"]);
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {
   const positional: string[] = [];
@@ -40,14 +40,22 @@ export const USAGE = `railsieve — shortlist op amps, comparators and diodes fo
 
 Usage:
   railsieve validate [--data DIR]
-  railsieve check DESIGN.json… [--data DIR] [--format text|json|csv] [--topology NAME]
+  railsieve check DESIGN.json… [--data DIR] [--format text|json|csv|markdown|junit] [--topology NAME]
+  railsieve diff BEFORE [AFTER] [--data DIR] [--format text|json|markdown]
   railsieve explain PART-ID DESIGN.json [--role ROLE] [--data DIR]
+  railsieve serve [DIR] [--port N]
 
   --data DIR       catalogue folder (op-amps.csv, comparators.csv, diodes.csv, designs/); default ./data
-  --format F       output of check: text (default), json or csv
+  --format F       output of check: text (default), json, csv, markdown or junit;
+                   of diff: text, json or markdown
+  --guide-url URL  markdown links into the published guide at URL
+  --strict         junit and diff: a marginal budget or design counts as failing
   --topology NAME  evaluate as rectify-and-sign, offset-to-mid-rail, or all (side by side)
   --role ROLE      explain one role only
+  BEFORE, AFTER    diff: data folders, or git:REV for the --data folder at a git
+                   revision (AFTER defaults to the --data folder as it is now)
 
-Exit status: 0 when everything asked holds, 1 when a BOM part fails or a role has no fit,
+Exit status: 0 when everything asked holds, 1 when a BOM part fails or a role has no fit
+(diff: when a design goes from holding to failing or a BOM part stops fitting),
 2 on invalid input.
 `;

@@ -6,11 +6,14 @@ import { TOPOLOGIES, type Topology } from "../core/schemas/design.ts";
 import { flag, UsageError, type ParsedArgs } from "./args.ts";
 import type { Io } from "./io.ts";
 import { loadForCheck } from "./load.ts";
+import { guideLinks } from "./guide-links.ts";
 import { renderCsv } from "./render-csv.ts";
+import { renderJunit } from "./render-junit.ts";
+import { renderCheckMarkdown } from "./render-markdown.ts";
 import { renderJson } from "./render-json.ts";
 import { renderDesignText } from "./render-text.ts";
 
-const FORMATS = ["text", "json", "csv"] as const;
+const FORMATS = ["text", "json", "csv", "markdown", "junit"] as const;
 
 export function evaluateFiles(args: ParsedArgs, data: string): DesignResult[] {
   if (args.positional.length === 0) throw new UsageError("check needs at least one design file");
@@ -36,10 +39,13 @@ export function evaluateFiles(args: ParsedArgs, data: string): DesignResult[] {
 export function runCheck(args: ParsedArgs, data: string, io: Io): number {
   const format = flag(args, "format") ?? "text";
   if (!(FORMATS as readonly string[]).includes(format))
-    throw new UsageError(`unknown format '${format}' (expected text, json or csv)`);
+    throw new UsageError(`unknown format '${format}' (expected text, json, csv, markdown or junit)`);
+  const links = guideLinks(flag(args, "guide-url"));
   const results = evaluateFiles(args, data);
   if (format === "json") io.out(renderJson(results));
   else if (format === "csv") io.out(renderCsv(results));
+  else if (format === "markdown") io.out(renderCheckMarkdown(results, links));
+  else if (format === "junit") io.out(renderJunit(results, args.flags.has("strict")));
   else io.out(results.map((r) => renderDesignText(r, io)).join("\n"));
   return results.every((r) => designHolds(r)) ? 0 : 1;
 }

@@ -3,6 +3,7 @@
 import { InputError } from "../core/problems.ts";
 import { flag, parseArgs, UsageError, USAGE } from "./args.ts";
 import { runCheck } from "./check.ts";
+import { runDiff } from "./diff.ts";
 import { runExplain } from "./explain.ts";
 import type { Io } from "./io.ts";
 import { dataDir, renderProblems } from "./load.ts";
@@ -24,13 +25,15 @@ export async function main(argv: readonly string[], io: Io): Promise<number> {
         return runValidate(data, io);
       case "check":
         return runCheck(args, data, io);
+      case "diff":
+        return runDiff(args, data, io);
       case "explain":
         return runExplain(args, data, io);
       case undefined:
         io.err(USAGE);
         return 2;
       default:
-        throw new UsageError(`unknown command '${args.command}' (expected validate, check or explain)`);
+        throw new UsageError(`unknown command '${args.command}' (expected validate, check, diff, explain or serve)`);
     }
   } catch (e) {
     if (e instanceof UsageError) {
