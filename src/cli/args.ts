@@ -43,7 +43,7 @@ Usage:
   railsieve check DESIGN.json… [--data DIR] [--format text|json|csv|markdown|junit] [--topology NAME]
   railsieve diff BEFORE [AFTER] [--data DIR] [--format text|json|markdown]
   railsieve explain PART-ID DESIGN.json [--role ROLE] [--data DIR]
-  railsieve serve [DIR] [--port N]
+  railsieve serve [DIR] [--port N]           (DIR: the built guide, default dist)
 
   --data DIR       catalogue folder (op-amps.csv, comparators.csv, diodes.csv, designs/); default ./data
   --format F       output of check: text (default), json, csv, markdown or junit;
@@ -52,6 +52,7 @@ Usage:
   --strict         junit and diff: a marginal budget or design counts as failing
   --topology NAME  evaluate as rectify-and-sign, offset-to-mid-rail, or all (side by side)
   --role ROLE      explain one role only
+  --port N         serve: the port on 127.0.0.1 (default 4800)
   BEFORE, AFTER    diff: data folders, or git:REV for the --data folder at a git
                    revision (AFTER defaults to the --data folder as it is now)
 

@@ -5,6 +5,7 @@ import { flag, parseArgs, UsageError, USAGE } from "./args.ts";
 import { runCheck } from "./check.ts";
 import { runDiff } from "./diff.ts";
 import { runExplain } from "./explain.ts";
+import { runServe } from "./serve.ts";
 import type { Io } from "./io.ts";
 import { dataDir, renderProblems } from "./load.ts";
 import { runValidate } from "./validate.ts";
@@ -29,6 +30,8 @@ export async function main(argv: readonly string[], io: Io): Promise<number> {
         return runDiff(args, data, io);
       case "explain":
         return runExplain(args, data, io);
+      case "serve":
+        return await runServe(args, io);
       case undefined:
         io.err(USAGE);
         return 2;
