@@ -5,15 +5,16 @@ import { flag, parseArgs, UsageError, USAGE } from "./args.ts";
 import { runCheck } from "./check.ts";
 import { runDiff } from "./diff.ts";
 import { runExplain } from "./explain.ts";
+import { safeIo, type Io } from "./io.ts";
 import { runServe } from "./serve.ts";
-import type { Io } from "./io.ts";
 import { dataDir, renderProblems } from "./load.ts";
 import { runValidate } from "./validate.ts";
 
-export async function main(argv: readonly string[], io: Io): Promise<number> {
+export async function main(argv: readonly string[], rawIo: Io): Promise<number> {
+  let io = safeIo(rawIo);
   try {
     const args = parseArgs(argv);
-    if (args.flags.has("no-color")) io = { ...io, color: false };
+    if (args.flags.has("no-color")) io = safeIo({ ...rawIo, color: false });
     if (args.flags.has("help") || args.command === "help") {
       io.out(USAGE);
       return 0;

@@ -45,6 +45,7 @@ function setup(): void {
         name: tr.dataset.name ?? "",
         tags: (tr.dataset.tags ?? "").split(";").filter((t) => t !== ""),
         notes: tr.dataset.notes ?? "",
+        status: tr.dataset.status ?? "",
       },
     }));
     return { el, body, section, rows };

@@ -1,6 +1,8 @@
 // One input problem, as data first; formatProblem gives the house sentence
 // "file:line: column 'name': what is wrong (got 'value', expected …)".
 
+import { visibleText } from "./text-safety.ts";
+
 export type Problem = {
   file: string;
   /** Line as counted in a text editor (header = 1). */
@@ -16,17 +18,10 @@ export function formatProblem(p: Problem): string {
   const where = p.line === undefined ? p.file : `${p.file}:${p.line}`;
   const what =
     p.column !== undefined ? ` column '${p.column}':` : p.path !== undefined && p.path !== "" ? ` ${p.path}:` : "";
-  return visible(`${where}:${what} ${p.message}`);
-}
-
-// eslint-disable-next-line no-control-regex -- matching control characters is the point
-const CONTROL = /[\u0000-\u001f\u007f-\u009f\u2028\u2029]/g;
-const NAMED: Readonly<Record<string, string>> = { "\n": "\\n", "\r": "\\r", "\t": "\\t" };
-
-// Quoted cells may hold line breaks or terminal escapes; shown raw they would
-// split one problem over several lines or repaint the user's terminal.
-function visible(text: string): string {
-  return text.replace(CONTROL, (c) => NAMED[c] ?? `\\u${c.charCodeAt(0).toString(16).padStart(4, "0")}`);
+  // Quoted cells may hold line breaks, terminal escapes or bidirectional
+  // overrides; shown raw they would split one problem over several lines,
+  // repaint the user's terminal or reverse the message.
+  return visibleText(`${where}:${what} ${p.message}`);
 }
 
 /** Raised for input that cannot be used; carries every problem found, never a stack. */

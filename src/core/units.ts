@@ -114,6 +114,17 @@ function toSignificant(value: number, digits: number): string {
   return value.toFixed(Math.min(decimals, 20));
 }
 
+/**
+ * A fraction as a percentage with up to three significant figures and no SI
+ * prefix: 0.001 → "0.1 %", never "100 m%" (a milli-percent reads as nonsense).
+ */
+export function formatPercent(fraction: number): string {
+  if (!Number.isFinite(fraction)) return formatSI(fraction * 100, "%");
+  const pct = Number((fraction * 100).toPrecision(3));
+  const body = Math.abs(pct) < 1e-6 ? "0" : String(Math.abs(pct));
+  return `${pct < 0 && body !== "0" ? MINUS : ""}${body} %`;
+}
+
 /** Volts with two decimals, the convention of every reason sentence ("+2.60 V", "−4.18 V"). */
 export function formatVolts(value: number, options: { signed?: boolean } = {}): string {
   const decimals = Math.abs(value) >= 99.995 ? 0 : 2;

@@ -7,7 +7,9 @@ import { escapeHtml } from "./escape.ts";
 
 const WIDTH = 640;
 const LABEL_W = 250;
-const VALUE_W = 80;
+// Room right of the longest bar for its value and the "◆ largest" mark
+// ("999 mV ◆ largest", 16 characters at about 7 px each in the 12 px font).
+const VALUE_W = 130;
 const ROW_H = 22;
 
 export function renderBudgetChart(budget: Budget, idPrefix = "budget"): string {

@@ -69,6 +69,7 @@ const POLICY_LABELS: Readonly<Record<keyof Policy, string>> = {
   speed_share: "Speed share",
   sign_share: "Sign share",
   timing_fraction: "Timing fraction",
+  timing_share: "Timing share",
   allow_unrated: "Allow unrated",
 };
 

@@ -1,11 +1,56 @@
-// Fuzzy search over catalogue classes (id, name, tags, notes). Pure, so the
+// Fuzzy search over catalogue classes (id, name, tags, notes, kind and status words). Pure, so the
 // catalogue page's browser script and the unit tests build the same index.
 import Fuse, { type IFuseOptions } from "fuse.js";
 
 /** What the search sees of one class; built from a Part at build time. */
-export type SearchDoc = { id: string; kind: string; name: string; tags: readonly string[]; notes: string };
+export type SearchDoc = {
+  id: string;
+  kind: string;
+  name: string;
+  tags: readonly string[];
+  notes: string;
+  status?: string;
+};
 
 type Indexed = { doc: SearchDoc; id: string; name: string; tags: string; notes: string };
+
+/**
+ * Kind and status words filter exactly rather than fuzzily: "comparator" should
+ * list the comparators, not every class whose notes look a bit like it.
+ */
+const KIND_WORDS: Readonly<Record<string, string>> = {
+  "op amp": "op-amp",
+  "op amps": "op-amp",
+  opamp: "op-amp",
+  opamps: "op-amp",
+  comparator: "comparator",
+  comparators: "comparator",
+  diode: "diode",
+  diodes: "diode",
+};
+const STATUS_WORDS: readonly string[] = ["stocked", "approved", "listed"];
+
+type Filters = { kind?: string; status?: string; rest: string };
+
+/** Takes the kind and status words out of a normalized query. */
+function filtersOf(query: string): Filters {
+  const filters: Filters = { rest: query };
+  let rest = ` ${query} `;
+  for (const [words, kind] of Object.entries(KIND_WORDS)) {
+    if (rest.includes(` ${words} `)) {
+      filters.kind = kind;
+      rest = rest.replace(` ${words} `, " ");
+    }
+  }
+  for (const status of STATUS_WORDS) {
+    if (rest.includes(` ${status} `)) {
+      filters.status = status;
+      rest = rest.replace(` ${status} `, " ");
+    }
+  }
+  filters.rest = rest.trim();
+  return filters;
+}
 
 /**
  * Hyphens, slashes and underscores become spaces on both sides, so a query
@@ -51,7 +96,14 @@ export function buildSearchIndex(docs: readonly SearchDoc[]): SearchIndex {
     search(query) {
       const q = normalize(query);
       if (q === "") return docs.map((d) => ({ id: d.id, score: 0 }));
-      return fuse.search(q).map((r) => ({ id: r.item.doc.id, score: r.score ?? 0 }));
+      const { kind, status, rest } = filtersOf(q);
+      const keep = (d: SearchDoc) =>
+        (kind === undefined || d.kind === kind) && (status === undefined || d.status === status);
+      if (rest === "") return docs.filter(keep).map((d) => ({ id: d.id, score: 0 }));
+      return fuse
+        .search(rest)
+        .filter((r) => keep(r.item.doc))
+        .map((r) => ({ id: r.item.doc.id, score: r.score ?? 0 }));
     },
   };
 }

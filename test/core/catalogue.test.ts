@@ -60,7 +60,7 @@ describe("fixture folders (one defect each, test/fixtures/catalogue/)", () => {
           "comparators.csv:3: column 'id': duplicate id (got 'cmp-od-gp', expected an id not already used in comparators.csv)",
         ],
         "empty-file": [
-          "comparators.csv: file is empty (expected a header row: id,name,status,cost_band,tags,notes,channels,supply_min_v,supply_max_v,icm_neg_headroom_v,icm_pos_headroom_v,output,out_neg_headroom_v,out_pos_headroom_v,vos_max_mv,tpd_ns,hysteresis_mv,iq_ma)",
+          "comparators.csv: file is empty (expected a header row: id,name,status,cost_band,tags,notes,channels,supply_min_v,supply_max_v,icm_neg_headroom_v,icm_pos_headroom_v,output,out_neg_headroom_v,out_pos_headroom_v,vos_max_mv,tpd_ns,tpd_overdrive_mv,hysteresis_mv,iq_ma,vdiff_max_v,iout_max_ma)",
         ],
         "extra-cells": [
           "diodes.csv:3: row has 15 cells (got 1 more than the header, expected 14; is there an unquoted comma?)",
@@ -193,11 +193,11 @@ describe("parseCatalogueText", () => {
     const text = `${[...renamed.filter((c) => c !== "gbw_mhz"), "tags", "colour"].join(",")}\n`;
     expect(textProblems("op-amp", text)).toMatchInlineSnapshot(`
       [
-        "op-amps.csv:1: column 'remarks': unknown column (got 'remarks', expected one of id, name, status, cost_band, tags, notes, channels, supply_min_v, supply_max_v, icm_neg_headroom_v, icm_pos_headroom_v, out_neg_headroom_v, out_pos_headroom_v, out_load_ohm, vos_max_mv, vos_drift_uv_per_c, ib_max_na, gbw_mhz, slew_v_per_us, iq_ma, noise_nv_rthz, unity_gain_stable, phase_reversal)",
+        "op-amps.csv:1: column 'remarks': unknown column (got 'remarks', expected one of id, name, status, cost_band, tags, notes, channels, supply_min_v, supply_max_v, icm_neg_headroom_v, icm_pos_headroom_v, out_neg_headroom_v, out_pos_headroom_v, out_load_ohm, vos_max_mv, vos_drift_uv_per_c, ib_max_na, gbw_mhz, slew_v_per_us, iq_ma, noise_nv_rthz, unity_gain_stable, phase_reversal, input_fet, vdiff_max_v, overload_recovery_us, iout_max_ma)",
         "op-amps.csv:1: column 'Supply_Max_V': unknown column (got 'Supply_Max_V', expected 'supply_max_v')",
         "op-amps.csv:1: column 'slew_v_us': unknown column (got 'slew_v_us', expected 'slew_v_per_us')",
         "op-amps.csv:1: column 'tags': column appears twice (expected each column once)",
-        "op-amps.csv:1: column 'colour': unknown column (got 'colour', expected one of id, name, status, cost_band, tags, notes, channels, supply_min_v, supply_max_v, icm_neg_headroom_v, icm_pos_headroom_v, out_neg_headroom_v, out_pos_headroom_v, out_load_ohm, vos_max_mv, vos_drift_uv_per_c, ib_max_na, gbw_mhz, slew_v_per_us, iq_ma, noise_nv_rthz, unity_gain_stable, phase_reversal)",
+        "op-amps.csv:1: column 'colour': unknown column (got 'colour', expected one of id, name, status, cost_band, tags, notes, channels, supply_min_v, supply_max_v, icm_neg_headroom_v, icm_pos_headroom_v, out_neg_headroom_v, out_pos_headroom_v, out_load_ohm, vos_max_mv, vos_drift_uv_per_c, ib_max_na, gbw_mhz, slew_v_per_us, iq_ma, noise_nv_rthz, unity_gain_stable, phase_reversal, input_fet, vdiff_max_v, overload_recovery_us, iout_max_ma)",
         "op-amps.csv:1: column 'supply_max_v': required column is missing (expected it in the header)",
         "op-amps.csv:1: column 'gbw_mhz': required column is missing (expected it in the header)",
         "op-amps.csv:1: column 'slew_v_per_us': required column is missing (expected it in the header)",

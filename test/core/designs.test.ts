@@ -31,6 +31,7 @@ describe("parseDesignValue", () => {
       speed_share: 0.25,
       sign_share: 0.5,
       timing_fraction: 0.01,
+      timing_share: 0.25, // issue 16: a stage's timing error (dead time, late sign) against required_v
       allow_unrated: false,
     });
   });
@@ -173,7 +174,7 @@ describe("parseDesignValue", () => {
     ).toMatchInlineSnapshot(`
       {
         "far from any": [
-          "designs/test-design.json: front_end.colour: unknown key (got 'colour', expected one of 'window_v', 'divider_total_ohm', 'resistor_tolerance', 'series', 'rectifier_load_ohm')",
+          "designs/test-design.json: front_end.colour: unknown key (got 'colour', expected one of 'window_v', 'divider_total_ohm', 'resistor_tolerance', 'series', 'rectifier_load_ohm', 'sign_series_ohm')",
         ],
         "inside a charge pump": [
           "designs/test-design.json: supply.negative.flying_cap_f: required value is missing (got nothing, expected a number (or a string such as "100k"), greater than 0)",
@@ -301,8 +302,15 @@ describe("parseDesignValue", () => {
         "window wider than the ADC": { front_end: { window_v: 3 }, adc: { reference_v: 2.5 } },
         "V_IL not below V_IH": { logic: { vil_v: 3.5 } },
         "V_IH above V_DD": { logic: { vih_v: 3.5, vdd_v: 3.3 } },
+        // The converter runs from the positive rail; its reference cannot sit above it.
+        "ADC reference above V+": {
+          supply: { positive_v: 3.3 },
+          front_end: { window_v: 2.5 },
+          adc: { reference_v: 5 },
+        },
         "temperature upside down": { temperature: { min_c: 85, max_c: -40 } },
         "pump drive above V+": {
+          adc: { reference_v: 3.3 },
           supply: {
             positive_v: 3.3,
             negative: {
@@ -318,6 +326,9 @@ describe("parseDesignValue", () => {
       }),
     ).toMatchInlineSnapshot(`
       {
+        "ADC reference above V+": [
+          "designs/test-design.json: adc.reference_v: ADC reference is above the positive rail (got 5 V, expected at most supply.positive_v 3.3 V)",
+        ],
         "V_IH above V_DD": [
           "designs/test-design.json: logic.vih_v: logic-high threshold is above the logic supply (got 3.5 V, expected at most logic.vdd_v 3.3 V)",
         ],

@@ -35,6 +35,24 @@ describe("renderBudgetChart", () => {
     expect(svg).toContain("◆ largest");
   });
 
+  it("keeps the largest term's value and mark inside the picture when it nearly fills the scale", () => {
+    const crowded: Budget = {
+      ...budget,
+      terms: [{ name: "reference", label: "reference", v: 0.0999, calibrates_out: true }],
+      worst_case_v: 0.0999,
+      rss_v: 0.0999,
+      required_v: 0.05,
+    };
+    const out = renderBudgetChart(crowded);
+    const width = Number(/viewBox="0 0 (\d+)/.exec(out)?.[1]);
+    // Left-anchored value texts: x plus about 7 px per character (12 px sans) must stay inside.
+    const ends = [...out.matchAll(/<text class="budget-value" x="([\d.]+)"[^>]*>([^<]*)</g)].map(
+      (m) => Number(m[1]) + 7 * m[2]!.length,
+    );
+    expect(ends.length).toBe(3);
+    for (const end of ends) expect(end).toBeLessThanOrEqual(width);
+  });
+
   it("uses no style attribute (the CSP allows none)", () => {
     expect(svg).not.toMatch(/\sstyle=/);
   });

@@ -124,6 +124,7 @@ describe("inputGroups", () => {
       "Speed share": "25 % (0.25), default",
       "Sign share": "50 % (0.5), default",
       "Timing fraction": "1 % (0.01), default",
+      "Timing share": "25 % (0.25), default",
       "Allow unrated": "yes, set in the design",
     });
   });

@@ -97,6 +97,46 @@ describe("search over the demo catalogue", () => {
     ).toEqual(tagged);
   });
 
+  it.each([
+    ["comparator", (p: { kind: string }) => p.kind === "comparator"],
+    ["diode", (p: { kind: string }) => p.kind === "diode"],
+    ["op amp", (p: { kind: string }) => p.kind === "op-amp"],
+    ["Comparators", (p: { kind: string }) => p.kind === "comparator"],
+  ] as const)('the kind word "%s" finds exactly the classes of that kind', (query, isKind) => {
+    const expected = catalogue.parts.filter(isKind).map((p) => p.id);
+    expect(expected.length).toBeGreaterThan(5);
+    expect(
+      index
+        .search(query)
+        .map((h) => h.id)
+        .sort(),
+    ).toEqual([...expected].sort());
+  });
+
+  it('kind, status and other words combine: "stocked schottky diode"', () => {
+    const expected = catalogue.parts
+      .filter((p) => p.kind === "diode" && p.status === "stocked" && p.type === "schottky")
+      .map((p) => p.id);
+    expect(expected.length).toBeGreaterThan(0);
+    expect(
+      index
+        .search("stocked schottky diode")
+        .map((h) => h.id)
+        .sort(),
+    ).toEqual([...expected].sort());
+  });
+
+  it('the status word "stocked" finds exactly the stocked classes', () => {
+    const stocked = catalogue.parts.filter((p) => p.status === "stocked").map((p) => p.id);
+    expect(stocked.length).toBeGreaterThan(5);
+    expect(
+      index
+        .search("stocked")
+        .map((h) => h.id)
+        .sort(),
+    ).toEqual([...stocked].sort());
+  });
+
   it('"schotky" finds only the Schottky diodes', () => {
     const schottky = catalogue.parts
       .filter((p) => p.kind === "diode" && p.type === "schottky")

@@ -8,6 +8,7 @@ import type { DesignResult } from "../../core/engine/result.ts";
 
 export const CSV_HEADER = [
   "design",
+  "topology",
   "role",
   "list",
   "rank",
@@ -27,9 +28,17 @@ function notPassed(p: PartResult) {
   return p.findings.filter((f) => f.verdict !== "pass");
 }
 
-/** The sheet's text: UTF-8 with a byte-order mark (so spreadsheets read "µ" and "−"), CRLF line ends. */
+/**
+ * The sheet's text: UTF-8 with a byte-order mark (so spreadsheets read "µ" and "−"), CRLF line ends.
+ * A design compared across topologies gives every topology's rows, each named.
+ */
 export function shortlistCsv(result: DesignResult): string {
   const lines = [csvLine(CSV_HEADER)];
+  for (const one of result.comparison?.results ?? [result]) pushRows(lines, one);
+  return `\uFEFF${lines.join("\r\n")}\r\n`;
+}
+
+function pushRows(lines: string[], result: DesignResult): void {
   for (const role of result.roles) {
     for (const [list, parts] of [
       ["fit", role.fits],
@@ -40,6 +49,7 @@ export function shortlistCsv(result: DesignResult): string {
         lines.push(
           csvLine([
             result.design.id,
+            result.topology,
             role.role,
             list,
             index + 1,
@@ -57,7 +67,6 @@ export function shortlistCsv(result: DesignResult): string {
       });
     }
   }
-  return `\uFEFF${lines.join("\r\n")}\r\n`;
 }
 
 export function shortlistCsvName(result: DesignResult): string {

@@ -81,7 +81,7 @@ export function rawFromDraft(draft: Readonly<Draft>): Record<string, unknown> {
     if (!applies(f, draft)) continue;
     const text = draft[f.path] ?? "";
     if (text.trim() === "") continue;
-    const value = f.path === "policy.allow_unrated" && (text === "true" || text === "false") ? text === "true" : text;
+    const value = f.boolean && (text === "true" || text === "false") ? text === "true" : text;
     setAt(raw, f.path, value);
   }
   return raw;

@@ -35,6 +35,8 @@ type Base = {
   when?: (draft: Readonly<Record<string, string>>) => boolean;
   /** May be left empty (policy overrides, BOM). */
   optional?: boolean;
+  /** A yes/no choice whose values "true"/"false" go into the file as JSON booleans. */
+  boolean?: true;
 };
 
 export type NumberField = Base & { type: "number"; unit: string; style: NumberStyle; placeholder?: string };
@@ -48,6 +50,8 @@ export type Field = NumberField | TextField | ChoiceField | PartField;
 const isPump = (d: Readonly<Record<string, string>>) => d["supply.negative.kind"] === "charge-pump";
 const isFixed = (d: Readonly<Record<string, string>>) => d["supply.negative.kind"] === "fixed";
 const isClamp = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] === "diode-clamp";
+const isNpn = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] === "npn-inverter";
+const pulledUp = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] !== "diode-clamp";
 // Roles per topology as the engine's rolesOf has them; "all" compares both front ends.
 const rectifies = (d: Readonly<Record<string, string>>) => d["topology"] !== "offset-to-mid-rail";
 const shifts = (d: Readonly<Record<string, string>>) =>
@@ -128,6 +132,11 @@ export const FIELDS: readonly Field[] = [
   num("supply.negative.flying_cap_f", "supply", "Flying capacitor", "F", { when: isPump }),
   num("supply.negative.reservoir_cap_f", "supply", "Reservoir capacitor", "F", { when: isPump }),
   num("supply.negative.load_a", "supply", "Load on V−", "A", { when: isPump }),
+  num("supply.negative.drive_ohm", "supply", "Drive pin output resistance", "Ω", {
+    when: isPump,
+    optional: true,
+    hint: "optional; empty counts none",
+  }),
 
   num("signal.peak_v", "signal", "Peak signal (±)", "V"),
   num("signal.max_frequency_hz", "signal", "Highest signal frequency", "Hz"),
@@ -144,6 +153,7 @@ export const FIELDS: readonly Field[] = [
     choices: SERIES.map((s) => ({ value: s, label: s })),
   },
   num("front_end.rectifier_load_ohm", "front_end", "Rectifier resistors", "Ω"),
+  num("front_end.sign_series_ohm", "front_end", "Series resistor into the sign input", "Ω", { optional: true }),
 
   num("adc.bits", "adc", "ADC resolution", "bits", plain),
   num("adc.reference_v", "adc", "ADC reference", "V"),
@@ -160,6 +170,34 @@ export const FIELDS: readonly Field[] = [
     choices: LEVEL_SHIFTS.map((s) => ({ value: s, label: s })),
   },
   num("logic.pull_down_ohm", "logic", "Pull-down resistor", "Ω"),
+  num("logic.pin_min_v", "logic", "Lowest level the logic input tolerates", "V", {
+    ...plain,
+    optional: true,
+    hint: "optional; empty is −0.3 V",
+  }),
+  num("logic.pull_up_ohm", "logic", "Pull-up resistor", "Ω", { optional: true, when: pulledUp }),
+  num("logic.pin_cap_f", "logic", "Logic pin capacitance", "F", { optional: true, placeholder: "10p" }),
+  num("logic.npn_base_ohm", "logic", "NPN base resistor", "Ω", { optional: true, when: isNpn }),
+  {
+    path: "logic.npn_base_clamp",
+    group: "logic",
+    label: "NPN base clamp diode",
+    type: "choice",
+    optional: true,
+    boolean: true,
+    when: isNpn,
+    choices: [
+      { value: "", label: "none" },
+      { value: "true", label: "diode across base and emitter" },
+      { value: "false", label: "none (stated)" },
+    ],
+  },
+  num("logic.npn_vebo_v", "logic", "NPN emitter-base rating V_EBO", "V", {
+    optional: true,
+    when: isNpn,
+    placeholder: "5",
+  }),
+  num("logic.npn_storage_s", "logic", "NPN storage time", "s", { optional: true, when: isNpn, placeholder: "300n" }),
 
   num("accuracy.required_v", "accuracy", "Required accuracy (input-referred)", "V"),
   num("temperature.min_c", "accuracy", "Lowest temperature", "°C", plain),
@@ -170,13 +208,15 @@ export const FIELDS: readonly Field[] = [
   policyNumber("offset_share", "Offset share of the accuracy", "fraction"),
   policyNumber("speed_share", "Bandwidth-error share of the accuracy", "fraction"),
   policyNumber("sign_share", "Dead-band share of the accuracy", "fraction"),
-  policyNumber("timing_fraction", "Timing share of the signal period", "fraction"),
+  policyNumber("timing_fraction", "Pump-diode recovery share of its half period", "fraction"),
+  policyNumber("timing_share", "Timing-error share of the accuracy (dead time, late sign)", "fraction"),
   {
     path: "policy.allow_unrated",
     group: "policy",
     label: "Accept unrated parts as marginal",
     type: "choice",
     optional: true,
+    boolean: true,
     choices: [
       { value: "", label: `default (${POLICY_DEFAULTS.allow_unrated ? "yes" : "no"})` },
       { value: "true", label: "yes" },

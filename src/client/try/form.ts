@@ -4,7 +4,7 @@
 // the BOM lists once the catalogue has arrived. Text goes in via textContent.
 import type { Part } from "../../core/catalogue.ts";
 import type { Problem } from "../../core/problems.ts";
-import { parseSI, formatSI } from "../../core/units.ts";
+import { parseSI, formatSI, formatPercent } from "../../core/units.ts";
 import { OFFSET_TO_MID_RAIL_ROLES } from "../../core/engine/topologies/offset-to-mid-rail.ts";
 import { RECTIFY_AND_SIGN_ROLES } from "../../core/engine/topologies/rectify-and-sign.ts";
 import type { RoleSpec } from "../../core/engine/run-role.ts";
@@ -64,7 +64,7 @@ export function showParsed(doc: Document, field: Field, text: string): void {
   let shown = "";
   // A plain "5" needs no echo; "4.7u", "2e3" and fractions (shown as a percentage) do.
   if (parsed?.ok) {
-    if (field.unit === "fraction") shown = `= ${formatSI(parsed.value * 100, "%", { digits: 3 })}`;
+    if (field.unit === "fraction") shown = `= ${formatPercent(parsed.value)}`;
     else if (field.style === "si" && /[^\d.+-]/.test(text.trim())) shown = `= ${formatSI(parsed.value, field.unit)}`;
   }
   if (out.textContent !== shown) out.textContent = shown;

@@ -78,6 +78,8 @@ export type UrlState = {
   /** "fields": the fields in `replaced` took their default; "defaults": the whole link was unusable. */
   fallback: "none" | "fields" | "defaults";
   replaced: string[];
+  /** Fields a short link leaves out, which take their defaults: a choice, not a problem. */
+  defaulted: string[];
 };
 
 /** Design-level checks that need the catalogue (BOM ids, pump collapse), run after the schema. */
@@ -98,6 +100,7 @@ export function stateFromUrl(search: string, defaults: Readonly<Draft>, check: D
       problems,
       fallback: problems.length > 0 ? "defaults" : "none",
       replaced: [],
+      defaulted: [],
     };
   };
   if (search.replace(/^[?#]/, "").trim() === "") return fallback([]);
@@ -111,21 +114,17 @@ export function stateFromUrl(search: string, defaults: Readonly<Draft>, check: D
   }
   const completed = completeDraft(decoded.values, defaults);
   let draft = completed.draft;
-  const replaced = [...completed.missing];
-  if (replaced.length > 0) {
-    const n = replaced.length;
-    problems.push({
-      file: LINK,
-      message: `link leaves out ${n} field${n === 1 ? "" : "s"} (${listed(replaced)}); ${n === 1 ? "it shows its" : "they show their"} default`,
-    });
-  }
+  // A short link (`?signal.peak_v=3`) is a valid way to start from the defaults.
+  const defaulted = completed.missing;
+  const replaced: string[] = [];
   // Each pass resets the fields the schema or the engine objects to; a cross-field
   // check can blame a field only once the fields it compares with are valid.
   for (let pass = 0; pass < 4; pass++) {
     const found = problemsOf(draft, check);
     if (found.length === 0) {
       const design = checkDraft(draft).design;
-      if (design) return { draft, design, problems, fallback: replaced.length > 0 ? "fields" : "none", replaced };
+      if (design)
+        return { draft, design, problems, fallback: replaced.length > 0 ? "fields" : "none", replaced, defaulted };
     }
     problems.push(...found.filter((p) => !problems.some((q) => q.path === p.path && q.message === p.message)));
     const reset = fieldsAt(found);
@@ -140,20 +139,14 @@ export function stateFromUrl(search: string, defaults: Readonly<Draft>, check: D
 }
 
 /**
- * Fields a link leaves out take their default, all named in one problem: a link
- * this page wrote has every field the design uses, so a gap means it was cut
- * or edited by hand, and a list of "required value is missing" would bury
- * whatever else is wrong.
+ * Fields a link leaves out take their default, so a hand-written short link
+ * works; a list of "required value is missing" would bury whatever is wrong.
  */
 function completeDraft(values: Readonly<Draft>, defaults: Readonly<Draft>): { draft: Draft; missing: string[] } {
   const draft: Draft = {};
   for (const f of FIELDS) draft[f.path] = values[f.path] ?? (f.optional ? "" : (defaults[f.path] ?? ""));
   const missing = FIELDS.filter((f) => !f.optional && !(f.path in values) && applies(f, draft)).map((f) => f.path);
   return { draft, missing };
-}
-
-function listed(paths: readonly string[]): string {
-  return paths.length <= 4 ? paths.join(", ") : `${paths.slice(0, 3).join(", ")} and ${paths.length - 3} more`;
 }
 
 function problemsOf(draft: Readonly<Draft>, check: DesignCheck): Problem[] {

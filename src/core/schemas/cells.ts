@@ -4,6 +4,7 @@
 // Column metadata (unit, label) rides on the schema via .meta() so the site and
 // the validator read it from one place.
 import { z } from "zod";
+import { firstUnsafe, unsafeTextMessage } from "../text-safety.ts";
 import { siValue } from "../units.ts";
 
 export type ColumnMeta = {
@@ -189,12 +190,18 @@ export function optionalText(meta: ColumnMeta) {
   return optionalCell((raw, ctx) => checkLength((raw ?? "").trim(), ctx), meta);
 }
 
+/** Length and characters of a text cell: control characters and bidirectional overrides are refused. */
 function checkLength(text: string, ctx: Issues): string {
-  if (text.length <= MAX_TEXT_LENGTH) return text;
-  ctx.addIssue({
-    code: "custom",
-    message: `text is ${text.length} characters long (expected at most ${MAX_TEXT_LENGTH})`,
-  });
+  if (text.length > MAX_TEXT_LENGTH) {
+    ctx.addIssue({
+      code: "custom",
+      message: `text is ${text.length} characters long (expected at most ${MAX_TEXT_LENGTH})`,
+    });
+    return z.NEVER;
+  }
+  const unsafe = firstUnsafe(text);
+  if (unsafe === undefined) return text;
+  ctx.addIssue({ code: "custom", message: unsafeTextMessage(unsafe) });
   return z.NEVER;
 }
 

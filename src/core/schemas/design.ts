@@ -2,6 +2,7 @@
 // "100k") is accepted wherever a number is. DesignInput is what a user writes,
 // Design the cleaned value with policy defaults filled in.
 import { z } from "zod";
+import { firstUnsafe, unsafeTextMessage } from "../text-safety.ts";
 import { ID_PATTERN } from "./cells.ts";
 import { closest } from "../problems.ts";
 import { parseSI } from "../units.ts";
@@ -97,6 +98,7 @@ export const POLICY_DEFAULTS = {
   speed_share: 0.25,
   sign_share: 0.5,
   timing_fraction: 0.01,
+  timing_share: 0.25,
   allow_unrated: false,
 } as const;
 
@@ -107,6 +109,8 @@ const chargePump = z.strictObject({
   flying_cap_f: si({ above: 0 }),
   reservoir_cap_f: si({ above: 0 }),
   load_a: si({ min: 0 }),
+  // Optional (issue 16): output resistance of the pin that drives the pump.
+  drive_ohm: si({ min: 0, max: 1e6 }).optional(),
 });
 
 const negativeSupply = z
@@ -136,6 +140,7 @@ const policy = z
     speed_share: si({ above: 0, max: 1 }).optional(),
     sign_share: si({ above: 0, max: 1 }).optional(),
     timing_fraction: si({ above: 0, max: 1 }).optional(),
+    timing_share: si({ above: 0, max: 1 }).optional(),
     allow_unrated: z
       .boolean({ error: (i) => `not true or false (got ${shown(i.input)}, expected true or false)` })
       .optional(),
@@ -149,7 +154,12 @@ function stripUndefined<T extends object>(o: T): Partial<T> {
 
 const text = (what: string, max: number) =>
   z.unknown().transform((value, ctx): string => {
-    if (typeof value === "string" && value.trim() !== "" && value.length <= max) return value;
+    if (typeof value === "string" && value.trim() !== "" && value.length <= max) {
+      const unsafe = firstUnsafe(value);
+      if (unsafe === undefined) return value;
+      ctx.addIssue({ code: "custom", message: `not a valid ${what}: ${unsafeTextMessage(unsafe)}` });
+      return z.NEVER;
+    }
     ctx.addIssue({
       code: "custom",
       message: `not a valid ${what} (got ${shown(value)}, expected text of 1 to ${max} characters)`,
@@ -202,6 +212,8 @@ export const designSchema = z
       resistor_tolerance: si({ min: 0, max: 0.2 }),
       series: oneOf(SERIES),
       rectifier_load_ohm: si({ above: 0 }),
+      /** Series resistor into the sign input: limits the current when its input clamps conduct (issue 21). */
+      sign_series_ohm: si({ above: 0 }).optional(),
     }),
     adc: z.strictObject({
       bits: si({ integer: true, min: 1, max: 32 }),
@@ -214,6 +226,23 @@ export const designSchema = z
       vil_v: si({ min: 0 }),
       level_shift: oneOf(LEVEL_SHIFTS),
       pull_down_ohm: si({ above: 0 }),
+      // Optional (issue 16): the lowest level the logic input tolerates; −0.3 V when absent.
+      pin_min_v: si({ min: -100, max: 0 }).optional(),
+      // Sign-path fields (issue 21), all optional; defaults live in math/rc-edge.ts and math/npn-inverter.ts, marked there.
+      /** Capacitance of the logic pin and its trace (default 10 pF, common practice). */
+      pin_cap_f: si({ above: 0 }).optional(),
+      /** Pull-up of the pull-up level shift and the NPN inverter's collector. */
+      pull_up_ohm: si({ above: 0 }).optional(),
+      /** NPN inverter: resistor from the sign output to the base. */
+      npn_base_ohm: si({ above: 0 }).optional(),
+      /** NPN inverter: a diode across base and emitter that stops a negative output reverse-biasing the base. */
+      npn_base_clamp: z
+        .boolean({ error: (i) => `not true or false (got ${shown(i.input)}, expected true or false)` })
+        .optional(),
+      /** NPN inverter: the transistor's emitter-base reverse rating V_EBO (default 5 V, common practice). */
+      npn_vebo_v: si({ above: 0, max: 100 }).optional(),
+      /** NPN inverter: the transistor's storage time when it leaves saturation (default 300 ns, common practice). */
+      npn_storage_s: si({ min: 0, max: 1 }).optional(),
     }),
     accuracy: z.strictObject({ required_v: si({ above: 0 }) }),
     temperature: z.strictObject({ min_c: si({ min: -273.15 }), max_c: si({ max: 500 }) }),
@@ -232,6 +261,13 @@ export const designSchema = z
       issue(
         ["front_end", "window_v"],
         `window is wider than the ADC range (got ${d.front_end.window_v} V, expected at most adc.reference_v ${d.adc.reference_v} V)`,
+      );
+    }
+    // The converter runs from the positive rail; a reference above it would put full scale out of reach.
+    if (d.adc.reference_v > d.supply.positive_v) {
+      issue(
+        ["adc", "reference_v"],
+        `ADC reference is above the positive rail (got ${d.adc.reference_v} V, expected at most supply.positive_v ${d.supply.positive_v} V)`,
       );
     }
     if (d.logic.vil_v >= d.logic.vih_v) {

@@ -21,6 +21,12 @@ export const opAmpColumns = {
   noise_nv_rthz: optionalNumber({ unit: "nV/√Hz", label: "Noise at 1 kHz" }, { min: 0 }),
   unity_gain_stable: requiredYesNo({ unit: "", label: "Unity-gain stable" }),
   phase_reversal: optionalYesNo({ unit: "", label: "Phase reversal" }),
+  // Optional (issue 16): a FET input's bias current doubles about every 10 °C.
+  input_fet: optionalYesNo({ unit: "", label: "FET input" }),
+  // Sign-path ratings (issue 21): empty means not rated, and a rule that needs one says unrated.
+  vdiff_max_v: optionalNumber({ unit: "V", label: "Differential input max" }, { min: 0 }),
+  overload_recovery_us: optionalNumber({ unit: "µs", label: "Overload recovery" }, { min: 0 }),
+  iout_max_ma: optionalNumber({ unit: "mA", label: "Output current max" }, { above: 0 }),
 };
 
 export const opAmpRow = partRow("op-amp", opAmpColumns, checkSupplyAndHeadroom);

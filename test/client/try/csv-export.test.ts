@@ -75,6 +75,24 @@ describe("shortlistCsv", () => {
     expect(cells.filter((c) => /^[=+\-@\t\r]/.test(c))).toEqual([]);
   });
 
+  it("with topology 'all' gives every compared topology's rows, each named in the topology column", () => {
+    const design = checkDraft({ ...DEFAULT_DRAFT, topology: "all" }).design;
+    if (!design) throw new Error("default design with topology all does not validate");
+    const e = evaluateDesign(design, catalogue);
+    if (!e.ok || !e.result.comparison) throw new Error("no comparison");
+    const sheet = Papa.parse<Record<string, string>>(shortlistCsv(e.result).slice(1), {
+      header: true,
+      skipEmptyLines: true,
+    }).data;
+    const expected = e.result.comparison.results.map((r) => r.topology);
+    expect(expected.length).toBeGreaterThan(1);
+    expect([...new Set(sheet.map((r) => r["topology"]))]).toEqual(expected);
+    const perTopology = e.result.comparison.results.map((r) =>
+      r.roles.reduce((n, role) => n + role.fits.length + role.rejected.length, 0),
+    );
+    expect(sheet.length).toBe(perTopology.reduce((a, b) => a + b, 0));
+  });
+
   it("names the file after the design", () => {
     expect(shortlistCsvName(result)).toBe("new-design-parts.csv");
   });

@@ -108,13 +108,24 @@ describe("draftFromInput / rawFromDraft", () => {
     const spec = [
       ...leaves({ ...DEFAULT_INPUT, policy: {} }),
       "supply.negative.v",
+      "supply.negative.drive_ohm", // optional (issue 16)
+      "logic.pin_min_v", // optional (issue 16)
       "policy.headroom_margin_v",
       "policy.marginal_fraction",
       "policy.offset_share",
       "policy.speed_share",
       "policy.sign_share",
       "policy.timing_fraction",
+      "policy.timing_share",
       "policy.allow_unrated",
+      // The optional sign-path fields of issue 21.
+      "front_end.sign_series_ohm",
+      "logic.pull_up_ohm",
+      "logic.pin_cap_f",
+      "logic.npn_base_ohm",
+      "logic.npn_base_clamp",
+      "logic.npn_vebo_v",
+      "logic.npn_storage_s",
       ...[
         "buffer",
         "rectifier",

@@ -99,16 +99,14 @@ describe("tampered links", () => {
     expect(state.design.signal.peak_v).toBe(10);
   });
 
-  it("fills left-out fields from the defaults, named in one problem", () => {
+  it("takes a short link as it is: left-out fields show their defaults, with no problem to report", () => {
     const state = stateFromUrl("?signal.peak_v=3&supply.positive_v=12", DEFAULT_DRAFT);
-    expect(state.problems.map(formatProblem)).toMatchInlineSnapshot(`
-      [
-        "link: link leaves out 27 fields (id, title, topology and 24 more); they show their default",
-      ]
-    `);
+    expect(state.problems).toEqual([]);
     expect(state.design.signal.peak_v).toBe(3);
     expect(state.design.supply.positive_v).toBe(12);
-    expect(state.fallback).toBe("fields");
+    expect(state.fallback).toBe("none");
+    expect(state.defaulted).toHaveLength(27);
+    expect(state.defaulted).toContain("title");
   });
 
   it("resets a BOM part the catalogue does not have (the engine's check)", () => {

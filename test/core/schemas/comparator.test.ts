@@ -43,11 +43,15 @@ describe("comparatorRow", () => {
 });
 
 describe("comparatorColumns", () => {
-  it("lists the SPEC §4 columns in order", () => {
-    expect(Object.keys(comparatorColumns)).toEqual(
-      "id,name,status,cost_band,tags,notes,channels,supply_min_v,supply_max_v,icm_neg_headroom_v,icm_pos_headroom_v,output,out_neg_headroom_v,out_pos_headroom_v,vos_max_mv,tpd_ns,hysteresis_mv,iq_ma".split(
+  it("lists the SPEC §4 columns first, in order, then the optional ones added since", () => {
+    const spec =
+      "id,name,status,cost_band,tags,notes,channels,supply_min_v,supply_max_v,icm_neg_headroom_v,icm_pos_headroom_v,output,out_neg_headroom_v,out_pos_headroom_v,vos_max_mv,tpd_ns,tpd_overdrive_mv,hysteresis_mv,iq_ma".split(
         ",",
-      ),
-    );
+      );
+    expect(Object.keys(comparatorColumns).slice(0, spec.length)).toEqual(spec);
+  });
+
+  it("has the optional sign-path ratings of issue 21, empty meaning not rated", () => {
+    for (const c of ["vdiff_max_v", "iout_max_ma"]) expect(Object.keys(comparatorColumns)).toContain(c);
   });
 });

@@ -85,11 +85,16 @@ describe("opAmpRow", () => {
 });
 
 describe("opAmpColumns", () => {
-  it("lists the SPEC §4 columns in order", () => {
-    expect(Object.keys(opAmpColumns)).toEqual(
-      "id,name,status,cost_band,tags,notes,channels,supply_min_v,supply_max_v,icm_neg_headroom_v,icm_pos_headroom_v,out_neg_headroom_v,out_pos_headroom_v,out_load_ohm,vos_max_mv,vos_drift_uv_per_c,ib_max_na,gbw_mhz,slew_v_per_us,iq_ma,noise_nv_rthz,unity_gain_stable,phase_reversal".split(
+  it("lists the SPEC §4 columns first, in order, then the optional ones added since", () => {
+    const spec =
+      "id,name,status,cost_band,tags,notes,channels,supply_min_v,supply_max_v,icm_neg_headroom_v,icm_pos_headroom_v,out_neg_headroom_v,out_pos_headroom_v,out_load_ohm,vos_max_mv,vos_drift_uv_per_c,ib_max_na,gbw_mhz,slew_v_per_us,iq_ma,noise_nv_rthz,unity_gain_stable,phase_reversal,input_fet".split(
         ",",
-      ),
-    );
+      );
+    expect(Object.keys(opAmpColumns).slice(0, spec.length)).toEqual(spec);
+  });
+
+  it("has the optional sign-path ratings of issue 21, empty meaning not rated", () => {
+    for (const c of ["vdiff_max_v", "overload_recovery_us", "iout_max_ma"])
+      expect(Object.keys(opAmpColumns)).toContain(c);
   });
 });

@@ -1,0 +1,45 @@
+// Reverse voltages (SPEC §11.12) and the clamp diode's polarity (SPEC §11.6).
+// Pump: the flying node swings from +Vf to −(V_d − Vf) (diode charge-pump inverter,
+// no load −(V_d − 2V_F), REFERENCES.md / Winder ch. 14), so each diode blocks
+// V_d − Vf. Logic inputs: −0.3 V lower limit, common practice [M] (REFERENCES.md).
+import { describe, expect, it } from "vitest";
+import { clampLowLevel, PIN_MIN_DEFAULT_V } from "../../../src/core/math/clamp-leakage.ts";
+import { pumpDiodeReverse, rectifierDiodeReverse } from "../../../src/core/math/reverse-voltage.ts";
+
+describe("pumpDiodeReverse (two-diode inverting pump)", () => {
+  it.each([
+    [5, 0.7, 4.3],
+    [3.3, 0.3, 3.0],
+    [0.5, 0.7, 0],
+  ])("drive %d V, Vf %d V → %d V, not the 2 × drive the old rule asked", (drive, vf, vr) => {
+    expect(pumpDiodeReverse(drive, vf)).toBeCloseTo(vr, 12);
+  });
+
+  it("matches the node swing: from +Vf down to the no-load rail minus one drop", () => {
+    const drive = 5;
+    const vf = 0.7;
+    const rail = -(drive - 2 * vf);
+    const nodeLow = rail - vf;
+    expect(pumpDiodeReverse(drive, vf)).toBeCloseTo(0 - nodeLow, 12); // first diode, to ground
+    expect(pumpDiodeReverse(drive, vf)).toBeCloseTo(vf - rail, 12); // second diode, to the rail
+  });
+});
+
+describe("rectifierDiodeReverse (inverting half-wave stage: W + Vf)", () => {
+  it("2.5 V window, 0.7 V drop: 3.2 V", () => {
+    expect(rectifierDiodeReverse(2.5, 0.7)).toBeCloseTo(3.2, 12);
+  });
+});
+
+describe("clampLowLevel (the reverse-biased clamp's leakage pulls the pin below ground)", () => {
+  it("4 µA × 100 kΩ puts the pin at −0.40 V, below −0.30 V (issue 16)", () => {
+    const low = clampLowLevel(-2.5, 4e-6, 100e3);
+    expect(low.reverse_biased).toBe(true);
+    expect(low.level_v.toFixed(2)).toBe("-0.40");
+    expect(low.level_v).toBeLessThan(PIN_MIN_DEFAULT_V);
+  });
+
+  it("a comparator low at or above ground does not reverse-bias the diode: the node is at most that level", () => {
+    expect(clampLowLevel(0.05, 4e-6, 100e3)).toEqual({ level_v: 0.05, reverse_biased: false });
+  });
+});
