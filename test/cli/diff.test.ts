@@ -81,10 +81,11 @@ describe("diff between two data folders", () => {
     const { code, out } = await run("diff", "data", after);
     expect(code).toBe(0);
     const text = out.replaceAll(after, "AFTER");
-    expect(text.split("\n").slice(0, 2).join("\n")).toMatchInlineSnapshot(`
-      "railsieve diff: data → AFTER
-        1 design changes, 6 designs unchanged"
-    `);
+    const designs = readdirSync("data/designs").length;
+    expect(text.split("\n").slice(0, 2)).toEqual([
+      "railsieve diff: data → AFTER",
+      `  1 design changes, ${designs - 1} designs unchanged`,
+    ]);
     expect(text).toContain("best part: oa-cmos-rrio-3m → oa-cmos-rrio-16v");
     expect(text).toContain("result: no design stops holding and no BOM part stops fitting");
   });
