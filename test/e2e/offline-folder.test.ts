@@ -13,6 +13,7 @@ import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { loadDataSet } from "../../src/node/load-data.ts";
 import { buildSearchIndex } from "../../src/site/search-index.ts";
+import { reportPolicyProblems } from "./harness/csp.ts";
 import { browserReady, openBrowser, site } from "./harness/session.ts";
 
 type Element = DefaultTreeAdapterTypes.Element;
@@ -171,12 +172,14 @@ describe.skipIf(!browserReady)("a design's one-file report", () => {
     expect(watch.csp).toEqual([]);
     expect(watch.errors).toEqual([]);
     const seen = await page.evaluate(() => ({
+      csp: document.querySelector('meta[http-equiv="Content-Security-Policy"]')?.getAttribute("content") ?? null,
       bg: getComputedStyle(document.documentElement).getPropertyValue("--bg").trim(),
       h1: document.querySelector("h1")?.textContent ?? "",
       diagrams: [...document.querySelectorAll("svg")].filter((s) => s.getBoundingClientRect().width > 0).length,
       scripts: document.scripts.length,
       links: [...document.querySelectorAll("a[href]")].map((a) => a.getAttribute("href") ?? ""),
     }));
+    expect(reportPolicyProblems(seen.csp)).toEqual([]);
     expect(seen.bg).toBe("#fbfaf6");
     expect(seen.h1.length).toBeGreaterThan(0);
     expect(seen.diagrams).toBeGreaterThan(0);

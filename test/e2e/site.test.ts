@@ -6,7 +6,7 @@ import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { loadDataSet } from "../../src/node/load-data.ts";
 import { crawl, type CrawledPage } from "./harness/crawl.ts";
-import { policyProblems, reportPolicyProblems } from "./harness/csp.ts";
+import { policyProblems } from "./harness/csp.ts";
 import type { SiteName } from "./harness/context.ts";
 import { browserReady, openBrowser, openTracked, troubles, type Tracked } from "./harness/session.ts";
 
@@ -31,9 +31,7 @@ describe.skipIf(!browserReady).each<SiteName>(["demo", "hostile"])("every page o
   });
 
   it("declares a Content-Security-Policy that allows only the site itself on every page", () => {
-    // A design's one-file report is stricter still: it may load nothing at all.
-    const check = (p: CrawledPage) => (p.url.endsWith("/report.html") ? reportPolicyProblems : policyProblems)(p.csp);
-    const wrong = pages.flatMap((p) => check(p).map((problem) => `${p.url}: ${problem}`));
+    const wrong = pages.flatMap((p) => policyProblems(p.csp).map((problem) => `${p.url}: ${problem}`));
     expect(wrong).toEqual([]);
   });
 
