@@ -5,17 +5,32 @@
 // do not grow with the catalogue; test/bench/bare-loop.test.ts checks that this
 // loop and the engine agree on every margin.
 import type { Catalogue, Part } from "../src/core/catalogue.ts";
-import { evaluateDesign, SINGLE_TOPOLOGIES } from "../src/core/engine/evaluate.ts";
-import type { Rails, Stage } from "../src/core/engine/types.ts";
+import type { Rails, Stage } from "../src/core/rule-kit/index.ts";
 import { forwardVoltage } from "../src/core/math/diode.ts";
 import type { Design } from "../src/core/schemas/design.ts";
+import { ALL_TOPOLOGIES, engine, evaluateDesign } from "../src/engine.ts";
 import type { RuleId } from "../rules/index.ts";
+
+/**
+ * Rules this loop leaves out, each with its reason. Every other rule of the
+ * registry must have a case in runRule: the `never` in its default branch
+ * fails the type check when a rule is added without one, and
+ * test/bench/bare-loop.test.ts checks the same at run time.
+ */
+export const NOT_BENCHMARKED = [] as const satisfies readonly { id: RuleId; why: string }[];
+
+type Benchmarked = Exclude<RuleId, (typeof NOT_BENCHMARKED)[number]["id"]>;
+
+/** Whether the loop has its own implementation of a rule. */
+export function hasBareLoop(id: string): boolean {
+  return (BENCHMARKED as readonly string[]).includes(id);
+}
 
 /** One role of one topology: what the loop needs besides the part columns. */
 export type RolePlan = {
   topology: string;
   role: string;
-  rules: readonly RuleId[];
+  rules: readonly Benchmarked[];
   stage: Stage;
   rails: Rails;
   design: Design;
@@ -78,23 +93,22 @@ export function planOf(design: Design, catalogue: Catalogue): RolePlan[] {
     if (!t) tables.set(key, (t = tableOf(parts)));
     return t;
   };
-  const topologies = design.topology === "all" ? SINGLE_TOPOLOGIES : [design.topology];
+  const topologies = design.topology === ALL_TOPOLOGIES ? engine.topologies.map((t) => t.id) : [design.topology];
   return topologies.flatMap((topology) => {
     const e = evaluateDesign(design, catalogue, topology);
     if (!e.ok) return [];
     return e.result.roles.map((r) => ({
       topology,
       role: r.role,
-      rules: r.rules as RuleId[],
+      rules: r.rules as Benchmarked[],
       stage: r.stage,
       rails: e.result.derived.rails,
       design,
-      table:
-        r.kinds.length > 1
-          ? table("amplifiers", catalogue.amplifiers)
-          : r.kind === "diode"
-            ? table("diodes", catalogue.diodes)
-            : table("op-amps", catalogue.opAmps),
+      // The engine's candidates for the role: the kinds that can fill it, in file order.
+      table: table(
+        r.kinds.join("+"),
+        catalogue.parts.filter((p) => r.kinds.includes(p.kind)),
+      ),
     }));
   });
 }
@@ -123,7 +137,7 @@ export function bareLoop(plans: readonly RolePlan[], out: readonly RoleOutput[])
     o.severity.fill(PASS);
     o.relative.fill(Infinity);
     for (let k = 0; k < plan.rules.length; k++) {
-      runRule(plan, plan.rules[k] as RuleId, o.margins[k] as Float64Array, o.severity, o.relative);
+      runRule(plan, plan.rules[k] as Benchmarked, o.margins[k] as Float64Array, o.severity, o.relative);
     }
     const allowUnrated = plan.design.policy.allow_unrated;
     for (let i = 0; i < plan.table.n; i++) {
@@ -133,7 +147,7 @@ export function bareLoop(plans: readonly RolePlan[], out: readonly RoleOutput[])
   }
 }
 
-function runRule(plan: RolePlan, rule: RuleId, margin: Float64Array, sev: Uint8Array, rel: Float64Array): void {
+function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: Uint8Array, rel: Float64Array): void {
   const { design, stage, rails, table } = plan;
   const c = table.col as Record<(typeof COLUMNS)[number] | "is_op_amp" | "open_drain", Float64Array> &
     Record<"unity_gain_stable" | "phase_reversal" | "schottky", Float64Array>;
@@ -338,5 +352,33 @@ function runRule(plan: RolePlan, rule: RuleId, margin: Float64Array, sev: Uint8A
       for (let i = 0; i < n; i++) share(i, (c.if_max_ma[i] as number) * 1e-3 - needed, needed);
       return;
     }
+    default: {
+      const missing: never = rule;
+      throw new Error(
+        `rule ${String(missing)} has no bare-loop counterpart (add a case, or list it in NOT_BENCHMARKED)`,
+      );
+    }
   }
 }
+
+/** Every rule with a case above; a Record over the union, so a missing key fails the type check. */
+const CASES: Record<Benchmarked, true> = {
+  "supply-range": true,
+  "input-common-mode": true,
+  "output-swing": true,
+  "unity-gain-stable": true,
+  "phase-reversal": true,
+  offset: true,
+  bandwidth: true,
+  "slew-rate": true,
+  "zero-crossing": true,
+  "logic-high": true,
+  "logic-low": true,
+  "propagation-delay": true,
+  "sign-dead-band": true,
+  "reverse-voltage": true,
+  recovery: true,
+  leakage: true,
+  "forward-current": true,
+};
+const BENCHMARKED = Object.keys(CASES);

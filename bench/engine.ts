@@ -3,7 +3,7 @@
 // so drift in a shared machine's speed falls on all figures alike; each figure
 // is the median over the rounds, and the ratio the median of the rounds' ratios.
 import type { Catalogue } from "../src/core/catalogue.ts";
-import { evaluateDesign } from "../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../src/engine.ts";
 import type { Design } from "../src/core/schemas/design.ts";
 import { bareLoop, outputsFor, planOf } from "./bare-loop.ts";
 import { syntheticCatalogue } from "./generate.ts";

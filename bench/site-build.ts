@@ -7,7 +7,7 @@ import { tmpdir } from "node:os";
 import { join, relative, resolve } from "node:path";
 import { isDeepStrictEqual } from "node:util";
 import type { Catalogue } from "../src/core/catalogue.ts";
-import { parseDesignText } from "../src/core/designs.ts";
+import { parseDesignText } from "../src/engine.ts";
 import type { Design } from "../src/core/schemas/design.ts";
 import { loadDataSet } from "../src/node/load-data.ts";
 import { buildSite } from "../test/e2e/harness/build-site.ts";

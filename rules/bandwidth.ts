@@ -1,7 +1,5 @@
-import { defineRule, record, stageAs } from "../src/core/engine/finding.ts";
-import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
+import { defineRule, record, shareVerdict, spareOrShortSmall, stageAs } from "../src/core/rule-kit/index.ts";
 import { formatSI } from "../src/core/units.ts";
-import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 /**
  * Gain error of a single-pole stage at f: 1 − 1/√(1 + (f/fc)²), written as
@@ -26,7 +24,7 @@ export const bandwidth = defineRule({
   needs: { "op-amp": ["gbw_mhz"] },
   measure({ stage, design, policy }, part, out) {
     const s = stageAs(stage, "op-amp", "bandwidth");
-    const fc = ((part as OpAmp).gbw_mhz * 1e6) / s.noise_gain;
+    const fc = (part.gbw_mhz * 1e6) / s.noise_gain;
     const error = singlePoleError(design.signal.max_frequency_hz, fc) * s.bandwidth_peak_v;
     const limit = policy.speed_share * design.accuracy.required_v;
     const margin = limit - error;
@@ -34,7 +32,7 @@ export const bandwidth = defineRule({
   },
   describe({ available: error, margin, needed: limit }, { stage, design }, part) {
     const s = stageAs(stage, "op-amp", "bandwidth");
-    const gbw = (part as OpAmp).gbw_mhz * 1e6;
+    const gbw = part.gbw_mhz * 1e6;
     const fc = gbw / s.noise_gain;
     const f = design.signal.max_frequency_hz;
     return {

@@ -1,7 +1,5 @@
-import { defineRule, stageAs, record } from "../src/core/engine/finding.ts";
-import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
+import { defineRule, record, shareVerdict, spareOrShort, stageAs } from "../src/core/rule-kit/index.ts";
 import { formatSI } from "../src/core/units.ts";
-import type { Diode } from "../src/core/schemas/diode.ts";
 
 // Each pump diode conducts for at most half of every cycle yet must pass the
 // whole load charge, so its current while on averages twice the load.
@@ -17,7 +15,7 @@ export const forwardCurrent = defineRule({
   measure({ stage, policy }, part, out) {
     const needed = stageAs(stage, "diode", "forward-current").forward_a;
     if (needed === undefined) throw new Error("forward-current needs a diode stage with a current");
-    const rated = (part as Diode).if_max_ma * 1e-3;
+    const rated = part.if_max_ma * 1e-3;
     const margin = rated - needed;
     record(out, shareVerdict(margin, needed, policy), needed, rated, margin, needed);
   },

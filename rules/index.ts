@@ -1,6 +1,7 @@
-// Every rule, by id. Adding a rule: write its module, list it here, name it in
-// a topology's role table (src/core/engine/topologies/).
-import type { Rule } from "../src/core/engine/types.ts";
+// The rule registry: every rule, in the order the rules page lists them.
+// Adding a rule: write its module, list it here, and hand the rule object to
+// the roles that use it in a topology module (src/topologies/).
+import type { AnyRule } from "../src/core/rule-kit/index.ts";
 import { bandwidth } from "./bandwidth.ts";
 import { forwardCurrent } from "./forward-current.ts";
 import { inputCommonMode } from "./input-common-mode.ts";
@@ -19,7 +20,7 @@ import { supplyRange } from "./supply-range.ts";
 import { unityGainStable } from "./unity-gain-stable.ts";
 import { zeroCrossing } from "./zero-crossing.ts";
 
-export const RULES: readonly Rule[] = [
+export const RULES = [
   supplyRange,
   inputCommonMode,
   outputSwing,
@@ -37,25 +38,11 @@ export const RULES: readonly Rule[] = [
   recovery,
   leakage,
   forwardCurrent,
-];
+] as const;
 
-export const RULES_BY_ID: ReadonlyMap<string, Rule> = new Map(RULES.map((r) => [r.id, r]));
+/** Every rule id, derived from the list: no hand-kept union. */
+export type RuleId = (typeof RULES)[number]["id"];
 
-export type RuleId =
-  | "supply-range"
-  | "input-common-mode"
-  | "output-swing"
-  | "unity-gain-stable"
-  | "phase-reversal"
-  | "offset"
-  | "bandwidth"
-  | "slew-rate"
-  | "zero-crossing"
-  | "logic-high"
-  | "logic-low"
-  | "propagation-delay"
-  | "sign-dead-band"
-  | "reverse-voltage"
-  | "recovery"
-  | "leakage"
-  | "forward-current";
+export const RULE_IDS: readonly RuleId[] = RULES.map((r) => r.id);
+
+export const RULES_BY_ID: ReadonlyMap<string, AnyRule> = new Map(RULES.map((r): [string, AnyRule] => [r.id, r]));

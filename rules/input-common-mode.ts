@@ -1,13 +1,16 @@
-import type { Part } from "../src/core/catalogue.ts";
-import type { RoleContext } from "../src/core/engine/types.ts";
-import { defineRule, rangeMargin, volts, record } from "../src/core/engine/finding.ts";
-import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
-import type { Comparator } from "../src/core/schemas/comparator.ts";
-import type { OpAmp } from "../src/core/schemas/op-amp.ts";
+import {
+  defineRule,
+  rangeMargin,
+  record,
+  spareOrShort,
+  voltageVerdict,
+  volts,
+  type PartOf,
+  type RoleContext,
+} from "../src/core/rule-kit/index.ts";
 
 /** Reachable input range and the binding margin, flat (it runs for every candidate); phase-reversal reuses it. */
-export function commonModeMargin({ rails, stage }: RoleContext, part: Part) {
-  const p = part as OpAmp | Comparator;
+export function commonModeMargin({ rails, stage }: RoleContext, p: PartOf<"op-amp" | "comparator">) {
   if (stage.stage === "diode") throw new Error("input-common-mode applies to amplifier stages only");
   const low = rails.negative_v + p.icm_neg_headroom_v;
   const high = rails.positive_v - p.icm_pos_headroom_v;
@@ -20,7 +23,7 @@ export const inputCommonMode = defineRule({
   unit: "V",
   checks: "The inputs stay inside the part's common-mode range over the whole signal window.",
   formula:
-    "low = V− + icm_neg_headroom_v, high = V+ − icm_pos_headroom_v; margin = min(needed low − low, high − needed high); needed is ±W for rectify-and-sign, b ± a·peak for the offset-to-mid-rail level shifter and V_ref for its reference buffer",
+    "low = V− + icm_neg_headroom_v, high = V+ − icm_pos_headroom_v; margin = min(needed low − low, high − needed high); needed is ±W for a follower after the divider, b ± a·peak for a level shifter and V_ref for the reference buffer of its network",
   source: "Datasheet input common-mode range, read inward from each rail (common practice).",
   policy: "headroom_margin_v",
   kinds: ["op-amp", "comparator"],

@@ -1,6 +1,12 @@
-import type { DiodeStage, Stage } from "../src/core/engine/types.ts";
-import { defineRule, stageAs, record } from "../src/core/engine/finding.ts";
-import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
+import {
+  defineRule,
+  record,
+  shareVerdict,
+  spareOrShortSmall,
+  stageAs,
+  type DiodeStage,
+  type Stage,
+} from "../src/core/rule-kit/index.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { Diode } from "../src/core/schemas/diode.ts";
 
@@ -28,7 +34,7 @@ export const leakage = defineRule({
   needs: { diode: ["ir_na"] },
   measure({ stage, design, policy }, part, out) {
     const s = leakageStage(stage);
-    const ir = leakageAt(part as Diode, design.temperature.max_c);
+    const ir = leakageAt(part, design.temperature.max_c);
     const error = (ir * s.leakage_ohm) / (s.leakage_per_input ?? 1);
     const limit = s.leakage_limit_v;
     const margin = limit - error;
@@ -37,9 +43,9 @@ export const leakage = defineRule({
   describe({ available: error, margin, needed: limit }, { stage, design }, part) {
     const s = leakageStage(stage);
     const hot = design.temperature.max_c;
-    const ir = leakageAt(part as Diode, hot);
+    const ir = leakageAt(part, hot);
     const perInput = s.leakage_per_input ?? 1;
-    const ir25 = (part as Diode).ir_na * 1e-9;
+    const ir25 = part.ir_na * 1e-9;
     const scale = perInput === 1 ? "" : ` ÷ ${Number(perInput.toPrecision(3))}`;
     return {
       reason: `leaks ${formatSI(ir, "A")} at ${hot} °C (${formatSI(ir25, "A")} at 25 °C), × ${formatSI(s.leakage_ohm, "Ω")}${scale} = ${formatSI(error, "V")}; the limit is ${formatSI(limit, "V")} (${s.leakage_what ?? "error share"}): ${spareOrShortSmall(margin)}`,

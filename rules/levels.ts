@@ -1,7 +1,6 @@
 // Output levels of a part used to drive the sign line: shared by logic-high,
 // logic-low and propagation-delay.
-import type { Part } from "../src/core/catalogue.ts";
-import type { Rails } from "../src/core/engine/types.ts";
+import { type Part, type Rails } from "../src/core/rule-kit/index.ts";
 
 /** Typical drops of a small NPN switch, common practice [M]: on at 0.7 V, saturated at 0.2 V. */
 export const NPN_VBE_ON_V = 0.7;

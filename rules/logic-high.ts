@@ -1,7 +1,12 @@
-import type { Part } from "../src/core/catalogue.ts";
-import type { RoleContext } from "../src/core/engine/types.ts";
-import { defineRule, volts, record } from "../src/core/engine/finding.ts";
-import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
+import {
+  defineRule,
+  record,
+  spareOrShort,
+  voltageVerdict,
+  volts,
+  type Part,
+  type RoleContext,
+} from "../src/core/rule-kit/index.ts";
 import { forwardVoltage } from "../src/core/math/diode.ts";
 import { formatSI, formatVolts } from "../src/core/units.ts";
 import { INPUT_CLAMP_V, NPN_OFF_BELOW_V, outputHigh, outputLow } from "./levels.ts";

@@ -1,7 +1,12 @@
-import type { Part } from "../src/core/catalogue.ts";
-import type { RoleContext } from "../src/core/engine/types.ts";
-import { defineRule, driftSpanC, record, stageAs } from "../src/core/engine/finding.ts";
-import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
+import {
+  defineRule,
+  driftSpanC,
+  record,
+  shareVerdict,
+  spareOrShortSmall,
+  stageAs,
+  type RoleContext,
+} from "../src/core/rule-kit/index.ts";
 import { formatSI } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
@@ -21,7 +26,7 @@ export const offset = defineRule({
   checks:
     "Input offset voltage and bias current through the source resistance stay inside this stage's share of the accuracy.",
   formula:
-    "buffer: (Vos + Ib·R_th) / k; rectifier: (2·Vos + Ib·R_load) / k; Vos grows by drift × the largest distance of the temperature range from 25 °C; limit = offset_share · required_v; offset-to-mid-rail level shifter: (Vos + Ib·(R1‖R2‖R3)) / a; its reference buffer: Vos·(G/R2) / a",
+    "buffer: (Vos + Ib·R_th) / k; rectifier: (2·Vos + Ib·R_load) / k; Vos grows by drift × the largest distance of the temperature range from 25 °C; limit = offset_share · required_v; level shifter: (Vos + Ib·(R1‖R2‖R3)) / a; reference buffer of the level-shift network: Vos·(G/R2) / a",
   source:
     "V_err = V_OS + I_B·R_S (op-amp error analysis, e.g. Fiore, Operational Amplifiers & Linear Integrated Circuits, ch. 5).",
   policy: "offset_share",
@@ -57,15 +62,9 @@ export const offset = defineRule({
 });
 
 /** The stage and its output offset for one part: measure and describe read the same numbers. */
-function offsetIn({ stage, design }: RoleContext, part: Part) {
+function offsetIn({ stage, design }: RoleContext, part: OpAmp) {
   const s = stageAs(stage, "op-amp", "offset");
-  const o = stageOffset(
-    part as OpAmp,
-    s.vos_multiplier,
-    s.bias_ohm,
-    design.temperature.min_c,
-    design.temperature.max_c,
-  );
+  const o = stageOffset(part, s.vos_multiplier, s.bias_ohm, design.temperature.min_c, design.temperature.max_c);
   return { s, o };
 }
 

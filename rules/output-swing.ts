@@ -1,6 +1,15 @@
-import { defineRule, railPhrase, rangeMargin, volts, record, stageAs } from "../src/core/engine/finding.ts";
-import type { Rails, Range } from "../src/core/engine/types.ts";
-import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
+import {
+  defineRule,
+  railPhrase,
+  rangeMargin,
+  record,
+  spareOrShort,
+  stageAs,
+  voltageVerdict,
+  volts,
+  type Rails,
+  type Range,
+} from "../src/core/rule-kit/index.ts";
 import { formatVolts } from "../src/core/units.ts";
 import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
@@ -9,19 +18,19 @@ export const outputSwing = defineRule({
   unit: "V",
   checks: "The output reaches both ends of what the stage must drive, at these rails.",
   formula:
-    "low = V− + out_neg_headroom_v, high = V+ − out_pos_headroom_v; buffer margin = min(−W − low, high − W); rectifier margin = min(−Vf − low, high − (W + Vf)); offset-to-mid-rail level shifter (V− = 0 V): needs b − a·peak … b + a·peak, its reference buffer V_ref",
+    "low = V− + out_neg_headroom_v, high = V+ − out_pos_headroom_v; buffer margin = min(−W − low, high − W); rectifier margin = min(−Vf − low, high − (W + Vf)); level shifter on one rail (V− = 0 V): needs b − a·peak … b + a·peak, the reference buffer of its network V_ref",
   source: "Datasheet output swing at the rated load, read inward from each rail (common practice).",
   policy: "headroom_margin_v",
   kinds: ["op-amp"],
   needs: { "op-amp": ["out_neg_headroom_v", "out_pos_headroom_v"] },
   measure({ rails, stage, policy }, part, out) {
     const s = stageAs(stage, "op-amp", "output-swing");
-    const m = rangeMargin(s.output, outputReach(part as OpAmp, rails));
+    const m = rangeMargin(s.output, outputReach(part, rails));
     const limit = Math.max(Math.abs(m.needed), policy.headroom_margin_v);
     record(out, voltageVerdict(m.margin, policy), m.needed, m.reached, m.margin, limit);
   },
   describe({ needed, available, margin }, { rails, stage }, part) {
-    const p = part as OpAmp;
+    const p = part;
     const s = stageAs(stage, "op-amp", "output-swing");
     const reach = outputReach(p, rails);
     const side = rangeMargin(s.output, reach).side;

@@ -1,6 +1,5 @@
-import { defineRule, record } from "../src/core/engine/finding.ts";
+import { defineRule, record } from "../src/core/rule-kit/index.ts";
 import { formatVolts } from "../src/core/units.ts";
-import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 import { commonModeMargin } from "./input-common-mode.ts";
 
 // A part that reverses is only as safe as its common-mode margin: inside the
@@ -17,12 +16,12 @@ export const phaseReversal = defineRule({
   needs: { "op-amp": ["phase_reversal"] },
   measure(ctx, part, out) {
     const cm = commonModeMargin(ctx, part).margin;
-    const reverses = (part as OpAmp).phase_reversal === true;
+    const reverses = part.phase_reversal === true;
     const verdict = !reverses ? "pass" : cm < 0 ? "fail" : "marginal";
     record(out, verdict, 0, cm, reverses ? cm : Math.max(0, cm), undefined);
   },
   describe({ available: cmMargin }, _ctx, part) {
-    const reverses = (part as OpAmp).phase_reversal === true;
+    const reverses = part.phase_reversal === true;
     const reason = !reverses
       ? "does not reverse its output phase when the inputs leave the common-mode range"
       : cmMargin < 0

@@ -1,7 +1,4 @@
-import type { Part } from "../src/core/catalogue.ts";
-import type { Rails } from "../src/core/engine/types.ts";
-import { defineRule, record } from "../src/core/engine/finding.ts";
-import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
+import { defineRule, record, shareVerdict, spareOrShort, type Part, type Rails } from "../src/core/rule-kit/index.ts";
 import { formatQuantity, formatSI } from "../src/core/units.ts";
 import { outputHigh, outputLow } from "./levels.ts";
 

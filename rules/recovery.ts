@@ -1,7 +1,5 @@
-import { defineRule, stageAs, record } from "../src/core/engine/finding.ts";
-import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
+import { defineRule, record, shareVerdict, spareOrShort, stageAs } from "../src/core/rule-kit/index.ts";
 import { formatSI } from "../src/core/units.ts";
-import type { Diode } from "../src/core/schemas/diode.ts";
 
 // A diode conducts backwards for trr after it is switched off: in the pump that
 // charge is lost every half cycle, in the rectifier it smears each zero crossing.
@@ -18,7 +16,7 @@ export const recovery = defineRule({
   measure({ stage, policy }, part, out) {
     const limit = stageAs(stage, "diode", "recovery").recovery_limit_s;
     if (limit === undefined) throw new Error("recovery needs a diode stage with a time limit");
-    const trr = ((part as Diode).trr_ns ?? 0) * 1e-9;
+    const trr = (part.trr_ns ?? 0) * 1e-9;
     const margin = limit - trr;
     record(out, shareVerdict(margin, limit, policy), limit, trr, margin, limit);
   },

@@ -1,7 +1,5 @@
-import { defineRule, stageAs, record } from "../src/core/engine/finding.ts";
-import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
+import { defineRule, record, spareOrShort, stageAs, voltageVerdict } from "../src/core/rule-kit/index.ts";
 import { formatVolts } from "../src/core/units.ts";
-import type { Diode } from "../src/core/schemas/diode.ts";
 
 export const reverseVoltage = defineRule({
   id: "reverse-voltage",
@@ -14,7 +12,7 @@ export const reverseVoltage = defineRule({
   needs: { diode: ["vr_max_v"] },
   measure({ stage, policy }, part, out) {
     const needed = stageAs(stage, "diode", "reverse-voltage").reverse_v;
-    const rated = (part as Diode).vr_max_v;
+    const rated = part.vr_max_v;
     const margin = rated - needed;
     record(out, voltageVerdict(margin, policy), needed, rated, margin, needed);
   },

@@ -1,9 +1,5 @@
-import type { Stage } from "../src/core/engine/types.ts";
-import { defineRule, record } from "../src/core/engine/finding.ts";
-import { shareVerdict, spareOrShortSmall } from "../src/core/engine/verdict.ts";
+import { defineRule, record, shareVerdict, spareOrShortSmall, type Stage } from "../src/core/rule-kit/index.ts";
 import { formatSI } from "../src/core/units.ts";
-import type { Comparator } from "../src/core/schemas/comparator.ts";
-import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 export const signDeadBand = defineRule({
   id: "sign-dead-band",
@@ -15,13 +11,13 @@ export const signDeadBand = defineRule({
   kinds: ["comparator", "op-amp"],
   needs: { comparator: ["vos_max_mv"], "op-amp": ["vos_max_mv"] },
   measure({ stage, design, policy }, part, out) {
-    const band = (2 * (part as Comparator | OpAmp).vos_max_mv * 1e-3) / dividerRatio(stage);
+    const band = (2 * part.vos_max_mv * 1e-3) / dividerRatio(stage);
     const limit = policy.sign_share * design.accuracy.required_v;
     const margin = limit - band;
     record(out, shareVerdict(margin, limit, policy), limit, band, margin, limit);
   },
   describe({ available: band, margin, needed: limit }, { stage }, part) {
-    const vos = (part as Comparator | OpAmp).vos_max_mv * 1e-3;
+    const vos = part.vos_max_mv * 1e-3;
     const k = dividerRatio(stage);
     return {
       reason: `the sign can be wrong within ${formatSI(band, "V")} of zero at the input (2 × ${formatSI(vos, "V")} ÷ ${Number(k.toPrecision(3))}); the limit is ${formatSI(limit, "V")}: ${spareOrShortSmall(margin)}`,

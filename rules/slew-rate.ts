@@ -1,7 +1,5 @@
-import { defineRule, record, stageAs } from "../src/core/engine/finding.ts";
-import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
+import { defineRule, record, shareVerdict, spareOrShort, stageAs } from "../src/core/rule-kit/index.ts";
 import { formatQuantity, formatSI } from "../src/core/units.ts";
-import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 export const slewRate = defineRule({
   id: "slew-rate",
@@ -16,7 +14,7 @@ export const slewRate = defineRule({
   measure({ stage, design, policy }, part, out) {
     const s = stageAs(stage, "op-amp", "slew-rate");
     const needed = 2 * Math.PI * design.signal.max_frequency_hz * s.slew_amplitude_v;
-    const slew = (part as OpAmp).slew_v_per_us * 1e6;
+    const slew = part.slew_v_per_us * 1e6;
     const margin = slew - needed;
     record(out, shareVerdict(margin, needed, policy), needed, slew, margin, needed);
   },

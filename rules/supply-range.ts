@@ -1,8 +1,5 @@
-import { defineRule, record } from "../src/core/engine/finding.ts";
-import { spareOrShort, voltageVerdict } from "../src/core/engine/verdict.ts";
+import { defineRule, record, spareOrShort, voltageVerdict } from "../src/core/rule-kit/index.ts";
 import { formatVolts } from "../src/core/units.ts";
-import type { Comparator } from "../src/core/schemas/comparator.ts";
-import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 export const supplyRange = defineRule({
   id: "supply-range",
@@ -14,7 +11,7 @@ export const supplyRange = defineRule({
   kinds: ["op-amp", "comparator"],
   needs: { "op-amp": ["supply_min_v", "supply_max_v"], comparator: ["supply_min_v", "supply_max_v"] },
   measure({ rails, policy }, part, out) {
-    const p = part as OpAmp | Comparator;
+    const p = part;
     const vs = rails.positive_v - rails.negative_v;
     const aboveMin = vs - p.supply_min_v;
     const belowMax = p.supply_max_v - vs;
@@ -23,7 +20,7 @@ export const supplyRange = defineRule({
     record(out, voltageVerdict(margin, policy), vs, binding, margin, vs);
   },
   describe({ needed: vs, margin }, { rails }, part) {
-    const p = part as OpAmp | Comparator;
+    const p = part;
     return {
       reason: `needs a supply of ${formatVolts(vs)} (V+ ${formatVolts(rails.positive_v)}, V− ${formatVolts(rails.negative_v)}); rated ${formatVolts(p.supply_min_v)} to ${formatVolts(p.supply_max_v)}: ${spareOrShort(margin, "V")}`,
       steps: [

@@ -1,5 +1,4 @@
-import { defineRule, record } from "../src/core/engine/finding.ts";
-import type { OpAmp } from "../src/core/schemas/op-amp.ts";
+import { defineRule, record } from "../src/core/rule-kit/index.ts";
 
 export const unityGainStable = defineRule({
   id: "unity-gain-stable",
@@ -11,7 +10,7 @@ export const unityGainStable = defineRule({
   kinds: ["op-amp"],
   needs: { "op-amp": ["unity_gain_stable"] },
   measure(_ctx, part, out) {
-    const stable = (part as OpAmp).unity_gain_stable;
+    const stable = part.unity_gain_stable;
     record(out, stable ? "pass" : "fail", 1, stable ? 1 : 0, stable ? 0 : -1, undefined);
   },
   describe({ available }, { stage }) {

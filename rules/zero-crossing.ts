@@ -1,7 +1,5 @@
-import { defineRule, record, stageAs } from "../src/core/engine/finding.ts";
-import { shareVerdict, spareOrShort } from "../src/core/engine/verdict.ts";
+import { defineRule, record, shareVerdict, spareOrShort, stageAs } from "../src/core/rule-kit/index.ts";
 import { formatQuantity, formatSI } from "../src/core/units.ts";
-import type { OpAmp } from "../src/core/schemas/op-amp.ts";
 
 export const zeroCrossing = defineRule({
   id: "zero-crossing",
@@ -14,14 +12,14 @@ export const zeroCrossing = defineRule({
   needs: { "op-amp": ["slew_v_per_us"] },
   measure({ stage, design, policy }, part, out) {
     const jump = stageAs(stage, "op-amp", "zero-crossing").zero_crossing_v ?? 0;
-    const time = jump / ((part as OpAmp).slew_v_per_us * 1e6);
+    const time = jump / (part.slew_v_per_us * 1e6);
     const limit = policy.timing_fraction / design.signal.max_frequency_hz;
     const margin = limit - time;
     record(out, shareVerdict(margin, limit, policy), limit, time, margin, limit);
   },
   describe({ available: time, margin, needed: limit }, { stage, design, policy }, part) {
     const jump = stageAs(stage, "op-amp", "zero-crossing").zero_crossing_v ?? 0;
-    const slew = (part as OpAmp).slew_v_per_us * 1e6;
+    const slew = part.slew_v_per_us * 1e6;
     const f = design.signal.max_frequency_hz;
     return {
       reason: `jumps ${formatSI(jump, "V")} (two diode drops) at ${formatQuantity(slew, "V/s")} in ${formatSI(time, "s")}; the limit is ${formatSI(limit, "s")} (${policy.timing_fraction * 100} % of the ${formatSI(1 / f, "s")} period): ${spareOrShort(margin, "s")}`,

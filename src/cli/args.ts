@@ -36,6 +36,12 @@ export function flag(args: ParsedArgs, name: string): string | undefined {
   return typeof v === "string" ? v : undefined;
 }
 
+import { KINDS } from "../core/kinds.ts";
+import { TOPOLOGY_IDS } from "../engine.ts";
+
+const FILES = [...KINDS.map((k) => k.file), "designs/"].join(", ");
+const TOPOLOGY_CHOICES = `${TOPOLOGY_IDS.slice(0, -1).join(", ")}, or ${TOPOLOGY_IDS.at(-1) ?? "all"} (side by side)`;
+
 export const USAGE = `railsieve — shortlist op amps, comparators and diodes for a bipolar-to-ADC front end
 
 Usage:
@@ -45,12 +51,12 @@ Usage:
   railsieve explain PART-ID DESIGN.json [--role ROLE] [--data DIR]
   railsieve serve [DIR] [--port N]           (DIR: the built guide, default dist)
 
-  --data DIR       catalogue folder (op-amps.csv, comparators.csv, diodes.csv, designs/); default ./data
+  --data DIR       catalogue folder (${FILES}); default ./data
   --format F       output of check: text (default), json, csv, markdown or junit;
                    of diff: text, json or markdown
   --guide-url URL  markdown links into the published guide at URL
   --strict         junit and diff: a marginal budget or design counts as failing
-  --topology NAME  evaluate as rectify-and-sign, offset-to-mid-rail, or all (side by side)
+  --topology NAME  evaluate as ${TOPOLOGY_CHOICES}
   --role ROLE      explain one role only
   --port N         serve: the port on 127.0.0.1 (default 4800)
   BEFORE, AFTER    diff: data folders, or git:REV for the --data folder at a git

@@ -1,8 +1,7 @@
 // `railsieve check DESIGN.json…`: evaluate, print, and exit 0 / 1 / 2.
-import { evaluateDesign } from "../core/engine/evaluate.ts";
 import { designHolds, type DesignResult } from "../core/engine/result.ts";
 import { InputError, type Problem } from "../core/problems.ts";
-import { TOPOLOGIES, type Topology } from "../core/schemas/design.ts";
+import { evaluateDesign, TOPOLOGY_IDS } from "../engine.ts";
 import { flag, UsageError, type ParsedArgs } from "./args.ts";
 import type { Io } from "./io.ts";
 import { loadForCheck } from "./load.ts";
@@ -18,10 +17,10 @@ const FORMATS = ["text", "json", "csv", "markdown", "junit"] as const;
 export function evaluateFiles(args: ParsedArgs, data: string): DesignResult[] {
   if (args.positional.length === 0) throw new UsageError("check needs at least one design file");
   const topologyFlag = flag(args, "topology");
-  if (topologyFlag !== undefined && !(TOPOLOGIES as readonly string[]).includes(topologyFlag)) {
-    throw new UsageError(`unknown topology '${topologyFlag}' (expected ${TOPOLOGIES.join(", ")})`);
+  if (topologyFlag !== undefined && !TOPOLOGY_IDS.includes(topologyFlag)) {
+    throw new UsageError(`unknown topology '${topologyFlag}' (expected ${TOPOLOGY_IDS.join(", ")})`);
   }
-  const topology = topologyFlag as Topology | undefined;
+  const topology = topologyFlag;
   const loaded = loadForCheck(data, args.positional);
   if ("problems" in loaded) throw new InputError(loaded.problems);
   const problems: Problem[] = [];

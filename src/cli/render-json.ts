@@ -14,6 +14,8 @@ export function reportedFinding(f: Finding) {
     margin: f.margin,
     unit: f.unit,
     reason: f.reason,
+    // Only for a role of several stages (SPEC §11.2's rectifier): which stage the finding is about.
+    ...(f.stage !== undefined ? { stage: f.stage } : {}),
   };
 }
 

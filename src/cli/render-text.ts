@@ -2,7 +2,7 @@
 import type { PartResult } from "../core/engine/evaluate-part.ts";
 import type { DesignResult, RoleResult } from "../core/engine/result.ts";
 import type { Verdict } from "../core/engine/types.ts";
-import { formatSI, formatVolts } from "../core/units.ts";
+import { formatSI } from "../core/units.ts";
 import { paint, type Io } from "./io.ts";
 import { shortfalls } from "./summary.ts";
 import { wrap } from "./wrap.ts";
@@ -45,27 +45,14 @@ function renderComparison(result: DesignResult, io: Pick<Io, "color">): string {
 
 function renderSingle(result: DesignResult, io: Pick<Io, "color">): string {
   const d = result.design;
-  const x = result.derived;
   const out: string[] = [];
   out.push(paint(io, "bold", wrap(`${d.id} — ${d.title}`, WIDTH, "  ", "")));
   out.push(`  topology   ${result.topology}`);
-  out.push(
-    wrap(
-      `V+ ${formatVolts(x.rails.positive_v)}, V− ${formatVolts(x.rails.negative_v)}${negativeNote(result)}`,
-      WIDTH,
-      "             ",
-      "  rails      ",
-    ),
-  );
-  out.push(
-    x.divider
-      ? `  divider    ${formatSI(x.divider.top_ohm, "Ω")} over ${formatSI(x.divider.bottom_ohm, "Ω")} (${d.front_end.series}), k = ${x.ratio.toFixed(4)}`
-      : "  divider    none (the signal already fits the window), k = 1",
-  );
-  out.push(`  window     ±${formatVolts(x.window_v)}; source seen by the buffer ${formatSI(x.thevenin_ohm, "Ω")}`);
-  out.push(
-    `  ADC step   ${formatSI(x.adc_step_at_input_v, "V")} at the input (${d.adc.bits} bits, ${formatVolts(d.adc.reference_v)} reference)`,
-  );
+  // The topology words its own derived values; the design page and the try page print the same rows.
+  for (const group of result.display) {
+    out.push(`  ${group.title}`);
+    for (const row of group.rows) out.push(wrap(`${row.label}: ${row.value}`, WIDTH, "        ", "    "));
+  }
   for (const note of result.notes) out.push(wrap(`note: ${note}`, WIDTH, "    ", "  "));
   if (d.signal.peak_v > 30) {
     out.push(
@@ -74,17 +61,6 @@ function renderSingle(result: DesignResult, io: Pick<Io, "color">): string {
         WIDTH,
         "    ",
         "  ",
-      ),
-    );
-  }
-  if (x.level_shift) {
-    const n = x.level_shift;
-    out.push(
-      wrap(
-        `R1 ${formatSI(n.r1_ohm, "Ω")} from the signal, R2 ${formatSI(n.r2_ohm, "Ω")} from the reference, ${n.r3_ohm === null ? "no R3" : `R3 ${formatSI(n.r3_ohm, "Ω")} to ground`}: out = ${n.gain.toFixed(4)} × in + ${formatVolts(n.offset_v)}, spanning ${formatVolts(n.output_low_v)} … ${formatVolts(n.output_high_v)}`,
-        WIDTH,
-        "             ",
-        "  network    ",
       ),
     );
   }
@@ -124,13 +100,6 @@ function renderBudget(result: DesignResult): string[] {
     wrap(c.sign, WIDTH, "      ", "    "),
   );
   return out;
-}
-
-function negativeNote(result: DesignResult): string {
-  const n = result.derived.negative;
-  if (n.kind === "ground") return " (no negative supply)";
-  if (n.kind === "fixed") return " (fixed)";
-  return ` (charge pump, worst case: no load ${formatVolts(n.no_load_v)}, droop ${formatVolts(n.droop_v)}, ripple ${formatSI(n.ripple_v, "V")} p-p; diode ${n.diode.id} at ${formatVolts(n.diode.vf_v)})`;
 }
 
 function renderRole(role: RoleResult, io: Pick<Io, "color">): string[] {

@@ -1,21 +1,21 @@
-// The engine's view of a catalogue: every part, by id and by kind. Kept apart
-// from the CSV loader so the browser can index parts checked at build time
-// without shipping the parser and row schemas.
-import type { Comparator } from "./schemas/comparator.ts";
-import type { Diode } from "./schemas/diode.ts";
-import type { OpAmp } from "./schemas/op-amp.ts";
+// The engine's view of a catalogue: every part, by id, by kind and by what it
+// can do. Kept apart from the CSV loader so the browser can index parts
+// checked at build time without shipping the parser and row schemas.
+import { CAPABILITIES, KINDS, kindsThatCan, type Capability, type PartKind } from "./kinds.ts";
+import type { Part, PartOf } from "./kind-rows.ts";
 
-export type Part = OpAmp | Comparator | Diode;
-export type PartKind = Part["kind"];
+export type { Capability, Part, PartKind, PartOf };
 
 export type Catalogue = {
   parts: Part[];
   byId: Map<string, Part>;
-  opAmps: OpAmp[];
-  comparators: Comparator[];
-  diodes: Diode[];
-  /** Comparators and op amps: the parts a sign decision can use. */
-  amplifiers: (Comparator | OpAmp)[];
+  /** Every kind of the registry has a list, empty when the data folder has none. */
+  byKind: { readonly [K in PartKind]: PartOf<K>[] };
+  /** The parts a role asking for this capability weighs, in file order. */
+  byCapability: Readonly<Record<Capability, Part[]>>;
+  opAmps: PartOf<"op-amp">[];
+  comparators: PartOf<"comparator">[];
+  diodes: PartOf<"diode">[];
 };
 
 /**
@@ -28,12 +28,22 @@ export type Catalogue = {
  */
 export function indexCatalogue(parts: readonly Part[]): Catalogue {
   const list = [...parts];
+  const byKind = Object.fromEntries(KINDS.map((k) => [k.kind, list.filter((p) => p.kind === k.kind)])) as {
+    [K in PartKind]: PartOf<K>[];
+  };
+  const byCapability = Object.fromEntries(
+    CAPABILITIES.map((c) => {
+      const kinds: readonly string[] = kindsThatCan(c);
+      return [c, list.filter((p) => kinds.includes(p.kind))];
+    }),
+  ) as Record<Capability, Part[]>;
   return {
     parts: list,
     byId: new Map(list.map((p) => [p.id, p])),
-    opAmps: list.filter((p): p is OpAmp => p.kind === "op-amp"),
-    comparators: list.filter((p): p is Comparator => p.kind === "comparator"),
-    diodes: list.filter((p): p is Diode => p.kind === "diode"),
-    amplifiers: list.filter((p): p is Comparator | OpAmp => p.kind !== "diode"),
+    byKind,
+    byCapability,
+    opAmps: byKind["op-amp"],
+    comparators: byKind.comparator,
+    diodes: byKind.diode,
   };
 }

@@ -3,25 +3,28 @@
 import Papa from "papaparse";
 import type { z } from "zod";
 import { indexCatalogue, type Catalogue, type Part, type PartKind } from "./catalogue-index.ts";
+import { KIND_ROWS } from "./kind-rows.ts";
+import { KINDS as KIND_REGISTRY, type KindSpec } from "./kinds.ts";
 import { closest, type Problem } from "./problems.ts";
-import { comparatorColumns, comparatorRow } from "./schemas/comparator.ts";
-import { diodeColumns, diodeRow } from "./schemas/diode.ts";
-import { opAmpColumns, opAmpRow } from "./schemas/op-amp.ts";
 import { readerFor } from "./schemas/row.ts";
 
 export type { Catalogue, Part, PartKind };
 
-export const KINDS = [
-  { kind: "op-amp", file: "op-amps.csv", plural: "op amps", columns: opAmpColumns, row: opAmpRow },
-  {
-    kind: "comparator",
-    file: "comparators.csv",
-    plural: "comparators",
-    columns: comparatorColumns,
-    row: comparatorRow,
-  },
-  { kind: "diode", file: "diodes.csv", plural: "diodes", columns: diodeColumns, row: diodeRow },
-] as const;
+/** A kind of the registry (kinds.ts) with its row schema and columns (kind-rows.ts). */
+export type CatalogueKind = KindSpec & {
+  kind: PartKind;
+  /** Plural noun, as in "3 op amps". */
+  plural: string;
+  columns: Record<string, z.ZodType>;
+  row: z.ZodType;
+};
+
+/** Every kind the loader reads, in registry order. */
+export const KINDS: readonly CatalogueKind[] = KIND_REGISTRY.map((k) => ({
+  ...k,
+  plural: k.words.many,
+  ...KIND_ROWS[k.kind],
+}));
 
 export type Loaded<T> = { value: T; problems: Problem[] };
 

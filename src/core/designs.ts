@@ -2,32 +2,45 @@
 // its JSON path ("designs/x.json: signal.peak_v: …").
 import type { z } from "zod";
 import { closest, type Problem } from "./problems.ts";
-import { designSchema, shown, type Design } from "./schemas/design.ts";
+import { shown, type Design, type DesignSchema } from "./schemas/design.ts";
 
 export type DesignFile = { file: string; design?: Design; problems: Problem[] };
 
-export function parseDesignText(file: string, text: string): DesignFile {
-  let raw: unknown;
-  try {
-    raw = JSON.parse(text.startsWith("\uFEFF") ? text.slice(1) : text);
-  } catch (e) {
-    return { file, problems: [jsonProblem(file, text, e)] };
-  }
-  return parseDesignValue(file, raw);
+export type DesignReader = {
+  parseDesignText(file: string, text: string): DesignFile;
+  parseDesignValue(file: string, raw: unknown): DesignFile;
+};
+
+/** The readers of design files for one design schema (src/engine.ts builds it from the registries). */
+export function designReader(schema: DesignSchema): DesignReader {
+  const parseDesignValue = (file: string, raw: unknown): DesignFile => {
+    const result = schema.safeParse(raw);
+    if (result.success) return { file, design: result.data, problems: [] };
+    return { file, problems: issuesToProblems(file, result.error.issues, raw, schema) };
+  };
+  const parseDesignText = (file: string, text: string): DesignFile => {
+    let raw: unknown;
+    try {
+      raw = JSON.parse(text.startsWith("\uFEFF") ? text.slice(1) : text);
+    } catch (e) {
+      return { file, problems: [jsonProblem(file, text, e)] };
+    }
+    return parseDesignValue(file, raw);
+  };
+  return { parseDesignText, parseDesignValue };
 }
 
-export function parseDesignValue(file: string, raw: unknown): DesignFile {
-  const result = designSchema.safeParse(raw);
-  if (result.success) return { file, design: result.data, problems: [] };
-  return { file, problems: issuesToProblems(file, result.error.issues, raw) };
-}
-
-export function issuesToProblems(file: string, issues: readonly z.core.$ZodIssue[], raw: unknown): Problem[] {
+function issuesToProblems(
+  file: string,
+  issues: readonly z.core.$ZodIssue[],
+  raw: unknown,
+  schema: DesignSchema,
+): Problem[] {
   const problems: Problem[] = [];
   for (const issue of issues) {
     const path = issue.path.map(String);
     if (issue.code === "unrecognized_keys") {
-      const known = knownKeysAt(path, raw);
+      const known = knownKeysAt(schema, path, raw);
       for (const key of issue.keys) {
         const guess = closest(key, known);
         const expected = guess
@@ -81,7 +94,7 @@ function valueAt(raw: unknown, path: string[]): unknown {
 
 // Walks the schema's shape to list the keys allowed at a path, for suggestions.
 // The raw value rides along so a union (the negative supply) picks its variant by `kind`.
-function knownKeysAt(path: string[], raw: unknown): string[] {
+function knownKeysAt(designSchema: DesignSchema, path: string[], raw: unknown): string[] {
   let schema: unknown = designSchema;
   for (const [i, key] of path.entries()) {
     const shape = shapeOf(schema, valueAt(raw, path.slice(0, i)));

@@ -142,3 +142,10 @@ export function formatQuantity(value: number, unit: string, digits = 3): string 
   if (unit === "V-prefixed") return formatSI(value, "V", { digits });
   return formatSI(value, unit, { digits });
 }
+
+/** Drops zeros that only pad the significant digits: "1.20 MHz" → "1.2 MHz", "10.0 kΩ" → "10 kΩ". */
+export function trimZeros(text: string): string {
+  return text.replace(/^([^\s.]*\d)\.(\d*?)0+(?=\s|$)/, (_m, whole: string, frac: string) =>
+    frac === "" ? whole : `${whole}.${frac}`,
+  );
+}

@@ -1,10 +1,17 @@
 // Reads a data folder from disk (Node only): the three catalogue files and
 // data/designs/*.json, with every problem collected before anything is used.
-import { readdirSync, readFileSync, statSync } from "node:fs";
+import { existsSync, readdirSync, readFileSync, statSync } from "node:fs";
 import { basename, join, relative } from "node:path";
-import { buildCatalogue, KINDS, parseCatalogueText, type Catalogue, type ParsedFile } from "../core/catalogue.ts";
-import { checkDesignSet, parseDesignText, type DesignFile } from "../core/designs.ts";
-import { evaluateDesign } from "../core/engine/evaluate.ts";
+import {
+  buildCatalogue,
+  KINDS,
+  parseCatalogueText,
+  type Catalogue,
+  type ParsedFile,
+  type PartKind,
+} from "../core/catalogue.ts";
+import { checkDesignSet, type DesignFile } from "../core/designs.ts";
+import { evaluateDesign, parseDesignText } from "../engine.ts";
 import type { Evaluation } from "../core/engine/result.ts";
 import type { Design } from "../core/schemas/design.ts";
 import type { Problem } from "../core/problems.ts";
@@ -15,6 +22,8 @@ export type EvaluatedDesign = { file: string; design: Design; evaluation: Evalua
 /** A data folder; `evaluated` holds each design's evaluation when the files themselves are clean. */
 export type DataSet = {
   catalogue: Catalogue;
+  /** Kinds whose file the folder leaves out: no parts of that kind. */
+  empty: PartKind[];
   designs: DesignFile[];
   problems: Problem[];
   evaluated: EvaluatedDesign[];
@@ -56,11 +65,23 @@ export function readText(path: string): { text?: string; problem?: Problem } {
   return decoded.ok ? { text: decoded.text } : { problem: decoded.problem };
 }
 
-export function loadCatalogue(dir: string): { catalogue: Catalogue; problems: Problem[] } {
+/**
+ * The catalogue files of a folder. A kind whose file is absent is an empty
+ * kind (listed in `empty`), not a problem; a folder with no catalogue file at
+ * all is one, as it is more likely a wrong --data than a catalogue.
+ */
+export function loadCatalogue(dir: string): { catalogue: Catalogue; problems: Problem[]; empty: PartKind[] } {
   const files: ParsedFile[] = [];
   const problems: Problem[] = [];
+  const empty: PartKind[] = [];
+  const absent: Problem[] = [];
   for (const spec of KINDS) {
     const path = join(dir, spec.file);
+    if (!existsSync(path)) {
+      empty.push(spec.kind);
+      absent.push({ file: displayPath(path), message: READ_ERRORS["ENOENT"] ?? "file not found" });
+      continue;
+    }
     const { text, problem } = readText(path);
     if (problem) {
       problems.push(problem);
@@ -68,8 +89,11 @@ export function loadCatalogue(dir: string): { catalogue: Catalogue; problems: Pr
     }
     files.push(parseCatalogueText(spec.kind, displayPath(path), text ?? ""));
   }
+  if (empty.length === KINDS.length) {
+    return { catalogue: buildCatalogue([]).value, problems: [...absent, ...problems], empty: [] };
+  }
   const built = buildCatalogue(files);
-  return { catalogue: built.value, problems: [...problems, ...built.problems] };
+  return { catalogue: built.value, problems: [...problems, ...built.problems], empty };
 }
 
 export function loadDesignFiles(paths: string[]): { designs: DesignFile[]; problems: Problem[] } {
@@ -97,7 +121,7 @@ export function designPathsIn(dir: string): string[] {
 
 /** The whole data folder; design files must be named after their id. */
 export function loadDataSet(dir: string): DataSet {
-  const { catalogue, problems: catalogueProblems } = loadCatalogue(dir);
+  const { catalogue, problems: catalogueProblems, empty } = loadCatalogue(dir);
   const { designs, problems: designProblems } = loadDesignFiles(designPathsIn(dir));
   const nameProblems: Problem[] = [];
   for (const d of designs) {
@@ -112,9 +136,9 @@ export function loadDataSet(dir: string): DataSet {
   const problems = [...catalogueProblems, ...designProblems, ...nameProblems];
   // Only a clean set is worth evaluating: a row left out for its own problem would
   // show up again as "BOM names no part".
-  if (problems.length > 0) return { catalogue, designs, problems, evaluated: [] };
+  if (problems.length > 0) return { catalogue, empty, designs, problems, evaluated: [] };
   const evaluated = evaluateAll(designs, catalogue);
-  return { catalogue, designs, problems: designProblemsOf(evaluated), evaluated };
+  return { catalogue, empty, designs, problems: designProblemsOf(evaluated), evaluated };
 }
 
 function evaluateAll(designs: readonly DesignFile[], catalogue: Catalogue): EvaluatedDesign[] {

@@ -9,7 +9,7 @@
 import type { Part } from "../core/catalogue.ts";
 import { placeAnchor, resultAnchor, type SiteLinks } from "../site/links.ts";
 import type { PartPlace } from "../site/part-uses.ts";
-import { ROLE_NAMES } from "../site/roles.ts";
+import { roleName } from "../site/roles.ts";
 import { escapeHtml } from "./escape.ts";
 import { renderArithmetic, renderFindingsTable, renderPassedRules } from "./findings.ts";
 import { DRAWN_RULES, renderRailDiagram } from "./rail-diagram.ts";
@@ -28,7 +28,7 @@ export type DesignPlacesInput = {
 function renderPlace(place: PartPlace, { part, design, links }: DesignPlacesInput): string {
   const { role, result, rank } = place;
   const anchor = placeAnchor(design.id, role.role);
-  const roleName = ROLE_NAMES[role.role];
+  const name = roleName(role.role);
   const standing = rank === undefined ? "rejected" : `fit, rank ${rank} of ${role.fits.length}`;
   // Under topology "all" a design weighs the part in both front ends; say which one this is.
   const topology = design.topology === "all" ? ` <span class="mark">${escapeHtml(place.topology)}</span>` : "";
@@ -41,10 +41,10 @@ function renderPlace(place: PartPlace, { part, design, links }: DesignPlacesInpu
     ? `<div class="diagram">${renderRailDiagram({ part, stage: role.stage, rails: place.rails, findings, id: `rd-${anchor}`, legend: false })}</div>`
     : "";
   const shown = fit ? findings : findings.filter((f) => f.verdict !== "pass");
-  const label = `${fit ? "Findings" : "Rules not passed"} for ${part.name} as ${roleName.toLowerCase()} in ${design.title}`;
+  const label = `${fit ? "Findings" : "Rules not passed"} for ${part.name} as ${name.toLowerCase()} in ${design.title}`;
   return (
     `<li class="result result-${result.verdict}" id="${escapeHtml(anchor)}">` +
-    `<div class="result-head"><h4>${escapeHtml(roleName)}</h4>${renderVerdict(result.verdict)} <span>${escapeHtml(standing)}</span>${partMarks(result, role)}${topology}` +
+    `<div class="result-head"><h4>${escapeHtml(name)}</h4>${renderVerdict(result.verdict)} <span>${escapeHtml(standing)}</span>${partMarks(result, role)}${topology}` +
     ` <a href="${escapeHtml(onPage)}">on the design page</a></div>` +
     diagram +
     renderFindingsTable(shown, label, links.rulesUrl) +

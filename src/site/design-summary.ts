@@ -3,7 +3,7 @@ import { designHolds } from "../core/engine/result.ts";
 import { formatSI } from "../core/units.ts";
 import type { Role } from "../core/schemas/design.ts";
 import type { DesignEntry } from "./design-entry.ts";
-import { ROLE_NAMES } from "./roles.ts";
+import { roleName } from "./roles.ts";
 
 export type RoleState = {
   role: Role;
@@ -26,7 +26,7 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
   const result = entry.evaluation.result;
   const roles: RoleState[] = result.roles.map((r) => ({
     role: r.role,
-    name: ROLE_NAMES[r.role],
+    name: roleName(r.role),
     fits: r.fits.length,
     total: r.fits.length + r.rejected.length,
     ...(r.chosen !== undefined ? { chosen: r.chosen } : {}),
@@ -43,7 +43,7 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
   const b = result.budget;
   const budget =
     b.missing.length > 0
-      ? `Accuracy budget incomplete: no part for the ${list(b.missing.map((r) => ROLE_NAMES[r as Role].toLowerCase()))}.`
+      ? `Accuracy budget incomplete: no part for the ${list(b.missing.map((r) => roleName(r).toLowerCase()))}.`
       : `Accuracy budget ${b.verdict === "pass" ? "passes" : b.verdict === "marginal" ? "is marginal" : "fails"} (worst case ${formatSI(b.worst_case_v, "V")} against ${formatSI(b.required_v, "V")}).`;
   const compared = result.comparison ? ` Both topologies compared: ${result.comparison.recommended} recommended.` : "";
   const line = `${

@@ -1,12 +1,13 @@
 // What a design page lists as the design's inputs and its derived values,
 // as label/value rows, so the page stays markup and the numbers stay testable.
 import type { PartResult } from "../core/engine/evaluate-part.ts";
-import type { Derived, DesignResult, RoleResult } from "../core/engine/result.ts";
+import type { DesignResult, RoleResult } from "../core/engine/result.ts";
 import { POLICY_DEFAULTS, type Design, type Policy, type Role } from "../core/schemas/design.ts";
 import { formatSI, formatVolts } from "../core/units.ts";
 import { trimZeros } from "../render/trim-zeros.ts";
 
 export type ValueRow = { label: string; value: string; partId?: string; role?: Role };
+// A topology's DisplayGroup has the same shape, so derived values need no copying.
 export type ValueGroup = { title: string; rows: ValueRow[] };
 
 /** SI with a prefix and no padding zeros: "100 kΩ", "1 µF", "19.5 mV". */
@@ -16,7 +17,6 @@ const given = (value: number, unit: string) => trimZeros(formatSI(value, unit, {
 const celsius = (c: number) => `${String(c).replace("-", "\u2212")}\u00a0°C`;
 const signed = (v: number) => formatVolts(v, { signed: true });
 const percent = (fraction: number) => `${Number((fraction * 100).toPrecision(3))} %`;
-const ratio = (k: number) => String(Number(k.toPrecision(4)));
 
 export const HIGH_VOLTAGE_V = 30;
 
@@ -160,85 +160,7 @@ export function inputGroups(design: Design): ValueGroup[] {
   return groups;
 }
 
-function railRows(derived: Derived): ValueRow[] {
-  const rows: ValueRow[] = [{ label: "V+", value: signed(derived.rails.positive_v) }];
-  const n = derived.negative;
-  if (n.kind === "charge-pump") {
-    rows.push(
-      {
-        label: "Pump diode",
-        value: `${n.diode.id}, ${formatVolts(n.diode.vf_v)} at ${si(n.diode.current_a, "A")}`,
-        partId: n.diode.id,
-        role: "pump-diode",
-      },
-      { label: "V− with no load = −(drive − 2·Vf)", value: signed(n.no_load_v) },
-      { label: "Droop = I / (f · C_flying)", value: si(n.droop_v, "V") },
-      { label: "V− at load, average", value: signed(n.dc_v) },
-      { label: "Ripple = I / (f · C_reservoir), peak to peak", value: si(n.ripple_v, "V") },
-      { label: "V− used by every check = average + ripple / 2", value: signed(n.worst_v) },
-      { label: "Load at which the pump collapses", value: si(n.collapse_a, "A") },
-    );
-  } else {
-    rows.push({
-      label: n.kind === "ground" ? "V− (ground)" : "V− (fixed supply)",
-      value: signed(derived.rails.negative_v),
-    });
-  }
-  return rows;
-}
-
+/** The topology's derived values (its module words them, so the CLI and the try page print the same rows). */
 export function derivedGroups(result: DesignResult): ValueGroup[] {
-  const d = result.derived;
-  const n = d.level_shift;
-  const divider: ValueRow[] = n
-    ? [
-        { label: "R1 from the signal", value: si(n.r1_ohm, "Ω") },
-        { label: "R2 from the ADC reference", value: si(n.r2_ohm, "Ω") },
-        { label: "R3 to ground", value: n.r3_ohm === null ? "none (a = 1/2)" : si(n.r3_ohm, "Ω") },
-        { label: "Gain a = G / R1, G = R1 ‖ R2 ‖ R3 (Millman)", value: ratio(n.gain) },
-        { label: "Output at zero signal b = V_ref · G / R2", value: formatVolts(n.offset_v) },
-        { label: "Output span for ±peak", value: `${formatVolts(n.output_low_v)} … ${formatVolts(n.output_high_v)}` },
-      ]
-    : d.divider
-      ? [
-          { label: "Target ratio = window ÷ peak", value: ratio(d.target_ratio) },
-          { label: `Top resistor R1 (${result.design.front_end.series})`, value: si(d.divider.top_ohm, "Ω") },
-          { label: `Bottom resistor R2 (${result.design.front_end.series})`, value: si(d.divider.bottom_ohm, "Ω") },
-          { label: "Ratio k = R2 / (R1 + R2)", value: ratio(d.divider.ratio) },
-          { label: "Total R1 + R2", value: si(d.divider.total_ohm, "Ω") },
-        ]
-      : [{ label: "Divider", value: "none: the peak already fits the window (k = 1)" }];
-  const signal: ValueRow[] = [
-    n
-      ? { label: "Swing about mid-rail a · peak", value: `±${formatVolts(d.window_v)}` }
-      : { label: "Window used W = k · peak", value: `±${formatVolts(d.window_v)}` },
-    n
-      ? { label: "Resistance seen by the level shifter R1 ‖ R2 ‖ R3", value: si(d.thevenin_ohm, "Ω") }
-      : { label: "Resistance seen by the buffer (Rs + R1) ‖ R2", value: si(d.thevenin_ohm, "Ω") },
-    { label: "One ADC step at the input", value: si(d.adc_step_at_input_v, "V") },
-  ];
-  const diodes: ValueRow[] = [];
-  if (d.rectifier_diode) {
-    diodes.push({
-      label: "Rectifier diode drop",
-      value: `${d.rectifier_diode.id}, ${formatVolts(d.rectifier_diode.vf_v)} at ${si(d.rectifier_diode.current_a, "A")}`,
-      partId: d.rectifier_diode.id,
-      role: "rectifier-diode",
-    });
-  }
-  if (d.clamp_diode) {
-    diodes.push({
-      label: "Clamp diode drop",
-      value: `${d.clamp_diode.id}, ${formatVolts(d.clamp_diode.vf_v)} at ${si(d.clamp_diode.current_a, "A")}`,
-      partId: d.clamp_diode.id,
-      role: "clamp-diode",
-    });
-  }
-  const groups: ValueGroup[] = [
-    { title: "Rails", rows: railRows(d) },
-    { title: n ? "Level-shift network" : "Divider", rows: divider },
-    { title: "Signal at the ADC side", rows: signal },
-  ];
-  if (diodes.length > 0) groups.push({ title: "Diode drops in the signal chain", rows: diodes });
-  return groups;
+  return result.display;
 }

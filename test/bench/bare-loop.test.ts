@@ -4,7 +4,7 @@ import { resolve } from "node:path";
 import { describe, expect, it } from "vitest";
 import { bareLoop, outputsFor, planOf } from "../../bench/bare-loop.ts";
 import { syntheticCatalogue } from "../../bench/generate.ts";
-import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../src/engine.ts";
 import { severity } from "../../src/core/engine/verdict.ts";
 import { loadDataSet } from "../../src/node/load-data.ts";
 

@@ -3,6 +3,7 @@ import { mkdtempSync, readdirSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
+import { engine } from "../../src/engine.ts";
 import { loadCatalogue } from "../../src/node/load-data.ts";
 import { designInput } from "../helpers/designs.ts";
 import { run } from "./run.ts";
@@ -129,17 +130,9 @@ describe("explain", () => {
       "rectifier",
     );
     expect(code).toBe(0);
-    for (const rule of [
-      "supply-range",
-      "input-common-mode",
-      "output-swing",
-      "unity-gain-stable",
-      "phase-reversal",
-      "offset",
-      "bandwidth",
-      "slew-rate",
-      "zero-crossing",
-    ]) {
+    const rectifier = engine.roles.find((r) => r.id === "rectifier");
+    expect(rectifier?.rules.length).toBeGreaterThan(8);
+    for (const rule of (rectifier?.rules ?? []).map((r) => r.id)) {
       expect(out).toContain(`${rule}:`);
     }
     expect(out).toContain("margin = min(needed low − lowest, highest − needed high)");
@@ -159,5 +152,42 @@ describe("validate", () => {
     const { code, out } = await run("validate");
     expect(code).toBe(0);
     expect(out).toMatch(/^valid: \d+ op amps, \d+ comparators, \d+ diodes, \d+ designs\n$/);
+  });
+});
+
+describe("check --topology offset-to-mid-rail (issue 14)", () => {
+  it("prints that topology's own derived values: its network, gain a and offset b; no divider, no buffer", async () => {
+    const { code, out } = await run("check", "data/designs/bus-48v.json", "--topology", "offset-to-mid-rail");
+    expect(code).toBeLessThan(2);
+    const head = out.slice(0, out.indexOf("  note:"));
+    expect(head).not.toMatch(/divider|buffer|k = 1/i);
+    expect(head).toMatchInlineSnapshot(`
+      "bus-48v — ±48 V bus monitor into a 5 V, 12-bit ADC
+        topology   offset-to-mid-rail
+        Rails
+          V+: +5.00 V
+          V− (ground): 0.00 V
+        Level-shift network
+          R1 from the signal: 1.07 MΩ
+          R2 from the ADC reference: 86.6 kΩ
+          R3 to ground: 93.1 kΩ
+          Gain a = G / R1, G = R1 ‖ R2 ‖ R3 (Millman): 0.04024
+          Output at zero signal b = V_ref · G / R2: 2.04 V
+          Output span for ±peak: 0.10 V … 3.97 V
+        Signal at the ADC side
+          Swing about mid-rail a · peak: ±1.93 V
+          Resistance seen by the level shifter R1 ‖ R2 ‖ R3: 43.1 kΩ
+          One ADC step at the input: 24.8 mV
+      "
+    `);
+    // Millman's theorem (J. Millman, Proc. IRE 28(9), 1940): node = (Vin/R1 + Vref/R2) · G,
+    // G = R1 ‖ R2 ‖ R3, so a = G/R1 and b = Vref·G/R2; checked by hand from the printed resistors.
+    const ohms = (label: string) => {
+      const m = new RegExp(`${label}: ([\\d.]+) (k|M)Ω`).exec(head);
+      return Number(m?.[1]) * (m?.[2] === "M" ? 1e6 : 1e3);
+    };
+    const [r1, r2, r3] = [ohms("R1 from the signal"), ohms("R2 from the ADC reference"), ohms("R3 to ground")];
+    const g = 1 / (1 / r1 + 1 / r2 + 1 / r3);
+    expect(Number(/Gain a = [^:]*: ([\d.]+)/.exec(head)?.[1])).toBeCloseTo(g / r1, 4);
   });
 });

@@ -9,7 +9,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { paint, terminalSafe } from "../../src/cli/io.ts";
-import { parseDesignText } from "../../src/core/designs.ts";
+import { parseDesignText } from "../../src/engine.ts";
 import { formatProblem } from "../../src/core/problems.ts";
 import { codePointName, firstUnsafe, visibleText } from "../../src/core/text-safety.ts";
 import { rowProblems } from "../helpers/catalogue.ts";

@@ -10,7 +10,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { catalogueFromParts } from "../../src/core/catalogue.ts";
-import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../src/engine.ts";
 import { formatQuantity, formatSI, formatVolts, parseSI } from "../../src/core/units.ts";
 import { renderDesignText } from "../../src/cli/render-text.ts";
 import { design } from "../helpers/designs.ts";

@@ -9,7 +9,7 @@ import Papa from "papaparse";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import type { Part } from "../../src/core/catalogue.ts";
-import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../src/engine.ts";
 import { loadDataSet, type DataSet } from "../../src/node/load-data.ts";
 import { injectedMarkup } from "./harness/injection.ts";
 import {

@@ -1,6 +1,7 @@
 // Design factory for tests: a schema-valid design on fixed ±5 V rails with a
 // 2.5 V window (the issue-3 acceptance set-up), changed by deep overrides.
-import { designSchema, type Design } from "../../src/core/schemas/design.ts";
+import type { Design } from "../../src/core/schemas/design.ts";
+import { designSchema } from "../../src/engine.ts";
 
 export const BASE_DESIGN = {
   id: "test-design",

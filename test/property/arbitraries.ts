@@ -4,7 +4,8 @@
 import fc from "fast-check";
 import { catalogueFromParts, type Catalogue, type Part } from "../../src/core/catalogue.ts";
 import { comparatorRow, type Comparator } from "../../src/core/schemas/comparator.ts";
-import { designSchema, LEVEL_SHIFTS, SERIES, TOPOLOGIES, type Design } from "../../src/core/schemas/design.ts";
+import { LEVEL_SHIFTS, SERIES, type Design } from "../../src/core/schemas/design.ts";
+import { designSchema, TOPOLOGY_IDS as TOPOLOGIES } from "../../src/engine.ts";
 import { diodeRow, type Diode } from "../../src/core/schemas/diode.ts";
 import { opAmpRow, type OpAmp } from "../../src/core/schemas/op-amp.ts";
 

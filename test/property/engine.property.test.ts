@@ -4,7 +4,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { catalogueFromParts, type Catalogue } from "../../src/core/catalogue.ts";
-import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../src/engine.ts";
 import { compareResults, type PartResult } from "../../src/core/engine/evaluate-part.ts";
 import type { DesignResult, RoleResult } from "../../src/core/engine/result.ts";
 import { VERDICTS, type Finding, type Verdict } from "../../src/core/engine/types.ts";

@@ -124,7 +124,7 @@ describe("columns", () => {
   );
 
   it("finds the label of a column whose .meta() sits under a later .transform()", () => {
-    expect(columnMeta(KINDS[0].columns.status)).toEqual(expect.objectContaining({ label: "Status" }));
+    expect(columnMeta(KINDS[0]!.columns.status)).toEqual(expect.objectContaining({ label: "Status" }));
   });
 
   it.each<[Column, string]>([

@@ -4,7 +4,7 @@
 // the diagram only when an input or output range is among what falls short.
 import { describe, expect, it } from "vitest";
 import { catalogueFromParts, type Part } from "../../src/core/catalogue.ts";
-import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../src/engine.ts";
 import { renderDesignPlaces } from "../../src/render/part-places.ts";
 import type { DesignEntry } from "../../src/site/design-entry.ts";
 import { placesOf } from "../../src/site/part-uses.ts";

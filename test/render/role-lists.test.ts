@@ -2,7 +2,7 @@
 // to the part page's entry for the same design and role.
 import { describe, expect, it } from "vitest";
 import { catalogueFromParts } from "../../src/core/catalogue.ts";
-import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../src/engine.ts";
 import type { RoleResult } from "../../src/core/engine/result.ts";
 import { renderFitsTable, renderRejectedTable, type RoleListInput } from "../../src/render/role-lists.ts";
 import { design } from "../helpers/designs.ts";

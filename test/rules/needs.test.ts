@@ -14,7 +14,7 @@ const build: Record<PartKind, (c: Cells) => Part> = { "op-amp": opAmp, comparato
 const stageFor = { "op-amp": bufferStage(), comparator: signStage(), diode: pumpDiodeStage() };
 
 const needs = RULES.flatMap((rule) =>
-  Object.entries(rule.needs).flatMap(([kind, columns]) =>
+  Object.entries(rule.needs as Readonly<Record<string, readonly string[]>>).flatMap(([kind, columns]) =>
     (columns ?? []).map((column) => [rule.id, kind as PartKind, column] as const),
   ),
 );

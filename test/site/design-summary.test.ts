@@ -1,7 +1,7 @@
 // The one-line state of a design (home page, design page head), read from designHolds (SPEC §10).
 import { describe, expect, it } from "vitest";
 import { catalogueFromParts } from "../../src/core/catalogue.ts";
-import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../src/engine.ts";
 import type { DesignEntry } from "../../src/site/design-entry.ts";
 import { summarizeDesign } from "../../src/site/design-summary.ts";
 import { design } from "../helpers/designs.ts";

@@ -2,7 +2,7 @@
 // the worked values of REFERENCES.md (../shared), recomputed in the comments.
 import { describe, expect, it } from "vitest";
 import { catalogueFromParts } from "../../src/core/catalogue.ts";
-import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../src/engine.ts";
 import type { DesignResult } from "../../src/core/engine/result.ts";
 import type { Design } from "../../src/core/schemas/design.ts";
 import {

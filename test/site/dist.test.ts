@@ -7,7 +7,7 @@ import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync } from "node
 import { tmpdir } from "node:os";
 import { join, relative, resolve, sep } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../src/engine.ts";
 import type { RoleResult } from "../../src/core/engine/result.ts";
 import { loadDataSet } from "../../src/node/load-data.ts";
 import { escapeHtml } from "../../src/render/escape.ts";

@@ -1,7 +1,7 @@
 // The design × role matrix of a part page.
 import { describe, expect, it } from "vitest";
 import { catalogueFromParts } from "../../src/core/catalogue.ts";
-import { evaluateDesign } from "../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../src/engine.ts";
 import type { DesignEntry } from "../../src/site/design-entry.ts";
 import { partUses, placesOf } from "../../src/site/part-uses.ts";
 import { design } from "../helpers/designs.ts";

@@ -1,7 +1,9 @@
 // Every editable field of a design file (SPEC §5), in file order. One table
 // serves the page's markup (built at build time), the URL codec and the form
 // script, so a field's name, label and unit are written once.
-import { LEVEL_SHIFTS, POLICY_DEFAULTS, SERIES, TOPOLOGIES, type Role } from "../../core/schemas/design.ts";
+import type { RoleDef } from "../../core/engine/topology.ts";
+import { LEVEL_SHIFTS, POLICY_DEFAULTS, SERIES, type Role } from "../../core/schemas/design.ts";
+import { ALL_TOPOLOGIES, engine, roleApplies, TOPOLOGY_IDS } from "../../engine.ts";
 
 export type FieldGroup = { id: string; legend: string; hint?: string };
 
@@ -49,13 +51,19 @@ export type Field = NumberField | TextField | ChoiceField | PartField;
 
 const isPump = (d: Readonly<Record<string, string>>) => d["supply.negative.kind"] === "charge-pump";
 const isFixed = (d: Readonly<Record<string, string>>) => d["supply.negative.kind"] === "fixed";
-const isClamp = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] === "diode-clamp";
 const isNpn = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] === "npn-inverter";
 const pulledUp = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] !== "diode-clamp";
-// Roles per topology as the engine's rolesOf has them; "all" compares both front ends.
-const rectifies = (d: Readonly<Record<string, string>>) => d["topology"] !== "offset-to-mid-rail";
-const shifts = (d: Readonly<Record<string, string>>) =>
-  d["topology"] === "offset-to-mid-rail" || d["topology"] === "all";
+
+/**
+ * A role's BOM box shows when the chosen topology has the role (any topology
+ * for "all") and the role's own conditions hold, as the engine's rolesOf has it.
+ */
+const hasRole =
+  (role: RoleDef) =>
+  (d: Readonly<Record<string, string>>): boolean =>
+    engine.topologies.some(
+      (t) => (d["topology"] === t.id || d["topology"] === ALL_TOPOLOGIES) && t.roles.some((r) => r.id === role.id),
+    ) && roleApplies(role, (path) => d[path]);
 
 const num = (
   path: string,
@@ -111,7 +119,7 @@ export const FIELDS: readonly Field[] = [
     group: "design",
     label: "Topology",
     type: "choice",
-    choices: TOPOLOGIES.map((t) => ({ value: t, label: t })),
+    choices: TOPOLOGY_IDS.map((t) => ({ value: t, label: t })),
   },
 
   num("supply.positive_v", "supply", "Positive rail V+", "V"),
@@ -224,14 +232,7 @@ export const FIELDS: readonly Field[] = [
     ],
   },
 
-  bomRole("buffer", "Buffer op amp", rectifies),
-  bomRole("rectifier", "Rectifier op amp", rectifies),
-  bomRole("sign", "Sign comparator", rectifies),
-  bomRole("pump-diode", "Pump diode", (d) => rectifies(d) && isPump(d)),
-  bomRole("rectifier-diode", "Rectifier diode", rectifies),
-  bomRole("clamp-diode", "Clamp diode", (d) => rectifies(d) && isClamp(d)),
-  bomRole("level-shift", "Level-shift op amp", shifts),
-  bomRole("reference-buffer", "Reference buffer op amp", shifts),
+  ...engine.roles.map((role) => bomRole(role.id, role.field, hasRole(role))),
 ];
 
 export const FIELD_BY_PATH: ReadonlyMap<string, Field> = new Map(FIELDS.map((f) => [f.path, f]));

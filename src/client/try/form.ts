@@ -5,9 +5,8 @@
 import type { Part } from "../../core/catalogue.ts";
 import type { Problem } from "../../core/problems.ts";
 import { parseSI, formatSI, formatPercent } from "../../core/units.ts";
-import { OFFSET_TO_MID_RAIL_ROLES } from "../../core/engine/topologies/offset-to-mid-rail.ts";
-import { RECTIFY_AND_SIGN_ROLES } from "../../core/engine/topologies/rectify-and-sign.ts";
-import type { RoleSpec } from "../../core/engine/run-role.ts";
+import { kindWords } from "../../core/kinds.ts";
+import { engine } from "../../engine.ts";
 import { applies, FIELDS, messageId, parsedId, type Draft, type Field } from "./fields.ts";
 
 type Box = HTMLInputElement | HTMLSelectElement;
@@ -114,19 +113,16 @@ export function showProblems(doc: Document, problems: readonly Problem[], formLi
   return problems.length;
 }
 
-const KIND_HEADINGS = { "op-amp": "Op amps", comparator: "Comparators", diode: "Diodes" } as const;
-
 /** Fills each BOM list with the parts of the kinds its role takes, grouped by kind. */
 export function fillPartLists(doc: Document, parts: readonly Part[]): void {
   for (const f of FIELDS) {
     if (f.type !== "part") continue;
     const select = box(doc, f.path);
-    const spec =
-      RECTIFY_AND_SIGN_ROLES[f.role] ?? (OFFSET_TO_MID_RAIL_ROLES as Partial<Record<string, RoleSpec>>)[f.role];
-    if (!(select instanceof HTMLSelectElement) || !spec) continue;
-    const groups = spec.kinds.map((kind) => {
+    const role = engine.roles.find((r) => r.id === f.role);
+    if (!(select instanceof HTMLSelectElement) || !role) continue;
+    const groups = engine.kindsOf(role).map((kind) => {
       const group = doc.createElement("optgroup");
-      group.label = KIND_HEADINGS[kind];
+      group.label = kindWords(kind).heading;
       for (const p of parts) {
         if (p.kind !== kind) continue;
         const option = doc.createElement("option");

@@ -3,7 +3,7 @@
 // in the address bar. Nothing here throws to the console: a failed fetch or a
 // bad link becomes a message on the page.
 import { indexCatalogue, type Catalogue } from "../../core/catalogue-index.ts";
-import { evaluateDesign } from "../../core/engine/evaluate.ts";
+import { evaluateDesign } from "../../engine.ts";
 import type { DesignResult, Evaluation } from "../../core/engine/result.ts";
 import { formatProblem, type Problem } from "../../core/problems.ts";
 import type { Design } from "../../core/schemas/design.ts";

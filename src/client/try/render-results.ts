@@ -13,7 +13,7 @@ import { closestFinding } from "../../site/deciding.ts";
 import { partUrl } from "../../site/links.ts";
 import { summarizeDesign } from "../../site/design-summary.ts";
 import { derivedGroups } from "../../site/design-view.ts";
-import { ROLE_NAMES } from "../../site/roles.ts";
+import { roleName } from "../../site/roles.ts";
 import { pieceHtml, type Container, type Piece } from "./pieces.ts";
 import { renderBudget, renderComparison } from "./render-budget.ts";
 
@@ -133,12 +133,12 @@ function diagram(role: RoleResult, result: DesignResult): string {
     findings: pick.findings,
     id: `try-rd-${role.role}`,
   });
-  return `<figure class="try-diagram">${svg}<figcaption>${escapeHtml(`${pick.part.id} as the ${ROLE_NAMES[role.role].toLowerCase()}`)}</figcaption></figure>`;
+  return `<figure class="try-diagram">${svg}<figcaption>${escapeHtml(`${pick.part.id} as the ${roleName(role.role).toLowerCase()}`)}</figcaption></figure>`;
 }
 
 /** One role: its heading and counts, the chosen op amp's rail diagram, the shortlist and the rejections. */
 export function rolePiece(role: RoleResult, result: DesignResult, view: ViewState): Container {
-  const name = ROLE_NAMES[role.role];
+  const name = roleName(role.role);
   const id = `try-role-${role.role}`;
   const fitsKey = `${role.role}:fits`;
   const rejectedKey = `${role.role}:rejected`;

@@ -2,7 +2,16 @@
 // sum and root-sum-square (JCGM 100:2008, the GUM), the dominant term, and the
 // same after a one-point gain calibration.
 import type { Design } from "../schemas/design.ts";
-import type { RoleResult } from "./result.ts";
+
+/** What the budget reads of a role's result (RoleResult has it; no import, so no type cycle). */
+export type BudgetRole = {
+  role: string;
+  optional?: boolean;
+  chosen?: string;
+  resultOf(
+    id: string,
+  ): { part: { id: string }; findings: readonly { rule: string; available: number | null }[] } | undefined;
+};
 
 export type BudgetTerm = {
   /** Stable key ("quantization", "buffer-offset" …). */
@@ -51,7 +60,7 @@ export function buildBudget(
   design: Design,
   fixed: BudgetTerm[],
   roleTerms: readonly RoleTerm[],
-  roles: readonly RoleResult[],
+  roles: readonly BudgetRole[],
   effectiveBits: number,
 ): Budget {
   const terms = [...fixed];
@@ -89,7 +98,7 @@ export function buildBudget(
 /** Firmware conversion: input volts = (code + 0.5) · volts_per_code − offset_v, then the sign. */
 export type Conversion = {
   volts_per_code: number;
-  /** Input volts subtracted after scaling (0 for rectify-and-sign). */
+  /** Input volts subtracted after scaling (0 when the sign comes from a comparator). */
   offset_v: number;
   /** The reading formula with this design's numbers. */
   formula: string;

@@ -1,10 +1,7 @@
 // Topology "all": both front ends side by side and a one-line recommendation.
-import type { Catalogue } from "../catalogue.ts";
+import type { Catalogue } from "../catalogue-index.ts";
 import { formatSI } from "../units.ts";
 import { designHolds, type Comparison, type ComparisonRow, type DesignResult } from "./result.ts";
-
-/** Parts a role places on the board (the rectifier is two op amps, pump and rectifier diodes come in pairs). */
-const PARTS_PER_ROLE: Record<string, number> = { rectifier: 2, "pump-diode": 2, "rectifier-diode": 2 };
 
 const VERDICT_RANK = { pass: 0, marginal: 1, fail: 2 } as const;
 
@@ -14,7 +11,7 @@ export function compare(results: DesignResult[], catalogue: Catalogue): Comparis
     let cost = 0;
     for (const role of r.roles) {
       if (role.chosen === undefined) continue;
-      const n = PARTS_PER_ROLE[role.role] ?? 1;
+      const n = role.count ?? 1;
       count += n;
       cost += n * (catalogue.byId.get(role.chosen)?.cost_band ?? 3);
     }

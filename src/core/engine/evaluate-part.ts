@@ -1,10 +1,16 @@
 // Runs a role's rules on one part and ranks the parts of a role (SPEC §7).
-import type { Part, PartKind } from "../catalogue.ts";
+import type { Part } from "../catalogue-index.ts";
 import type { Policy } from "../schemas/design.ts";
-import { RULES } from "../../../rules/index.ts";
-import { finding, measured } from "./finding.ts";
-import { VERDICTS, type Finding, type RoleContext, type Rule, type Verdict } from "./types.ts";
-import { severity, unratedFinding, worst } from "./verdict.ts";
+import { measured } from "../rule-kit/define.ts";
+import { VERDICTS, type AnyRule, type Finding, type RoleContext, type Verdict } from "../rule-kit/types.ts";
+import { severity, unratedFinding, worst } from "../rule-kit/verdict.ts";
+import { finding } from "./finding.ts";
+
+/**
+ * What a role checks a part with: for each of its stages, the stage's rules
+ * and context (the stage id names findings when a role has several stages).
+ */
+export type Checks = readonly { rules: readonly AnyRule[]; ctx: RoleContext; stage?: string }[];
 
 const UNRATED = severity("unrated");
 const MARGINAL = severity("marginal");
@@ -31,24 +37,26 @@ class LazyPartResult implements PartResult {
   readonly verdict: Verdict;
   readonly bom: boolean;
   readonly relative: number;
-  #rules: readonly Rule[];
-  #ctx: RoleContext;
+  #checks: Checks;
   #findings: Finding[] | undefined;
 
-  constructor(rules: readonly Rule[], ctx: RoleContext, part: Part, bom: boolean, verdict: Verdict, relative: number) {
+  constructor(checks: Checks, part: Part, bom: boolean, verdict: Verdict, relative: number) {
     this.part = part;
     this.verdict = verdict;
     this.bom = bom;
     this.relative = relative;
-    this.#rules = rules;
-    this.#ctx = ctx;
+    this.#checks = checks;
   }
 
   get findings(): Finding[] {
-    this.#findings ??= this.#rules.map((rule) => {
-      const missing = missingColumns(rule, this.part);
-      return missing.length > 0 ? unratedFinding(rule.id, missing, rule.unit) : finding(rule, this.#ctx, this.part);
-    });
+    this.#findings ??= this.#checks.flatMap(({ rules, ctx, stage }) =>
+      rules.map((rule) => {
+        const missing = missingColumns(rule, this.part);
+        if (missing.length === 0) return finding(rule, ctx, this.part, stage);
+        const unrated = unratedFinding(rule.id, missing, rule.unit);
+        return stage === undefined ? unrated : { ...unrated, stage };
+      }),
+    );
     return this.#findings;
   }
 
@@ -57,36 +65,42 @@ class LazyPartResult implements PartResult {
   }
 }
 
-function missingColumns(rule: Rule, part: Part): string[] {
-  const needs = rule.needs[part.kind];
+function missingColumns(rule: AnyRule, part: Part): string[] {
+  const needs: readonly string[] | undefined = rule.needs[part.kind];
   if (needs === undefined) return [];
   const cells = part as Record<string, unknown>;
   return needs.filter((c) => cells[c] === undefined);
 }
 
-// Every column some rule needs. Most catalogues fill them all, so whether a
-// part leaves any empty is worked out once per candidate list (parts are
-// immutable), and the per-rule check runs only for the parts that do.
-const NEEDED_COLUMNS: Record<PartKind, readonly string[]> = {
-  "op-amp": neededBy("op-amp"),
-  comparator: neededBy("comparator"),
-  diode: neededBy("diode"),
-};
+// Most catalogues fill every column a role's rules need, so whether a part
+// leaves any empty is worked out once per candidate list and set of rules
+// (parts are immutable), and the per-rule check runs only for the parts that do.
+const gapsByList = new WeakMap<readonly Part[], Map<string, Uint8Array>>();
 
-function neededBy(kind: PartKind): string[] {
-  return [...new Set(RULES.flatMap((r) => r.needs[kind] ?? []))];
-}
-
-const gapsByList = new WeakMap<readonly Part[], Uint8Array>();
-
-/** 1 for each part that leaves a column some rule needs empty. */
-export function partsWithGaps(parts: readonly Part[]): Uint8Array {
-  let gaps = gapsByList.get(parts);
+/** 1 for each part that leaves a column some rule of these checks needs empty. */
+export function partsWithGaps(parts: readonly Part[], checks: Checks): Uint8Array {
+  const rules = [...new Set(checks.flatMap((c) => c.rules))];
+  const key = rules.map((r) => r.id).join(" ");
+  let byRules = gapsByList.get(parts);
+  if (byRules === undefined) {
+    byRules = new Map();
+    gapsByList.set(parts, byRules);
+  }
+  let gaps = byRules.get(key);
   if (gaps === undefined) {
+    const needed = new Map<string, string[]>();
+    const columnsOf = (kind: string) => {
+      let cols = needed.get(kind);
+      if (cols === undefined) {
+        cols = [...new Set(rules.flatMap((r): readonly string[] => r.needs[kind as Part["kind"]] ?? []))];
+        needed.set(kind, cols);
+      }
+      return cols;
+    };
     gaps = Uint8Array.from(parts, (p) =>
-      NEEDED_COLUMNS[p.kind].some((c) => (p as Record<string, unknown>)[c] === undefined) ? 1 : 0,
+      columnsOf(p.kind).some((c) => (p as Record<string, unknown>)[c] === undefined) ? 1 : 0,
     );
-    gapsByList.set(parts, gaps);
+    byRules.set(key, gaps);
   }
   return gaps;
 }
@@ -99,29 +113,25 @@ const scratch = measured();
  * severity (returned, after allow_unrated) and the least relative margin
  * (written to relative[i]). No finding, sentence or result object is made.
  */
-export function scorePart(
-  rules: readonly Rule[],
-  ctx: RoleContext,
-  part: Part,
-  mayLack: boolean,
-  relative: Float64Array,
-  i: number,
-): number {
+export function scorePart(checks: Checks, part: Part, mayLack: boolean, relative: Float64Array, i: number): number {
   let worstSeverity = 0;
   let least = Infinity;
   const m = scratch;
-  for (let r = 0; r < rules.length; r++) {
-    const rule = rules[r] as Rule;
-    if (mayLack && missingColumns(rule, part).length > 0) {
-      worstSeverity = Math.max(worstSeverity, UNRATED);
-      continue;
+  for (let c = 0; c < checks.length; c++) {
+    const { rules, ctx } = checks[c] as Checks[number];
+    for (let r = 0; r < rules.length; r++) {
+      const rule = rules[r] as AnyRule;
+      if (mayLack && missingColumns(rule, part).length > 0) {
+        worstSeverity = Math.max(worstSeverity, UNRATED);
+        continue;
+      }
+      rule.measure(ctx, part, m);
+      worstSeverity = Math.max(worstSeverity, severity(m.verdict));
+      if (m.limit !== undefined && m.limit > 0) least = Math.min(least, m.margin / m.limit);
     }
-    rule.measure(ctx, part, m);
-    worstSeverity = Math.max(worstSeverity, severity(m.verdict));
-    if (m.limit !== undefined && m.limit > 0) least = Math.min(least, m.margin / m.limit);
   }
   relative[i] = Number.isFinite(least) ? least : 0;
-  return allowingUnrated(worstSeverity, ctx.policy);
+  return allowingUnrated(worstSeverity, (checks[0] as Checks[number]).ctx.policy);
 }
 
 /** With allow_unrated an unrated part counts as marginal. */
@@ -131,21 +141,21 @@ function allowingUnrated(worstSeverity: number, policy: Policy): number {
 
 /** One part's result, as a role's ranking makes it when read. */
 export function partResult(
-  rules: readonly Rule[],
-  ctx: RoleContext,
+  checks: Checks,
   part: Part,
   bom: boolean,
   severityOfPart: number,
   relative: number,
 ): PartResult {
-  return new LazyPartResult(rules, ctx, part, bom, VERDICTS[severityOfPart] ?? "fail", relative);
+  return new LazyPartResult(checks, part, bom, VERDICTS[severityOfPart] ?? "fail", relative);
 }
 
 /** Scores one part on its own (tests and single lookups); roles score whole lists in runRole. */
-export function evaluatePart(rules: readonly Rule[], ctx: RoleContext, part: Part, bom: boolean): PartResult {
+export function evaluatePart(rules: readonly AnyRule[], ctx: RoleContext, part: Part, bom: boolean): PartResult {
   const relative = new Float64Array(1);
-  const s = scorePart(rules, ctx, part, true, relative, 0);
-  return partResult(rules, ctx, part, bom, s, relative[0] as number);
+  const checks: Checks = [{ rules, ctx }];
+  const s = scorePart(checks, part, true, relative, 0);
+  return partResult(checks, part, bom, s, relative[0] as number);
 }
 
 /** The worst finding's verdict, as scorePart folds it; with allow_unrated an unrated finding counts as marginal. */

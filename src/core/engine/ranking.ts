@@ -1,10 +1,9 @@
 // A role's candidates in ranked order (SPEC §7), kept as typed arrays of
 // severities and relative margins: a part becomes a result object only when a
 // page or report reads the list it is in, and each list is sorted on first read.
-import type { Part } from "../catalogue.ts";
-import { idOrder, partResult, type PartResult } from "./evaluate-part.ts";
-import type { RoleContext, Rule } from "./types.ts";
-import { severity } from "./verdict.ts";
+import type { Part } from "../catalogue-index.ts";
+import { severity } from "../rule-kit/verdict.ts";
+import { idOrder, partResult, type Checks, type PartResult } from "./evaluate-part.ts";
 
 const LAST_FIT = severity("marginal");
 
@@ -23,8 +22,7 @@ function isInIdOrder(parts: readonly Part[]): boolean {
 }
 
 export class RoleRanking {
-  readonly #rules: readonly Rule[];
-  readonly #ctx: RoleContext;
+  readonly #checks: Checks;
   readonly #parts: readonly Part[];
   readonly #severity: Uint8Array;
   readonly #majorKey: Uint16Array;
@@ -37,8 +35,7 @@ export class RoleRanking {
   #rejected: PartResult[] | undefined;
 
   constructor(
-    rules: readonly Rule[],
-    ctx: RoleContext,
+    checks: Checks,
     parts: readonly Part[],
     severities: Uint8Array,
     /** majorKey of each part, worked out while the engine had the part at hand. */
@@ -48,8 +45,7 @@ export class RoleRanking {
     /** Place of the BOM part among `parts`, found while scoring (−1: not a candidate). */
     bomPlace = -1,
   ) {
-    this.#rules = rules;
-    this.#ctx = ctx;
+    this.#checks = checks;
     this.#parts = parts;
     this.#severity = severities;
     this.#majorKey = majorKeys;
@@ -94,8 +90,7 @@ export class RoleRanking {
     if (made === undefined) {
       const part = this.#parts[i] as Part;
       made = partResult(
-        this.#rules,
-        this.#ctx,
+        this.#checks,
         part,
         part.id === this.#bom,
         this.#severity[i] as number,

@@ -1,12 +1,16 @@
 // What evaluating a design yields: derived values and, per role, ranked parts.
-import type { PartKind } from "../catalogue.ts";
+import type { PartKind } from "../catalogue-index.ts";
 import type { Divider } from "../math/divider.ts";
 import type { PumpRail } from "../math/charge-pump.ts";
 import type { LevelShiftNetwork } from "../math/level-shift.ts";
 import type { Design, Role } from "../schemas/design.ts";
 import { isFitResult, type PartResult } from "./evaluate-part.ts";
-import type { Rails, Stage } from "./types.ts";
+import type { Rails, Stage } from "../rule-kit/types.ts";
 import type { Budget, Conversion } from "./budget.ts";
+
+/** A derived value the pages, the try page and the CLI print as it is. */
+export type DisplayRow = { label: string; value: string; partId?: string; role?: string };
+export type DisplayGroup = { title: string; rows: DisplayRow[] };
 
 export type RoleResult = {
   role: Role;
@@ -16,7 +20,12 @@ export type RoleResult = {
   /** What the role does, in a few words. */
   label: string;
   rules: readonly string[];
+  /** The role's first (often only) stage. */
   stage: Stage;
+  /** Every stage the role's part serves; `id` is set when there are several. */
+  stages: readonly { id?: string; stage: Stage }[];
+  /** Parts of this role on the board (default 1). */
+  count?: number;
   /** Ranked on first read. */
   fits: PartResult[];
   rejected: PartResult[];
@@ -50,14 +59,16 @@ export type Derived = {
   adc_step_at_input_v: number;
   rectifier_diode?: DiodeUse;
   clamp_diode?: DiodeUse;
-  /** offset-to-mid-rail only: the Millman network and the output span it gives. */
+  /** Level-shift front ends only: the Millman network and the output span it gives. */
   level_shift?: LevelShiftNetwork & { output_low_v: number; output_high_v: number };
 };
 
 export type DesignResult = {
   design: Design;
-  topology: Exclude<Design["topology"], "all">;
+  topology: string;
   derived: Derived;
+  /** The topology's derived values, worded: what the CLI, the design page and the try page print. */
+  display: DisplayGroup[];
   roles: RoleResult[];
   /** Things the reader must know about how the numbers were obtained. */
   notes: string[];
@@ -68,7 +79,7 @@ export type DesignResult = {
 };
 
 export type ComparisonRow = {
-  topology: Exclude<Design["topology"], "all">;
+  topology: string;
   holds: boolean;
   roles: { role: Role; fits: number; chosen?: string }[];
   effective_bits: number;
@@ -81,7 +92,7 @@ export type ComparisonRow = {
 
 export type Comparison = {
   rows: ComparisonRow[];
-  recommended: Exclude<Design["topology"], "all">;
+  recommended: string;
   /** Why the recommended topology wins, as a clause ("its budget passes …"). */
   reason: string;
   /** Every topology's full result, in row order. */

@@ -1,4 +1,4 @@
-// The resistor network of topology `offset-to-mid-rail`: the signal through R1,
+// The level-shift resistor network (a single-rail front end): the signal through R1,
 // the ADC reference through R2 and R3 to ground meet at the op amp's
 // non-inverting input. By Millman's theorem (J. Millman, "A useful network
 // theorem", Proc. IRE 28(9), 1940) the node sits at the conductance-weighted

@@ -76,20 +76,10 @@ function oneOf<const T extends readonly [string, ...string[]]>(values: T) {
   });
 }
 
-export const TOPOLOGIES = ["rectify-and-sign", "offset-to-mid-rail", "all"] as const;
 export const LEVEL_SHIFTS = ["diode-clamp", "npn-inverter", "pull-up"] as const;
 export const SERIES = ["E12", "E24", "E96"] as const;
-export const ROLES = [
-  "buffer",
-  "rectifier",
-  "sign",
-  "pump-diode",
-  "rectifier-diode",
-  "clamp-diode",
-  "level-shift",
-  "reference-buffer",
-] as const;
-export type Role = (typeof ROLES)[number];
+/** A role id; the topology registry (src/topologies/) says which exist. */
+export type Role = string;
 
 export const POLICY_DEFAULTS = {
   headroom_margin_v: 0.1,
@@ -176,27 +166,42 @@ const designId = z.unknown().transform((value, ctx): string => {
   return z.NEVER;
 });
 
-const bom = z
-  .record(
-    z.string().transform((key, ctx): Role => {
-      if ((ROLES as readonly string[]).includes(key)) return key as Role;
-      const guess = closest(key, ROLES);
-      ctx.addIssue({
-        code: "custom",
-        message: `unknown role (got '${key}', expected ${guess ? `'${guess}'` : `one of ${ROLES.join(", ")}`})`,
-      });
-      return z.NEVER;
-    }),
-    designId,
-  )
-  .optional()
-  .transform((b): Partial<Record<Role, string>> => b ?? {});
+function bomOf(roles: readonly string[]) {
+  return z
+    .record(
+      z.string().transform((key, ctx): Role => {
+        if (roles.includes(key)) return key;
+        const guess = closest(key, roles);
+        ctx.addIssue({
+          code: "custom",
+          message: `unknown role (got '${key}', expected ${guess ? `'${guess}'` : `one of ${roles.join(", ")}`})`,
+        });
+        return z.NEVER;
+      }),
+      designId,
+    )
+    .optional()
+    .transform((b): Partial<Record<Role, string>> => b ?? {});
+}
 
-export const designSchema = z
-  .strictObject({
+/**
+ * What the design schema takes from the topology registry. The schema is built
+ * from it (src/engine.ts does that once), so src/core names no topology and
+ * imports nothing from src/topologies.
+ */
+export type DesignNames = {
+  /** Topology ids, "all" included, in the order messages list them. */
+  topologies: readonly [string, ...string[]];
+  roles: readonly string[];
+  /** Checks a topology adds for the designs that name it (or "all"). */
+  check?: (design: DesignShape) => readonly { path: (string | number)[]; message: string }[];
+};
+
+function designObject(names: DesignNames) {
+  return z.strictObject({
     id: designId,
     title: text("title", 200),
-    topology: oneOf(TOPOLOGIES),
+    topology: oneOf(names.topologies),
     supply: z.strictObject({
       positive_v: si({ above: 0, max: 100 }),
       negative: negativeSupply,
@@ -247,9 +252,15 @@ export const designSchema = z
     accuracy: z.strictObject({ required_v: si({ above: 0 }) }),
     temperature: z.strictObject({ min_c: si({ min: -273.15 }), max_c: si({ max: 500 }) }),
     policy,
-    bom,
-  })
-  .superRefine((d, ctx) => {
+    bom: bomOf(names.roles),
+  });
+}
+
+/** A design as the schema's object reads it, before the cross-field checks. */
+export type DesignShape = z.output<ReturnType<typeof designObject>>;
+
+export function designSchemaFor(names: DesignNames) {
+  return designObject(names).superRefine((d, ctx) => {
     const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: "custom", path, message });
     if (d.front_end.window_v >= d.supply.positive_v) {
       issue(
@@ -257,12 +268,7 @@ export const designSchema = z
         `window can never fit inside the positive rail (got ${d.front_end.window_v} V, expected less than supply.positive_v ${d.supply.positive_v} V)`,
       );
     }
-    if (d.topology !== "offset-to-mid-rail" && d.front_end.window_v > d.adc.reference_v) {
-      issue(
-        ["front_end", "window_v"],
-        `window is wider than the ADC range (got ${d.front_end.window_v} V, expected at most adc.reference_v ${d.adc.reference_v} V)`,
-      );
-    }
+    for (const p of names.check?.(d) ?? []) issue(p.path, p.message);
     // The converter runs from the positive rail; a reference above it would put full scale out of reach.
     if (d.adc.reference_v > d.supply.positive_v) {
       issue(
@@ -295,9 +301,11 @@ export const designSchema = z
       );
     }
   });
+}
 
-export type DesignInput = z.input<typeof designSchema>;
-export type Design = z.output<typeof designSchema>;
+export type DesignSchema = ReturnType<typeof designSchemaFor>;
+export type DesignInput = z.input<DesignSchema>;
+export type Design = z.output<DesignSchema>;
 export type Policy = Design["policy"];
 export type NegativeSupply = Design["supply"]["negative"];
 export type Topology = Design["topology"];

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { parseDesignValue } from "../../../src/core/designs.ts";
+import { parseDesignValue } from "../../../src/engine.ts";
 import { parseSI } from "../../../src/core/units.ts";
 import { DEFAULT_DRAFT, DEFAULT_INPUT } from "../../../src/client/try/defaults.ts";
 import { checkDraft, draftFromInput, policyOverrides, rawFromDraft, siText } from "../../../src/client/try/draft.ts";

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { catalogueFromParts, type Part } from "../../../src/core/catalogue.ts";
-import { evaluateDesign } from "../../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../../src/engine.ts";
 import type { DesignResult } from "../../../src/core/engine/result.ts";
 import { loadCatalogue } from "../../../src/node/load-data.ts";
 import { DEFAULT_DRAFT } from "../../../src/client/try/defaults.ts";

@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { parseDesignValue } from "../../../src/core/designs.ts";
-import { evaluateDesign } from "../../../src/core/engine/evaluate.ts";
+import { parseDesignValue } from "../../../src/engine.ts";
+import { evaluateDesign } from "../../../src/engine.ts";
 import { formatProblem } from "../../../src/core/problems.ts";
 import type { Design } from "../../../src/core/schemas/design.ts";
 import { loadCatalogue } from "../../../src/node/load-data.ts";

@@ -1,7 +1,7 @@
 // Accuracy budget (SPEC §8): terms, sums, verdicts and calibration.
 import { describe, expect, it } from "vitest";
 import { buildBudget, sumTerms, type BudgetTerm } from "../../../src/core/engine/budget.ts";
-import { fixedTerms } from "../../../src/core/engine/topologies/rectify-and-sign.ts";
+import { fixedTerms } from "../../../src/topologies/rectify-and-sign.ts";
 import { design as designFor } from "../../helpers/designs.ts";
 
 const term = (name: string, v: number, calibrates_out = false): BudgetTerm => ({

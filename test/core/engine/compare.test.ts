@@ -1,6 +1,6 @@
 // Topology "all" on the demo data: the comparison and its recommendation.
 import { describe, expect, it } from "vitest";
-import { evaluateDesign } from "../../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../../src/engine.ts";
 import { loadDataSet } from "../../../src/node/load-data.ts";
 
 const data = loadDataSet("data");

@@ -1,7 +1,7 @@
 // evaluateDesign on a small catalogue built from generic classes (test/helpers/parts.ts).
 import { describe, expect, it } from "vitest";
 import { catalogueFromParts, type Catalogue } from "../../../src/core/catalogue.ts";
-import { evaluateDesign } from "../../../src/core/engine/evaluate.ts";
+import { evaluateDesign } from "../../../src/engine.ts";
 import { designHolds, type DesignResult, type RoleResult } from "../../../src/core/engine/result.ts";
 import { forwardVoltage } from "../../../src/core/math/diode.ts";
 import type { Design } from "../../../src/core/schemas/design.ts";

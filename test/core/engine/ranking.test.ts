@@ -34,7 +34,7 @@ function ranking(rows: readonly Row[], bom?: string): RoleRanking {
   const severities = Uint8Array.from(rows, (r) => severity(r.verdict));
   const majorKeys = Uint16Array.from(parts, (p, i) => majorKey(severities[i]!, p));
   const relative = Float64Array.from(rows, (r) => r.relative ?? 0);
-  return new RoleRanking(rules, ctx, parts, severities, majorKeys, relative, bom);
+  return new RoleRanking([{ rules, ctx }], parts, severities, majorKeys, relative, bom);
 }
 
 const FITS = ["oa-stocked-1c", "oa-stocked-1a", "oa-stocked-1b", "oa-stocked-2", "oa-listed", "oa-marginal"];

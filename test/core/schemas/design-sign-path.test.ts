@@ -1,6 +1,6 @@
 // The optional sign-path fields of issue 21: a design without them validates as before.
 import { describe, expect, it } from "vitest";
-import { parseDesignValue } from "../../../src/core/designs.ts";
+import { parseDesignValue } from "../../../src/engine.ts";
 import { formatProblem } from "../../../src/core/problems.ts";
 import { designInput, type DeepPartial } from "../../helpers/designs.ts";
 

@@ -1,8 +1,8 @@
 // The attenuator every topology starts with (SPEC §6).
-import { chooseDivider, theveninOhm, type Divider } from "../../math/divider.ts";
-import type { Design } from "../../schemas/design.ts";
-import { formatSI } from "../../units.ts";
-import type { DesignProblem } from "../result.ts";
+import { chooseDivider, theveninOhm, type Divider } from "../core/math/divider.ts";
+import type { Design } from "../core/schemas/design.ts";
+import { formatSI } from "../core/units.ts";
+import type { DesignProblem } from "../core/engine/result.ts";
 
 export type FrontEnd = {
   ok: true;

@@ -2,60 +2,33 @@
 // comparator, two-op-amp precision rectifier, optional charge-pumped V−.
 // Diodes are settled first so every amplifier is checked against the rail and
 // the diode drops it will really get.
-import type { Catalogue, Part } from "../../catalogue.ts";
-import { pumpRail } from "../../math/charge-pump.ts";
-import { forwardVoltage } from "../../math/diode.ts";
-import type { Design, Role } from "../../schemas/design.ts";
-import type { Diode } from "../../schemas/diode.ts";
-import { formatSI, formatVolts } from "../../units.ts";
-import { buildBudget, type BudgetTerm, type Conversion } from "../budget.ts";
-import { ratioDeviation } from "../../math/divider.ts";
-import type { Derived, DesignResult, DiodeUse, Evaluation, RoleResult } from "../result.ts";
-import { isFitResult } from "../evaluate-part.ts";
-import { OP_AMP_STAGE_RULES, runRole as runRoleWith, type RoleSpec } from "../run-role.ts";
-import type { DiodeStage, OpAmpStage, Rails, SignStage, Stage } from "../types.ts";
+import { forwardCurrent } from "../../rules/forward-current.ts";
+import { inputCommonMode } from "../../rules/input-common-mode.ts";
+import { leakage } from "../../rules/leakage.ts";
+import { logicHigh } from "../../rules/logic-high.ts";
+import { logicLow } from "../../rules/logic-low.ts";
+import { offset } from "../../rules/offset.ts";
+import { bandwidth } from "../../rules/bandwidth.ts";
+import { propagationDelay } from "../../rules/propagation-delay.ts";
+import { recovery } from "../../rules/recovery.ts";
+import { reverseVoltage } from "../../rules/reverse-voltage.ts";
+import { signDeadBand } from "../../rules/sign-dead-band.ts";
+import { supplyRange } from "../../rules/supply-range.ts";
+import { zeroCrossing } from "../../rules/zero-crossing.ts";
+import type { BudgetTerm, Conversion, RoleTerm } from "../core/engine/budget.ts";
+import { isFitResult } from "../core/engine/evaluate-part.ts";
+import type { Derived, DiodeUse, DisplayGroup, DisplayRow, RoleResult } from "../core/engine/result.ts";
+import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
+import { pumpRail } from "../core/math/charge-pump.ts";
+import { forwardVoltage } from "../core/math/diode.ts";
+import { ratioDeviation } from "../core/math/divider.ts";
+import type { DiodeStage, OpAmpStage, Rails, SignStage } from "../core/rule-kit/index.ts";
+import type { Design } from "../core/schemas/design.ts";
+import type { Diode } from "../core/schemas/diode.ts";
+import { formatSI, formatVolts } from "../core/units.ts";
+import { railRows, ratio, si } from "./display.ts";
 import { frontEnd } from "./front-end.ts";
-
-const OP_AMP_RULES = OP_AMP_STAGE_RULES;
-
-export const RECTIFY_AND_SIGN_ROLES: Partial<Record<Role, RoleSpec>> = {
-  buffer: {
-    kind: "op-amp",
-    kinds: ["op-amp"],
-    label: "follower after the divider (in = out = ±W)",
-    rules: OP_AMP_RULES,
-  },
-  rectifier: {
-    kind: "op-amp",
-    kinds: ["op-amp"],
-    label: "precision rectifier, two per design (output −Vf … W + Vf, noise gain 2)",
-    rules: [...OP_AMP_RULES, "zero-crossing"],
-  },
-  sign: {
-    kind: "comparator",
-    kinds: ["comparator", "op-amp"],
-    label: "sign comparator driving a logic input (an op amp may stand in, at best marginal)",
-    rules: ["supply-range", "input-common-mode", "logic-high", "logic-low", "propagation-delay", "sign-dead-band"],
-  },
-  "pump-diode": {
-    kind: "diode",
-    kinds: ["diode"],
-    label: "charge-pump diode (two per pump)",
-    rules: ["reverse-voltage", "recovery", "forward-current"],
-  },
-  "rectifier-diode": {
-    kind: "diode",
-    kinds: ["diode"],
-    label: "precision-rectifier feedback diode",
-    rules: ["reverse-voltage", "leakage", "recovery"],
-  },
-  "clamp-diode": {
-    kind: "diode",
-    kinds: ["diode"],
-    label: "series diode from the comparator to the logic input",
-    rules: ["reverse-voltage", "leakage"],
-  },
-};
+import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
 
 /** Used only when the catalogue has no diode at all, so rails can still be computed. */
 const NOMINAL_SILICON: Diode = {
@@ -76,24 +49,15 @@ const NOMINAL_SILICON: Diode = {
   if_max_ma: 200,
 };
 
-export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Evaluation {
+function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation {
   const fe = frontEnd(design);
   if (!fe.ok) return fe;
   const { divider, ratio: k, window_v: W, thevenin_ohm, target_ratio } = fe;
   const notes: string[] = [];
-  const roles: RoleResult[] = [];
   const policy = design.policy;
   const A = design.accuracy.required_v;
   const positive = design.supply.positive_v;
   const neg = design.supply.negative;
-
-  const runRole = (role: Role, stage: Stage, rails: Rails, candidates: readonly Part[]): RoleResult => {
-    const spec = RECTIFY_AND_SIGN_ROLES[role];
-    if (!spec) throw new Error(`role ${role} is not part of rectify-and-sign`);
-    const result = runRoleWith(design, role, spec, stage, rails, candidates);
-    roles.push(result);
-    return result;
-  };
 
   // Diode choice for a role: the BOM part, else the best fit, else the least bad.
   const settleDiode = (r: RoleResult, what: string): Diode => {
@@ -129,7 +93,7 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
       recovery_what: `${policy.timing_fraction * 100} % of the pump's ${formatSI(1 / (2 * neg.frequency_hz), "s")} half period`,
       forward_a: 2 * neg.load_a,
     };
-    const r = runRole("pump-diode", stage, noRails, catalogue.diodes);
+    const r = role("pump-diode", stage, noRails);
     const diode = settleDiode(r, "pump diode");
     const pumpDiode = use(diode, neg.load_a, r);
     const rail = pumpRail(neg, pumpDiode.vf_v);
@@ -176,7 +140,7 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
 
   // 2. The rectifier's diodes, at the current the full window drives through the load.
   const rectCurrent = W / design.front_end.rectifier_load_ohm;
-  const rectDiodeRole = runRole(
+  const rectDiodeRole = role(
     "rectifier-diode",
     {
       stage: "diode",
@@ -191,7 +155,6 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
       leakage_what: "offset share of the required accuracy, input-referred",
     },
     rails,
-    catalogue.diodes,
   );
   const rectDiode = use(settleDiode(rectDiodeRole, "rectifier diode"), rectCurrent, rectDiodeRole);
   const vf = rectDiode.vf_v;
@@ -200,7 +163,7 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
   let clamp: SignStage["clamp"];
   let clampUse: DiodeUse | undefined;
   if (design.logic.level_shift === "diode-clamp") {
-    const clampRole = runRole(
+    const clampRole = role(
       "clamp-diode",
       {
         stage: "diode",
@@ -212,7 +175,6 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
         leakage_what: "V_IL of the logic input",
       },
       rails,
-      catalogue.diodes,
     );
     const d = settleDiode(clampRole, "clamp diode");
     clamp = { id: d.id, vf_1ma_v: d.vf_1ma_v, vf_10ma_v: d.vf_10ma_v, ir_na: d.ir_na };
@@ -252,12 +214,9 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
     output_per_input: k,
     ...(clamp ? { clamp } : {}),
   };
-  runRole("buffer", buffer, rails, catalogue.opAmps);
-  runRole("rectifier", rectifier, rails, catalogue.opAmps);
-  runRole("sign", sign, rails, catalogue.amplifiers);
-
-  const order: Role[] = ["buffer", "rectifier", "sign", "pump-diode", "rectifier-diode", "clamp-diode"];
-  roles.sort((a, b) => order.indexOf(a.role) - order.indexOf(b.role));
+  role("buffer", buffer, rails);
+  role("rectifier", rectifier, rails);
+  role("sign", sign, rails);
 
   const derived: Derived = {
     rails,
@@ -271,32 +230,26 @@ export function evaluateRectifyAndSign(design: Design, catalogue: Catalogue): Ev
     rectifier_diode: rectDiode,
     ...(clampUse ? { clamp_diode: clampUse } : {}),
   };
-  const budget = buildBudget(
-    design,
-    fixedTerms(design, k),
-    ROLE_TERMS,
-    roles,
-    design.adc.bits + Math.log2(W / design.adc.reference_v) + 1,
-  );
-  const result: DesignResult = {
-    design,
-    topology: "rectify-and-sign",
-    derived,
-    roles,
-    notes,
-    budget,
-    conversion: conversion(design, k),
+  return {
+    ok: true,
+    outcome: {
+      derived,
+      notes,
+      terms: fixedTerms(design, k),
+      effectiveBits: design.adc.bits + Math.log2(W / design.adc.reference_v) + 1,
+      conversion: conversion(design, k),
+      display: display(design, derived),
+    },
   };
-  return { ok: true, result };
 }
 
-const ROLE_TERMS = [
-  { name: "buffer-offset", label: "buffer offset and bias current", role: "buffer", rule: "offset" },
-  { name: "rectifier-offset", label: "rectifier offset and bias current", role: "rectifier", rule: "offset" },
-  { name: "buffer-bandwidth", label: "buffer gain error at f max", role: "buffer", rule: "bandwidth" },
-  { name: "rectifier-bandwidth", label: "rectifier gain error at f max", role: "rectifier", rule: "bandwidth" },
-  { name: "sign-dead-band", label: "comparator dead band", role: "sign", rule: "sign-dead-band" },
-  { name: "rectifier-diode-leakage", label: "rectifier diode leakage", role: "rectifier-diode", rule: "leakage" },
+const ROLE_TERMS: readonly RoleTerm[] = [
+  { name: "buffer-offset", label: "buffer offset and bias current", role: "buffer", rule: offset.id },
+  { name: "rectifier-offset", label: "rectifier offset and bias current", role: "rectifier", rule: offset.id },
+  { name: "buffer-bandwidth", label: "buffer gain error at f max", role: "buffer", rule: bandwidth.id },
+  { name: "rectifier-bandwidth", label: "rectifier gain error at f max", role: "rectifier", rule: bandwidth.id },
+  { name: "sign-dead-band", label: "comparator dead band", role: "sign", rule: signDeadBand.id },
+  { name: "rectifier-diode-leakage", label: "rectifier diode leakage", role: "rectifier-diode", rule: leakage.id },
 ];
 
 /** Terms that do not depend on the parts: the ADC, its reference, the divider. */
@@ -336,3 +289,143 @@ function conversion(design: Design, k: number): Conversion {
       : "sign = +1 when the sign input reads low (the NPN inverts), −1 when it reads high",
   };
 }
+
+/** Derived values as the design page, the try page and the CLI print them. */
+function display(design: Design, d: Derived): DisplayGroup[] {
+  const series = design.front_end.series;
+  const divider: DisplayRow[] = d.divider
+    ? [
+        { label: "Target ratio = window ÷ peak", value: ratio(d.target_ratio) },
+        { label: `Top resistor R1 (${series})`, value: si(d.divider.top_ohm, "Ω") },
+        { label: `Bottom resistor R2 (${series})`, value: si(d.divider.bottom_ohm, "Ω") },
+        { label: "Ratio k = R2 / (R1 + R2)", value: ratio(d.divider.ratio) },
+        { label: "Total R1 + R2", value: si(d.divider.total_ohm, "Ω") },
+      ]
+    : [{ label: "Divider", value: "none: the peak already fits the window (k = 1)" }];
+  const signal: DisplayRow[] = [
+    { label: "Window used W = k · peak", value: `±${formatVolts(d.window_v)}` },
+    { label: "Resistance seen by the buffer (Rs + R1) ‖ R2", value: si(d.thevenin_ohm, "Ω") },
+    { label: "One ADC step at the input", value: si(d.adc_step_at_input_v, "V") },
+  ];
+  const diodes: DisplayRow[] = [];
+  if (d.rectifier_diode) {
+    diodes.push({
+      label: "Rectifier diode drop",
+      value: `${d.rectifier_diode.id}, ${formatVolts(d.rectifier_diode.vf_v)} at ${si(d.rectifier_diode.current_a, "A")}`,
+      partId: d.rectifier_diode.id,
+      role: "rectifier-diode",
+    });
+  }
+  if (d.clamp_diode) {
+    diodes.push({
+      label: "Clamp diode drop",
+      value: `${d.clamp_diode.id}, ${formatVolts(d.clamp_diode.vf_v)} at ${si(d.clamp_diode.current_a, "A")}`,
+      partId: d.clamp_diode.id,
+      role: "clamp-diode",
+    });
+  }
+  const groups: DisplayGroup[] = [
+    { title: "Rails", rows: railRows(d) },
+    { title: "Divider", rows: divider },
+    { title: "Signal at the ADC side", rows: signal },
+  ];
+  if (diodes.length > 0) groups.push({ title: "Diode drops in the signal chain", rows: diodes });
+  return groups;
+}
+
+export const rectifyAndSign = defineTopology({
+  id: "rectify-and-sign",
+  title: "Rectify and sign",
+  description:
+    "A divider (top R1, bottom R2 from the named E-series, ratio k = R2/(R1 + R2) as large as possible but not above window/peak) feeds a follower buffer; a comparator decides the sign; a two-op-amp precision rectifier folds the negative half up; an optional diode/capacitor charge pump makes V− = −(V_d − 2V_F) + I/(f·C_fly) + ripple/2, ripple = I/(f·C_res) (switched-capacitor resistance 1/(f·C)). Buffer in = out = ±W; rectifier out −Vf … W + Vf at noise gain 2; W = k · peak.",
+  reading: "volts = sign · (code + 0.5) · (V_ref/2^N)/k",
+  fields: [
+    "supply.positive_v",
+    "supply.negative",
+    "signal.peak_v",
+    "signal.max_frequency_hz",
+    "signal.source_ohm",
+    "front_end.window_v",
+    "front_end.divider_total_ohm",
+    "front_end.resistor_tolerance",
+    "front_end.series",
+    "front_end.rectifier_load_ohm",
+    "adc.bits",
+    "adc.reference_v",
+    "adc.reference_tolerance",
+    "logic.vdd_v",
+    "logic.vih_v",
+    "logic.vil_v",
+    "logic.level_shift",
+    "logic.pull_down_ohm",
+    "accuracy.required_v",
+    "temperature.min_c",
+    "temperature.max_c",
+  ],
+  roles: [
+    {
+      id: "buffer",
+      name: "Buffer",
+      field: "Buffer op amp",
+      label: "follower after the divider (in = out = ±W)",
+      wants: "amplify",
+      rules: OP_AMP_STAGE_RULES,
+    },
+    {
+      id: "rectifier",
+      name: "Rectifier",
+      field: "Rectifier op amp",
+      label: "precision rectifier, two per design (output −Vf … W + Vf, noise gain 2)",
+      wants: "amplify",
+      rules: [...OP_AMP_STAGE_RULES, zeroCrossing],
+      count: 2,
+    },
+    {
+      id: "sign",
+      name: "Sign comparator",
+      field: "Sign comparator",
+      label: "sign comparator driving a logic input (an op amp may stand in, at best marginal)",
+      wants: "compare",
+      rules: [supplyRange, inputCommonMode, logicHigh, logicLow, propagationDelay, signDeadBand],
+    },
+    {
+      id: "pump-diode",
+      name: "Pump diode",
+      field: "Pump diode",
+      label: "charge-pump diode (two per pump)",
+      wants: "rectify",
+      rules: [reverseVoltage, recovery, forwardCurrent],
+      count: 2,
+      when: [{ path: "supply.negative.kind", is: ["charge-pump"] }],
+    },
+    {
+      id: "rectifier-diode",
+      name: "Rectifier diode",
+      field: "Rectifier diode",
+      label: "precision-rectifier feedback diode",
+      wants: "rectify",
+      rules: [reverseVoltage, leakage, recovery],
+      count: 2,
+    },
+    {
+      id: "clamp-diode",
+      name: "Clamp diode",
+      field: "Clamp diode",
+      label: "series diode from the comparator to the logic input",
+      wants: "clamp",
+      rules: [reverseVoltage, leakage],
+      when: [{ path: "logic.level_shift", is: ["diode-clamp"] }],
+    },
+  ],
+  roleTerms: ROLE_TERMS,
+  checkDesign(d) {
+    if (d.front_end.window_v <= d.adc.reference_v) return [];
+    return [
+      {
+        path: "front_end.window_v",
+        message: `window is wider than the ADC range (got ${d.front_end.window_v} V, expected at most adc.reference_v ${d.adc.reference_v} V)`,
+      },
+    ];
+  },
+  evaluate,
+});
