@@ -10,6 +10,7 @@ import { formatSI } from "../core/units.ts";
 import { decidingFinding } from "../site/deciding.ts";
 import { designState } from "./design-state.ts";
 import { xmlAttr, xmlText } from "./formats/xml.ts";
+import { findingLabel } from "./finding-label.ts";
 import { noFit } from "./summary.ts";
 
 type Outcome =
@@ -21,7 +22,7 @@ type Case = { name: string; outcome: Outcome };
 const lines = (p: PartResult) =>
   p.findings
     .filter((f) => f.verdict !== "pass")
-    .map((f) => `${f.rule} (${f.verdict}): ${f.reason}`)
+    .map((f) => `${findingLabel(f)}: ${f.verdict}: ${f.reason}`)
     .join("\n");
 
 function roleCase(role: RoleResult): Case {
@@ -58,7 +59,11 @@ function bomCase(role: RoleResult, id: string): Case {
     const f = decidingFinding(p);
     return {
       name,
-      outcome: { kind: "failure", message: f ? `${p.verdict}: ${f.rule}: ${f.reason}` : p.verdict, body: lines(p) },
+      outcome: {
+        kind: "failure",
+        message: f ? `${p.verdict}: ${findingLabel(f)}: ${f.reason}` : p.verdict,
+        body: lines(p),
+      },
     };
   }
   return { name, outcome: { kind: "pass", output: p.verdict === "marginal" ? `marginal:\n${lines(p)}` : "pass" } };

@@ -36,7 +36,8 @@ function partCell(id: string, links: GuideLinks | undefined): string {
 
 function findingCell(label: string, f: Finding | undefined): string {
   if (!f) return "";
-  return `${label === "" ? "" : `${mdText(label)} `}${mdCode(f.rule)} (${f.verdict}): ${mdText(f.reason)}`;
+  const stage = f.stage === undefined ? "" : ` in ${mdText(f.stage)}`;
+  return `${label === "" ? "" : `${mdText(label)} `}${mdCode(f.rule)}${stage} (${f.verdict}): ${mdText(f.reason)}`;
 }
 
 /** The row of one role: the part the design uses, else the closest candidate. */

@@ -4,13 +4,13 @@
 import type { PartResult } from "../../core/engine/evaluate-part.ts";
 import { isFitResult } from "../../core/engine/evaluate-part.ts";
 import type { DesignResult, RoleResult } from "../../core/engine/result.ts";
-import type { Verdict } from "../../core/engine/types.ts";
+import type { Finding, Verdict } from "../../core/engine/types.ts";
 import { designState, type DesignState } from "../design-state.ts";
 
 /** One rule's finding on one side of the change. */
 export type RuleSide = { verdict: Verdict; reason: string };
-/** A rule whose verdict differs between the sides (or that exists on one side only). */
-export type RuleChange = { rule: string; before: RuleSide | null; after: RuleSide | null };
+/** A rule whose verdict differs between the sides (or that exists on one side only); `stage` in a role of several stages. */
+export type RuleChange = { rule: string; stage?: string; before: RuleSide | null; after: RuleSide | null };
 
 export type PartChangeKind =
   /** Did not fit (or was not a candidate) and now fits. */
@@ -99,6 +99,10 @@ function byId(role: RoleResult): Map<string, PartResult> {
   return map;
 }
 
+/** A rule is checked once per stage: the pair names one finding. */
+const findingKey = (f: Finding) => `${f.stage ?? ""}/${f.rule}`;
+const named = (f: Finding) => ({ rule: f.rule, ...(f.stage !== undefined ? { stage: f.stage } : {}) });
+
 function ruleChanges(before: PartResult | undefined, after: PartResult | undefined): RuleChange[] {
   // A part on one side only: its findings that are not a pass say why it fits, or not.
   if (!before || !after) {
@@ -106,23 +110,23 @@ function ruleChanges(before: PartResult | undefined, after: PartResult | undefin
     const shown = side.findings.filter((f) => f.verdict !== "pass");
     return shown.map((f) => {
       const s = { verdict: f.verdict, reason: f.reason };
-      return { rule: f.rule, before: before ? s : null, after: after ? s : null };
+      return { ...named(f), before: before ? s : null, after: after ? s : null };
     });
   }
   const out: RuleChange[] = [];
-  const afterByRule = new Map(after.findings.map((f) => [f.rule, f]));
+  const afterByRule = new Map(after.findings.map((f) => [findingKey(f), f]));
   for (const b of before.findings) {
-    const a = afterByRule.get(b.rule);
-    afterByRule.delete(b.rule);
+    const a = afterByRule.get(findingKey(b));
+    afterByRule.delete(findingKey(b));
     if (a && a.verdict === b.verdict) continue;
     out.push({
-      rule: b.rule,
+      ...named(b),
       before: { verdict: b.verdict, reason: b.reason },
       after: a ? { verdict: a.verdict, reason: a.reason } : null,
     });
   }
   for (const a of afterByRule.values())
-    out.push({ rule: a.rule, before: null, after: { verdict: a.verdict, reason: a.reason } });
+    out.push({ ...named(a), before: null, after: { verdict: a.verdict, reason: a.reason } });
   return out;
 }
 

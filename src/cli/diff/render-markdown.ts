@@ -3,6 +3,7 @@
 // budget, best part, BOM part, each part whose verdict changed) with the
 // reasons before and after; the regressions that fail the run come first.
 import { formatSI } from "../../core/units.ts";
+import { findingLabel } from "../finding-label.ts";
 import { mdCode, mdLink, mdTable, mdText } from "../formats/markdown.ts";
 import type { GuideLinks } from "../guide-links.ts";
 import type { DesignDiff, DiffReport, PartChange, RoleDiff, RuleChange, RuleSide } from "./compare.ts";
@@ -81,7 +82,7 @@ function partRow(role: string, p: PartChange, part: (id: string) => string): str
     if (verdict === null) return "not a candidate";
     const reasons = p.rules.flatMap((c) => {
       const s = pick(c);
-      return s ? [`${c.rule} ${s.verdict}: ${s.reason}`] : [];
+      return s ? [`${findingLabel(c)} ${s.verdict}: ${s.reason}`] : [];
     });
     return mdText(`${verdict}${reasons.length > 0 ? `: ${reasons.join("; ")}` : ""}`);
   };

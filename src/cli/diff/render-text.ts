@@ -1,5 +1,6 @@
 // The diff as text at 80 columns: per design what moved, then why `diff` fails.
 import { formatSI } from "../../core/units.ts";
+import { findingLabel } from "../finding-label.ts";
 import { paint, type Io } from "../io.ts";
 import { VERDICT_MARK } from "../render-text.ts";
 import { wrap } from "../wrap.ts";
@@ -83,7 +84,9 @@ function renderPart(p: PartChange, io: Pick<Io, "color">): string[] {
 }
 
 function renderRule(r: RuleChange): string[] {
-  const out = [`        ${r.rule}: ${r.before?.verdict ?? "not checked"} → ${r.after?.verdict ?? "not checked"}`];
+  const out = [
+    `        ${findingLabel(r)}: ${r.before?.verdict ?? "not checked"} → ${r.after?.verdict ?? "not checked"}`,
+  ];
   if (r.before) out.push(wrap(`before: ${r.before.reason}`, WIDTH, "                  ", "          "));
   if (r.after) out.push(wrap(`after:  ${r.after.reason}`, WIDTH, "                  ", "          "));
   return out;
