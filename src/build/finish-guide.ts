@@ -5,7 +5,7 @@ import { createHash } from "node:crypto";
 import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
 import { join, relative, sep } from "node:path";
 import { reportPathOf, standaloneReport } from "../view/design-report.ts";
-import { absoluteUrls, relativizeHtml } from "../view/relative-urls.ts";
+import { relativizePage } from "../view/relative-urls.ts";
 import { writeClassicScripts } from "./classic-scripts.ts";
 
 /** Served for any missing path at any depth, so its links stay site-absolute. */
@@ -38,8 +38,8 @@ export async function finishGuide(
   const left: string[] = [];
   for (const file of pages) {
     const page = sitePath(file);
-    const html = relativizeHtml(readFileSync(file, "utf8"), page, base, isFolder);
-    left.push(...absoluteUrls(html).map((u) => `${page}: ${u}`));
+    const { html, left: absolute } = relativizePage(readFileSync(file, "utf8"), page, base, isFolder);
+    left.push(...absolute.map((u) => `${page}: ${u}`));
     writeFileSync(file, html);
   }
   if (left.length > 0)

@@ -4,12 +4,8 @@
 // becomes "../catalogue/index.html" as seen from the page's own folder. A
 // folder link gets its index.html, because a browser shows a folder opened
 // from disk as a file listing. Only the attribute values change: the rest of
-// the page is kept byte for byte (parse5 gives each attribute's position).
-import { parse } from "parse5";
-import type { DefaultTreeAdapterTypes } from "parse5";
-
-type Node = DefaultTreeAdapterTypes.Node;
-type Element = DefaultTreeAdapterTypes.Element;
+// the page is kept byte for byte.
+import { Parser } from "htmlparser2";
 
 /** Attributes that hold a URL the browser loads or follows; data-root names the site's root for scripts. */
 const URL_ATTRIBUTES = new Set(["href", "src", "action", "poster", "data-root"]);
@@ -46,45 +42,54 @@ export function relativeUrl(value: string, page: string, base: string, isFolder:
   return relativePath(page, path) + tail;
 }
 
-function* elements(node: Node): Generator<Element> {
-  if ("tagName" in node) yield node;
-  if ("childNodes" in node) for (const child of node.childNodes) yield* elements(child);
-  if (node.nodeName === "template" && "content" in node) yield* elements(node.content);
-}
-
 const escapeAttr = (v: string) => v.replace(/&/g, "&amp;").replace(/"/g, "&quot;");
+
+export type Relativized = {
+  html: string;
+  /** URL attributes still site-absolute (attribute="value"). */ left: string[];
+};
+
+/**
+ * The page with every site-absolute URL under the base made relative to it.
+ * htmlparser2 tokenizes (script and style contents stay text) and reports each
+ * attribute with its span (startIndex … endIndex); attributes arrive in
+ * document order, so the pieces are joined once (a page has thousands of
+ * links, and a build has thousands of pages: this runs in tens of ms a page).
+ */
+export function relativizePage(html: string, page: string, base: string, isFolder: IsFolder): Relativized {
+  const pieces: string[] = [];
+  const left: string[] = [];
+  let at = 0;
+  const parser = new Parser(
+    {
+      onattribute(name, raw) {
+        if (!URL_ATTRIBUTES.has(name)) return;
+        const value = raw.trim();
+        let relative = relativeUrl(value, page, base, isFolder);
+        if (relative === undefined) {
+          if (value.startsWith("/") && !value.startsWith("//")) left.push(`${name}="${value}"`);
+          return;
+        }
+        // The root a script resolves against is a folder, written with its slash.
+        if (name === "data-root") relative = relative.replace(/index\.html$/, "") || "./";
+        pieces.push(html.slice(at, parser.startIndex), `${name}="${escapeAttr(relative)}"`);
+        at = parser.endIndex;
+      },
+    },
+    { decodeEntities: true, lowerCaseAttributeNames: true },
+  );
+  parser.end(html);
+  pieces.push(html.slice(at));
+  return { html: pieces.join(""), left };
+}
 
 /** The page with every site-absolute URL made relative to it. */
 export function relativizeHtml(html: string, page: string, base: string, isFolder: IsFolder): string {
-  const doc = parse(html, { sourceCodeLocationInfo: true });
-  const edits: { start: number; end: number; text: string }[] = [];
-  for (const el of elements(doc)) {
-    const where = el.sourceCodeLocation?.attrs;
-    if (!where) continue;
-    for (const attr of el.attrs) {
-      if (!URL_ATTRIBUTES.has(attr.name)) continue;
-      let relative = relativeUrl(attr.value.trim(), page, base, isFolder);
-      const loc = where[attr.name];
-      if (relative === undefined || !loc) continue;
-      // The root a script resolves against is a folder, written with its slash.
-      if (attr.name === "data-root") relative = relative.replace(/index\.html$/, "") || "./";
-      edits.push({ start: loc.startOffset, end: loc.endOffset, text: `${attr.name}="${escapeAttr(relative)}"` });
-    }
-  }
-  edits.sort((a, b) => b.start - a.start);
-  let out = html;
-  for (const e of edits) out = out.slice(0, e.start) + e.text + out.slice(e.end);
-  return out;
+  return relativizePage(html, page, base, isFolder).html;
 }
 
-/** Site-absolute URLs left in a page (for the build to refuse): each attribute=value. */
+/** Site-absolute URLs in a page (for the build to refuse): each attribute="value". */
 export function absoluteUrls(html: string): string[] {
-  const found: string[] = [];
-  for (const el of elements(parse(html))) {
-    for (const attr of el.attrs) {
-      const v = attr.value.trim();
-      if (URL_ATTRIBUTES.has(attr.name) && v.startsWith("/") && !v.startsWith("//")) found.push(`${attr.name}="${v}"`);
-    }
-  }
-  return found;
+  // Under a base no URL can start with, every site-absolute URL is left as it is.
+  return relativizePage(html, "index.html", "/\u0000/", () => false).left;
 }
