@@ -1,7 +1,7 @@
 // `railsieve check DESIGN.json…`: evaluate, print, and exit 0 / 1 / 2.
 import { designHolds, type DesignResult } from "../core/engine/result.ts";
 import { InputError, type Problem } from "../core/problems.ts";
-import { evaluateDesign, TOPOLOGY_IDS } from "../engine.ts";
+import { evaluateDesign, TOPOLOGY_IDS, withSimulation } from "../engine.ts";
 import { flag, UsageError, type ParsedArgs } from "./args.ts";
 import type { Io } from "./io.ts";
 import { loadForCheck } from "./load.ts";
@@ -14,7 +14,8 @@ import { renderDesignText } from "./render-text.ts";
 
 const FORMATS = ["text", "json", "csv", "markdown", "junit"] as const;
 
-export function evaluateFiles(args: ParsedArgs, data: string): DesignResult[] {
+/** Evaluates the design files; with `simulate`, each result also carries its simulation report. */
+export function evaluateFiles(args: ParsedArgs, data: string, simulate = false): DesignResult[] {
   if (args.positional.length === 0) throw new UsageError("check needs at least one design file");
   const topologyFlag = flag(args, "topology");
   if (topologyFlag !== undefined && !TOPOLOGY_IDS.includes(topologyFlag)) {
@@ -28,7 +29,7 @@ export function evaluateFiles(args: ParsedArgs, data: string): DesignResult[] {
   for (const file of loaded.designs) {
     if (!file.design) continue;
     const evaluation = evaluateDesign(file.design, loaded.catalogue, topology);
-    if (evaluation.ok) results.push(evaluation.result);
+    if (evaluation.ok) results.push(simulate ? withSimulation(evaluation.result, loaded.catalogue) : evaluation.result);
     else problems.push(...evaluation.problems.map((p) => ({ file: file.file, path: p.path, message: p.message })));
   }
   if (problems.length > 0) throw new InputError(problems);
@@ -40,7 +41,7 @@ export function runCheck(args: ParsedArgs, data: string, io: Io): number {
   if (!(FORMATS as readonly string[]).includes(format))
     throw new UsageError(`unknown format '${format}' (expected text, json, csv, markdown or junit)`);
   const links = guideLinks(flag(args, "guide-url"));
-  const results = evaluateFiles(args, data);
+  const results = evaluateFiles(args, data, true);
   if (format === "json") io.out(renderJson(results));
   else if (format === "csv") io.out(renderCsv(results));
   else if (format === "markdown") io.out(renderCheckMarkdown(results, links));

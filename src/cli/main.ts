@@ -8,6 +8,7 @@ import { runExplain } from "./explain.ts";
 import { safeIo, type Io } from "./io.ts";
 import { runServe } from "./serve.ts";
 import { dataDir, renderProblems } from "./load.ts";
+import { runSimulate } from "./simulate.ts";
 import { runValidate } from "./validate.ts";
 
 export async function main(argv: readonly string[], rawIo: Io): Promise<number> {
@@ -31,13 +32,17 @@ export async function main(argv: readonly string[], rawIo: Io): Promise<number> 
         return runDiff(args, data, io);
       case "explain":
         return runExplain(args, data, io);
+      case "simulate":
+        return runSimulate(args, data, io);
       case "serve":
         return await runServe(args, io);
       case undefined:
         io.err(USAGE);
         return 2;
       default:
-        throw new UsageError(`unknown command '${args.command}' (expected validate, check, diff, explain or serve)`);
+        throw new UsageError(
+          `unknown command '${args.command}' (expected validate, check, diff, explain, simulate or serve)`,
+        );
     }
   } catch (e) {
     if (e instanceof UsageError) {

@@ -3,6 +3,7 @@ import type { PartResult } from "../core/engine/evaluate-part.ts";
 import type { DesignResult } from "../core/engine/result.ts";
 import type { Finding } from "../core/engine/types.ts";
 import { designHolds } from "../core/engine/result.ts";
+import { outcomeReport, simulationJson } from "./render-simulation.ts";
 
 /** What the JSON and CSV reports say of a finding: its data and sentence, not its steps (that is `explain`). */
 export function reportedFinding(f: Finding) {
@@ -49,6 +50,7 @@ export function designJson(result: DesignResult): Record<string, unknown> {
     })),
     budget: budgetJson(result),
     conversion: result.conversion,
+    ...(result.simulation ? { simulation: simulationJson(outcomeReport(result.simulation)) } : {}),
     ...(result.comparison ? { comparison: comparisonJson(result) } : {}),
     notes: result.notes,
   };

@@ -4,6 +4,7 @@ import type { DesignResult, RoleResult } from "../core/engine/result.ts";
 import type { Verdict } from "../core/engine/types.ts";
 import { formatSI } from "../core/units.ts";
 import { paint, type Io } from "./io.ts";
+import { outcomeReport, simulationLine } from "./render-simulation.ts";
 import { shortfalls } from "./summary.ts";
 import { wrap } from "./wrap.ts";
 
@@ -65,6 +66,7 @@ function renderSingle(result: DesignResult, io: Pick<Io, "color">): string {
     );
   }
   out.push(...renderBudget(result));
+  if (result.simulation) out.push(wrap(simulationLine(outcomeReport(result.simulation)), WIDTH, "    ", "  "));
   for (const role of result.roles) out.push("", ...renderRole(role, io));
   const problems = shortfalls(result);
   out.push("");

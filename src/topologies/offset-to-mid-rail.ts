@@ -16,6 +16,7 @@ import type { OpAmpStage, Rails } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
 import { formatVolts } from "../core/units.ts";
 import { railRows, ratio, si } from "./display.ts";
+import { offsetToMidRailChain } from "./offset-to-mid-rail-sim.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
 
 function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
@@ -204,4 +205,5 @@ export const offsetToMidRail = defineTopology({
   ],
   roleTerms: ROLE_TERMS,
   evaluate,
+  simulation: offsetToMidRailChain,
 });

@@ -27,6 +27,7 @@ import type { Design } from "../core/schemas/design.ts";
 import type { Diode } from "../core/schemas/diode.ts";
 import { formatSI, formatVolts } from "../core/units.ts";
 import { railRows, ratio, si } from "./display.ts";
+import { rectifyAndSignChain } from "./rectify-and-sign-sim.ts";
 import { frontEnd } from "./front-end.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
 
@@ -428,4 +429,5 @@ export const rectifyAndSign = defineTopology({
     ];
   },
   evaluate,
+  simulation: rectifyAndSignChain,
 });

@@ -6,6 +6,7 @@ import type { LevelShiftNetwork } from "../math/level-shift.ts";
 import type { Design, Role } from "../schemas/design.ts";
 import { isFitResult, type PartResult } from "./evaluate-part.ts";
 import type { Rails, Stage } from "../rule-kit/types.ts";
+import type { SimulationOutcome } from "../sim/report.ts";
 import type { Budget, Conversion } from "./budget.ts";
 
 /** A derived value the pages, the try page and the CLI print as it is. */
@@ -74,6 +75,8 @@ export type DesignResult = {
   notes: string[];
   budget: Budget;
   conversion: Conversion;
+  /** The behavioural simulation's report (SPEC §13), when the caller ran it (CLI, site build, try page on demand). */
+  simulation?: SimulationOutcome;
   /** Present when the design asked for topology "all": both topologies side by side. */
   comparison?: Comparison;
 };

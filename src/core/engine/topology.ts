@@ -5,6 +5,7 @@ import type { Catalogue } from "../catalogue-index.ts";
 import type { Capability } from "../kinds.ts";
 import type { AnyRule, Rails, Stage } from "../rule-kit/types.ts";
 import type { Design } from "../schemas/design.ts";
+import type { ChainBuilder } from "../sim/run-design.ts";
 import type { BudgetTerm, Conversion, RoleTerm } from "./budget.ts";
 import type { Derived, DesignProblem, DisplayGroup, RoleResult } from "./result.ts";
 
@@ -89,6 +90,8 @@ export type TopologyDef = {
   /** Checks of a design that only this topology needs, by JSON path (run when the design names it). */
   checkDesign?(design: Design): DesignProblem[];
   evaluate(run: TopologyRun): TopologyEvaluation;
+  /** The chain the simulator runs for one of its results (SPEC §13), from the parts it uses; absent: not simulated. */
+  simulation?: ChainBuilder;
 };
 
 /** Identity, so a topology module's object literal is checked as one. */

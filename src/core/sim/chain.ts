@@ -89,3 +89,6 @@ export type Chain = {
   adc: ConverterModel;
   reading: ReadingModel;
 };
+
+/** What a topology hands the simulator: its chain, or why it cannot build one. */
+export type ChainBuild = { ok: true; chain: Chain; parts: Record<string, string> } | { ok: false; reason: string };

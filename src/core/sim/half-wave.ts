@@ -90,6 +90,11 @@ export class HalfWaveRunner {
     return forwardVoltage(this.s.diode, Math.max(current, this.iOn));
   }
 
+  /** Open loop, or settling from it (as long again as it was open): errors now come from the crossing. */
+  inDeadTime(): boolean {
+    return this.region === OFF || this.lastEnd < this.holdUntil;
+  }
+
   /** Starts in the region the input puts it in, settled. */
   init(x: number): void {
     this.region = x < 0 ? D1 : D2;
@@ -165,8 +170,11 @@ export class HalfWaveRunner {
   fineStep(x0: number, x1: number, h: number): number {
     if (!this.changed && this.region !== OFF && this.lastEnd >= this.holdUntil) return Infinity;
     const slope = Math.abs(x1 - x0) / h;
-    // Shortest dead time: the integrator ramp alone, t = √(2ΔV/(ωt·c·S)) (SPEC §11.3).
-    const shortest = Math.sqrt((2 * 2 * this.vfOn) / (this.wt * this.cn * Math.max(slope, 1e-30)));
+    // Shortest dead time: neither faster than the integrator ramp, t = √(2ΔV/(ωt·c·S)),
+    // nor than the slew rate allows, ΔV/SR (SPEC §11.3).
+    const swing = 2 * this.vfOn;
+    const ramp = Math.sqrt((2 * swing) / (this.wt * this.cn * Math.max(slope, 1e-30)));
+    const shortest = Math.max(ramp, swing / Math.min(this.s.amp.slew_v_per_s, 1e30));
     return shortest * FINE_SHARE;
   }
 

@@ -1,6 +1,6 @@
 // Runs a chain (chain.ts) in the time domain and reports what the firmware reads.
 //
-// Integration: a fixed grid of `steps_per_period` steps per signal period (1024
+// Integration: a fixed grid of `steps_per_period` steps per signal period (512
 // unless asked), each stage advanced by its exact solution for an input that is
 // a straight line over the step (pole.ts, half-wave.ts). Where a rectifier's
 // loop is open or opens/closes inside a step, that step is redone for the whole
@@ -35,6 +35,9 @@ export type StageStats = {
   dead_time_s: number | null;
 };
 
+/** A stage's state at an instant that matters for the error. */
+export type Condition = { stage: string; state: "clipped" | "slewing" | "dead-time" | "sign-wrong" };
+
 export type Trace = {
   frequency_hz: number;
   /** Column names: time, input, front, each stage's node(s), sign, code, reading, error. */
@@ -44,11 +47,13 @@ export type Trace = {
   max_error_v: number;
   /** Time of the largest |error|, s from the start of the measured period. */
   max_error_at_s: number;
+  /** What the chain was doing at the largest error: the mechanisms to blame. */
+  at_max_error: Condition[];
   rms_error_v: number;
   stages: StageStats[];
 };
 
-export const STEPS_PER_PERIOD = 1024;
+export const STEPS_PER_PERIOD = 512;
 /** Points kept for the waveform table (statistics use every point). */
 const KEEP_AT_MOST = 8192;
 /** A refined step is redone in this many parts, at most MAX_DEPTH times over (8⁶ ≈ 2.6·10⁵ parts). */
@@ -63,6 +68,8 @@ interface Runner {
   fineStep(prev: Float64Array, cur: Float64Array, h: number): number;
   stats(): StageStats;
   setCounting(on: boolean): void;
+  /** Adds what the stage is doing now, if anything notable, to `out`. */
+  conditions(out: Condition[]): void;
 }
 
 function poleStats(): PoleStats {
@@ -71,6 +78,7 @@ function poleStats(): PoleStats {
 
 class LinearRunner implements Runner {
   private y = 0;
+  private target = 0;
   /** [y, slewing, clipped] per refinement depth. */
   private readonly saved: number[][] = [];
   private readonly pole = poleStats();
@@ -127,8 +135,15 @@ class LinearRunner implements Runner {
     this.pole.clipped_s = v[2] ?? 0;
   }
   advance(_t0: number, h: number, prev: Float64Array, cur: Float64Array): void {
-    this.y = advancePole(this.y, this.u(prev), this.u(cur), h, this.wc, this.sr, this.lo, this.hi, this.pole);
+    this.target = this.u(cur);
+    this.y = advancePole(this.y, this.u(prev), this.target, h, this.wc, this.sr, this.lo, this.hi, this.pole);
     cur[this.out] = this.y;
+  }
+  conditions(out: Condition[]): void {
+    const pushing = this.target - this.y;
+    if ((this.y >= this.hi && pushing > 0) || (this.y <= this.lo && pushing < 0))
+      out.push({ stage: this.id, state: "clipped" });
+    else if (Math.abs(this.wc * pushing) >= this.sr * (1 - 1e-9)) out.push({ stage: this.id, state: "slewing" });
   }
   fineStep(): number {
     return Infinity;
@@ -147,8 +162,12 @@ class HalfWaveAdapter implements Runner {
   private readonly from: number;
   private readonly node: number;
   private readonly amp: number;
+  private readonly lo: number;
+  private readonly hi: number;
   constructor(id: string, stage: Extract<Stage, { kind: "half-wave" }>, from: number, node: number, amp: number) {
     this.r = new HalfWaveRunner(stage);
+    this.lo = stage.amp.out_low_v;
+    this.hi = stage.amp.out_high_v;
     this.id = id;
     this.from = from;
     this.node = node;
@@ -172,6 +191,10 @@ class HalfWaveAdapter implements Runner {
   }
   fineStep(prev: Float64Array, cur: Float64Array, h: number): number {
     return this.r.fineStep(prev[this.from] ?? 0, cur[this.from] ?? 0, h);
+  }
+  conditions(out: Condition[]): void {
+    if (this.r.inDeadTime()) out.push({ stage: this.id, state: "dead-time" });
+    if (this.r.amp >= this.hi || this.r.amp <= this.lo) out.push({ stage: this.id, state: "clipped" });
   }
   stats(): StageStats {
     return {
@@ -289,6 +312,16 @@ export function runChain(chain: Chain, options: RunOptions): Trace {
   const totalPoints = sampled ? Math.ceil(period / ts) : steps;
   const stride = Math.max(1, Math.ceil(totalPoints / KEEP_AT_MOST));
   let lastSign = 1;
+  let atMax: Condition[] = [];
+  /** Notes what the chain is doing when the error just reached a new largest value. */
+  const blame = (before: number, signThen: number) => {
+    if (meter.max === before) return;
+    atMax = [];
+    for (let i = 0; i < runners.length; i++) (runners[i] as Runner).conditions(atMax);
+    const x = wave(meter.maxAt + start);
+    if (sign && chain.reading.signed && x !== 0 && signThen !== (x > 0 ? 1 : -1))
+      atMax.push({ stage: "sign", state: "sign-wrong" });
+  };
 
   /** Keeps one row of the trace (every stride-th point) and returns its error. */
   const emit = (t: number, values: Float64Array, s: number): number => {
@@ -311,6 +344,7 @@ export function runChain(chain: Chain, options: RunOptions): Trace {
   /** Records the points of [t0, t0 + dt] the trace keeps: the converter's samples, or the step's end. */
   const record = (t0: number, dt: number, a: Float64Array, b: Float64Array) => {
     const t1 = t0 + dt;
+    const before = meter.max;
     if (!sampled) {
       const s1 = sign ? sign.at(t1) : 1;
       const va = a[adcIndex] ?? 0;
@@ -326,6 +360,8 @@ export function runChain(chain: Chain, options: RunOptions): Trace {
         meter.stretch(t0 - start, t0 - start + u * dt, va, vm, xa, xm, lastSign);
         meter.stretch(t0 - start + u * dt, t1 - start, vm, vb, xm, xb, s1);
       }
+      const changedAt = sign?.changedAt ?? -Infinity;
+      blame(before, s1 !== lastSign && meter.maxAt + start <= changedAt + dt * 1e-9 ? lastSign : s1);
       lastSign = s1;
       emit(t1, b, s1);
       return;
@@ -335,7 +371,10 @@ export function runChain(chain: Chain, options: RunOptions): Trace {
       for (let i = 0; i < n; i++) between[i] = (a[i] ?? 0) + ((b[i] ?? 0) - (a[i] ?? 0)) * frac;
       // The sampled input is the source itself at the instant, not its straight-line stand-in.
       between[0] = wave(nextSample);
-      meter.sample(nextSample - start, emit(nextSample, between, sign ? sign.at(nextSample) : 1));
+      const m = meter.max;
+      const s = sign ? sign.at(nextSample) : 1;
+      meter.sample(nextSample - start, emit(nextSample, between, s));
+      blame(m, s);
       nextSample += ts;
     }
   };
@@ -400,6 +439,7 @@ export function runChain(chain: Chain, options: RunOptions): Trace {
     values,
     max_error_v: meter.max,
     max_error_at_s: meter.maxAt,
+    at_max_error: atMax,
     rms_error_v: meter.rms,
     stages: runners.map((r) => r.stats()),
   };

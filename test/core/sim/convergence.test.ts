@@ -2,7 +2,7 @@
 // (issue 19 item 1), on chains where every mechanism acts: offsets, the
 // single pole, slewing, the rectifier's dead time, a late comparator, sampling.
 import { describe, expect, it } from "vitest";
-import { runChain, simulateChain } from "../../../src/core/sim/simulate.ts";
+import { runChain, simulateChain, STEPS_PER_PERIOD } from "../../../src/core/sim/simulate.ts";
 import { BIPOLAR_AMP, rectifyChain } from "./chains.ts";
 
 // A −3.6 V pumped rail, so stage 1 reaches −(W + Vf) ≈ −3.15 V.
@@ -17,10 +17,13 @@ describe("grid convergence", () => {
     { what: "slewing at 20 kHz", f: 20e3, extra: {} },
   ])("$what", ({ f, extra }) => {
     const chain = rectifyChain({ peak: 10, k: 0.245, amp, ...extra });
-    const a = runChain(chain, { frequency_hz: f, steps_per_period: 1024 });
-    const b = runChain(chain, { frequency_hz: f, steps_per_period: 2048 });
+    // From the default grid (STEPS_PER_PERIOD = 512) to half and a quarter of its step.
+    const a = runChain(chain, { frequency_hz: f });
+    const b = runChain(chain, { frequency_hz: f, steps_per_period: 2 * STEPS_PER_PERIOD });
+    const c = runChain(chain, { frequency_hz: f, steps_per_period: 4 * STEPS_PER_PERIOD });
     expect(a.max_error_v).toBeGreaterThan(0);
     expect(Math.abs(b.max_error_v / a.max_error_v - 1)).toBeLessThan(0.01);
+    expect(Math.abs(c.max_error_v / b.max_error_v - 1)).toBeLessThan(0.01);
   });
 });
 
