@@ -14,6 +14,8 @@ export const benchResults = z.strictObject({
     }),
   ),
   validate_rows_per_s: positive,
+  /** The slowest demo design/topology simulated at both frequencies, ms (issue 19; optional so older results still read). */
+  simulation_ms: positive.optional(),
   build: z.strictObject({ demo_s: positive, large_s: positive, large_pages: z.number().int().positive() }),
   try_page: z.strictObject({ demo_p95_ms: positive, large_p95_ms: positive }),
   weight: z.strictObject({

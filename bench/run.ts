@@ -11,6 +11,8 @@ import { measureEngine, type EngineRow } from "./engine.ts";
 import { largeDataSet, timeBuild, writeDataFolder } from "./site-build.ts";
 import { measureTryPage } from "./try-page.ts";
 import { benchResults, type BenchResults } from "./results.ts";
+import { measureSimulation } from "./simulate.ts";
+import { median } from "./stats.ts";
 import { measureValidation } from "./validate.ts";
 import { tryPageWeight } from "./weight.ts";
 
@@ -45,6 +47,13 @@ for (const row of engine) {
     `engine ${String(row.parts).padStart(7)} parts: ${row.ms_per_design.toFixed(3)} ms/design, bare loop ${row.baseline_ms_per_design.toFixed(3)} ms → ${row.ratio.toFixed(2)}×; with ranked lists read ${row.ranked_ms_per_design.toFixed(3)} ms`,
   );
 }
+
+// 1b. The behavioural simulation, one design and topology at both frequencies.
+const simulation = measureSimulation(demo.catalogue, demoDesigns, quick ? 3 : 9);
+const slowestSim = simulation.reduce((a, b) => (b.ms > a.ms ? b : a), { design: "-", topology: "-", ms: 0 });
+log(
+  `simulation: ${simulation.length} design/topology pairs, slowest ${slowestSim.ms.toFixed(2)} ms (${slowestSim.design}, ${slowestSim.topology}), median ${median(simulation.map((r) => r.ms)).toFixed(2)} ms`,
+);
 
 // 2. CSV parse and validation.
 const validation = measureValidation(demo.catalogue, VALIDATE_PARTS, quick ? 1 : 3);
@@ -97,6 +106,7 @@ try {
       ratio: round(ratio),
     })),
     validate_rows_per_s: Math.round(validation.rows_per_s),
+    simulation_ms: round(slowestSim.ms),
     build: { demo_s: round(demoBuild.seconds), large_s: round(largeBuild.seconds), large_pages: largeBuild.pages },
     try_page: { demo_p95_ms: round(tryDemo.p95_ms), large_p95_ms: round(tryLarge.p95_ms) },
     weight,
@@ -124,6 +134,11 @@ const targets: [string, boolean | undefined, string][] = [
     "validation ≥ 100k rows/s",
     results.validate_rows_per_s >= 100_000,
     `${results.validate_rows_per_s.toLocaleString("en")} rows/s`,
+  ],
+  [
+    "one simulation (design, topology, both frequencies) ≤ 10 ms",
+    (results.simulation_ms ?? Infinity) <= 10,
+    `${results.simulation_ms} ms`,
   ],
   ["2,000 parts + 10 designs build ≤ 60 s", results.build.large_s <= 60, `${results.build.large_s} s`],
   ["try page p95 ≤ 16 ms, demo", results.try_page.demo_p95_ms <= 16, `${results.try_page.demo_p95_ms} ms`],

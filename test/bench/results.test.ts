@@ -15,6 +15,10 @@ describe("benchResults", () => {
     expect(benchResults.parse(valid)).toEqual(valid);
   });
 
+  it("takes the simulation figure of issue 19 when present", () => {
+    expect(benchResults.parse({ ...valid, simulation_ms: 4.2 })).toEqual({ ...valid, simulation_ms: 4.2 });
+  });
+
   it.each([
     ["an extra top-level field", { ...valid, memory_mb: 3 }],
     ["an extra engine field", { ...valid, engine: [{ ...valid.engine[0], ranked_ms_per_design: 25 }] }],
