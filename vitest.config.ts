@@ -8,7 +8,16 @@ export default defineConfig({
     reporters: ["default", new BrowserCountReporter()],
     projects: [
       // The browser tests' own helpers (test/e2e/harness/) are plain unit tests.
-      { extends: true, test: { name: "unit", include: ["test/**/*.test.ts"], exclude: ["test/e2e/*.test.ts"] } },
+      {
+        extends: true,
+        test: {
+          name: "unit",
+          include: ["test/**/*.test.ts"],
+          exclude: ["test/e2e/*.test.ts"],
+          // Lays each bad-input case (its own files over test/fixtures/base) out as a whole folder.
+          globalSetup: ["test/helpers/fixtures.ts"],
+        },
+      },
       {
         // Real Chromium against the built site (issue 7). The global setup builds
         // the sites once per run, and only when a browser test is selected.

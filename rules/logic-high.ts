@@ -4,12 +4,11 @@ import {
   spareOrShort,
   voltageVerdict,
   volts,
-  type Part,
   type RoleContext,
 } from "../src/core/rule-kit/index.ts";
 import { forwardVoltage } from "../src/core/math/diode.ts";
 import { formatSI, formatVolts } from "../src/core/units.ts";
-import { INPUT_CLAMP_V, NPN_OFF_BELOW_V, outputHigh, outputLow } from "./levels.ts";
+import { INPUT_CLAMP_V, NPN_OFF_BELOW_V, outputHigh, outputLow, type Driver } from "./levels.ts";
 
 export const logicHigh = defineRule({
   id: "logic-high",
@@ -77,7 +76,7 @@ export const logicHigh = defineRule({
 });
 
 /** The level the logic input sees when the signal is positive, by level shift; `needed` is the bound that binds. */
-function highLevel({ stage, design, rails }: RoleContext, part: Part) {
+function highLevel({ stage, design, rails }: RoleContext, part: Driver) {
   const { vih_v: vih, vdd_v: vdd, level_shift: shift, pull_down_ohm: pull } = design.logic;
   const none = { high: 0, vf: 0, current: 0 };
   if (shift === "npn-inverter") {

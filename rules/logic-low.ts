@@ -4,11 +4,10 @@ import {
   spareOrShort,
   voltageVerdict,
   volts,
-  type Part,
   type RoleContext,
 } from "../src/core/rule-kit/index.ts";
 import { formatSI, formatVolts } from "../src/core/units.ts";
-import { INPUT_CLAMP_V, NPN_VBE_ON_V, NPN_VCE_SAT_V, outputHigh, outputLow } from "./levels.ts";
+import { INPUT_CLAMP_V, NPN_VBE_ON_V, NPN_VCE_SAT_V, outputHigh, outputLow, type Driver } from "./levels.ts";
 
 export const logicLow = defineRule({
   id: "logic-low",
@@ -63,7 +62,7 @@ export const logicLow = defineRule({
 });
 
 /** The level the logic input sees when the signal is negative, by level shift; `needed` is the bound that binds. */
-function lowLevel({ stage, design, rails }: RoleContext, part: Part) {
+function lowLevel({ stage, design, rails }: RoleContext, part: Driver) {
   const { vil_v: vil, level_shift: shift, pull_down_ohm: pull } = design.logic;
   if (shift === "diode-clamp") {
     const ir = stage.stage === "sign" && stage.clamp ? stage.clamp.ir_na * 1e-9 : 0;

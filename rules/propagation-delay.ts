@@ -1,6 +1,6 @@
-import { defineRule, record, shareVerdict, spareOrShort, type Part, type Rails } from "../src/core/rule-kit/index.ts";
+import { defineRule, record, shareVerdict, spareOrShort, type Rails } from "../src/core/rule-kit/index.ts";
 import { formatQuantity, formatSI } from "../src/core/units.ts";
-import { outputHigh, outputLow } from "./levels.ts";
+import { outputHigh, outputLow, type Driver } from "./levels.ts";
 
 export const propagationDelay = defineRule({
   id: "propagation-delay",
@@ -48,9 +48,8 @@ export const propagationDelay = defineRule({
 });
 
 /** A comparator's rated delay, or the time an op amp takes to slew from one output level to the other. */
-function switchingDelay(part: Part, rails: Rails): { delay: number; swing: number; slew: number } {
+function switchingDelay(part: Driver, rails: Rails): { delay: number; swing: number; slew: number } {
   if (part.kind === "comparator") return { delay: part.tpd_ns * 1e-9, swing: 0, slew: 0 };
-  if (part.kind !== "op-amp") throw new Error("propagation-delay applies to comparators and op amps");
   const swing = (outputHigh(part, rails) ?? rails.positive_v) - outputLow(part, rails);
   const slew = part.slew_v_per_us * 1e6;
   return { delay: swing / slew, swing, slew };

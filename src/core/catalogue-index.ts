@@ -1,7 +1,15 @@
 // The engine's view of a catalogue: every part, by id, by kind and by what it
 // can do. Kept apart from the CSV loader so the browser can index parts
 // checked at build time without shipping the parser and row schemas.
-import { CAPABILITIES, KINDS, kindsThatCan, type Capability, type PartKind } from "./kinds.ts";
+import {
+  CAPABILITIES,
+  isRailedKind,
+  KINDS,
+  kindsThatCan,
+  type Capability,
+  type PartKind,
+  type RailedKind,
+} from "./kinds.ts";
 import type { Part, PartOf } from "./kind-rows.ts";
 
 export type { Capability, Part, PartKind, PartOf };
@@ -46,4 +54,9 @@ export function indexCatalogue(parts: readonly Part[]): Catalogue {
     comparators: byKind.comparator,
     diodes: byKind.diode,
   };
+}
+
+/** A part that runs from the rails (its kind says so in the registry): it has headroom columns. */
+export function isRailedPart(part: Part): part is PartOf<RailedKind> {
+  return isRailedKind(part.kind);
 }

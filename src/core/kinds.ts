@@ -21,6 +21,8 @@ export type KindWords = {
   one: string;
   many: string;
   heading: string;
+  /** Other words a search may use for the kind ("opamp"). */
+  also?: readonly string[];
 };
 
 export type KindSpec = {
@@ -29,32 +31,47 @@ export type KindSpec = {
   file: string;
   words: KindWords;
   can: Partial<Record<Capability, Fitness>>;
+  /**
+   * Runs from the supply rails, with input and output ranges rated inward from
+   * them (headroom columns): such a part has a rail diagram.
+   */
+  railed: boolean;
 };
 
 export const KINDS = [
   {
     kind: "op-amp",
     file: "op-amps.csv",
-    words: { a: "an op amp", one: "op amp", many: "op amps", heading: "Op amps" },
+    words: { a: "an op amp", one: "op amp", many: "op amps", heading: "Op amps", also: ["opamp", "opamps"] },
     can: { amplify: "native", compare: "stand-in" },
+    railed: true,
   },
   {
     kind: "comparator",
     file: "comparators.csv",
     words: { a: "a comparator", one: "comparator", many: "comparators", heading: "Comparators" },
     can: { compare: "native" },
+    railed: true,
   },
   {
     kind: "diode",
     file: "diodes.csv",
     words: { a: "a diode", one: "diode", many: "diodes", heading: "Diodes" },
     can: { rectify: "native", clamp: "native" },
+    railed: false,
   },
 ] as const satisfies readonly KindSpec[];
 
 export type PartKind = (typeof KINDS)[number]["kind"];
 
 export const KIND_IDS: readonly PartKind[] = KINDS.map((k) => k.kind);
+
+/** Kinds that run from the rails (op amps, comparators): the ones a rail diagram can draw. */
+export type RailedKind = Extract<(typeof KINDS)[number], { railed: true }>["kind"];
+
+export function isRailedKind(kind: PartKind): kind is RailedKind {
+  return kindSpec(kind).railed;
+}
 
 const BY_KIND = new Map<string, KindSpec>(KINDS.map((k) => [k.kind, k]));
 
@@ -82,3 +99,8 @@ export function kindsThatCan(capability: Capability): PartKind[] {
 export function canDo(kind: PartKind, capability: Capability): boolean {
   return kindSpec(kind).can[capability] !== undefined;
 }
+
+/** Every kind's words by kind, for pages that look them up. */
+export const KIND_WORDS: Readonly<Record<PartKind, KindWords>> = Object.fromEntries(
+  KINDS.map((k) => [k.kind, k.words]),
+) as Record<PartKind, KindWords>;

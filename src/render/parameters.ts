@@ -120,8 +120,5 @@ export function plainNumber(value: number): string {
   return PLAIN.format(value).replace("-", MINUS);
 }
 
-export const KIND_WORDS: Readonly<Record<PartKind, { one: string; many: string; heading: string }>> = {
-  "op-amp": { one: "op amp", many: "op amps", heading: "Op amps" },
-  comparator: { one: "comparator", many: "comparators", heading: "Comparators" },
-  diode: { one: "diode", many: "diodes", heading: "Diodes" },
-};
+/** The kind registry's words (src/core/kinds.ts), re-exported for the pages. */
+export { KIND_WORDS } from "../core/kinds.ts";

@@ -7,6 +7,7 @@
 // part page holds one entry per role per design (30-odd for an op amp), so a
 // rejection is written as what decides it rather than every passing sentence.
 import type { Part } from "../core/catalogue.ts";
+import { isRailedKind } from "../core/kinds.ts";
 import { placeAnchor, resultAnchor, type SiteLinks } from "../site/links.ts";
 import type { PartPlace } from "../site/part-uses.ts";
 import { roleName } from "../site/roles.ts";
@@ -35,7 +36,7 @@ function renderPlace(place: PartPlace, { part, design, links }: DesignPlacesInpu
   const onPage = links.designUrl(design.id, resultAnchor(role.role, part.id));
   const fit = rank !== undefined;
   const { findings } = result;
-  const amplifier = part.kind !== "diode" && role.stage.stage !== "diode";
+  const amplifier = isRailedKind(part.kind) && role.stage.stage !== "diode";
   const drawn = amplifier && (fit || findings.some((f) => f.verdict !== "pass" && DRAWN_RULES.includes(f.rule)));
   const diagram = drawn
     ? `<div class="diagram">${renderRailDiagram({ part, stage: role.stage, rails: place.rails, findings, id: `rd-${anchor}`, legend: false })}</div>`

@@ -5,6 +5,7 @@
 // attributes: the page's Content-Security-Policy forbids them; colours come
 // from classes in site.css, with presentation attributes as a fallback.
 import type { Part } from "../core/catalogue.ts";
+import { isRailedPart } from "../core/catalogue-index.ts";
 import type { Finding, Range, Rails, Stage, Verdict } from "../core/engine/types.ts";
 import { formatVolts } from "../core/units.ts";
 import { escapeHtml } from "./escape.ts";
@@ -82,8 +83,8 @@ function round(n: number): number {
 
 /** Geometry of the diagram, kept apart from the markup so it can be checked by number. */
 export function layoutRailDiagram({ part, stage, rails, findings = [] }: RailDiagramInput): DiagramLayout {
-  if (part.kind === "diode" || stage.stage === "diode")
-    throw new Error("rail diagrams are drawn for op amps and comparators only");
+  if (!isRailedPart(part) || stage.stage === "diode")
+    throw new Error("rail diagrams are drawn for parts that run from the rails only");
 
   const inputReach: Range = {
     low: rails.negative_v + part.icm_neg_headroom_v,

@@ -1,6 +1,7 @@
 // Fuzzy search over catalogue classes (id, name, tags, notes, kind and status words). Pure, so the
 // catalogue page's browser script and the unit tests build the same index.
 import Fuse, { type IFuseOptions } from "fuse.js";
+import { KINDS, type KindWords } from "../core/kinds.ts";
 
 /** What the search sees of one class; built from a Part at build time. */
 export type SearchDoc = {
@@ -18,16 +19,11 @@ type Indexed = { doc: SearchDoc; id: string; name: string; tags: string; notes: 
  * Kind and status words filter exactly rather than fuzzily: "comparator" should
  * list the comparators, not every class whose notes look a bit like it.
  */
-const KIND_WORDS: Readonly<Record<string, string>> = {
-  "op amp": "op-amp",
-  "op amps": "op-amp",
-  opamp: "op-amp",
-  opamps: "op-amp",
-  comparator: "comparator",
-  comparators: "comparator",
-  diode: "diode",
-  diodes: "diode",
-};
+const KIND_WORDS: Readonly<Record<string, string>> = Object.fromEntries(
+  KINDS.flatMap((k) =>
+    [k.words.one, k.words.many, ...((k.words as KindWords).also ?? [])].map((w) => [w.toLowerCase(), k.kind]),
+  ),
+);
 const STATUS_WORDS: readonly string[] = ["stocked", "approved", "listed"];
 
 type Filters = { kind?: string; status?: string; rest: string };

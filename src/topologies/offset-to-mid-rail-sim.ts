@@ -1,4 +1,4 @@
-// The chain of `offset-to-mid-rail` for the simulator (SPEC §13): the Millman
+// The level-shift topology's chain for the simulator (SPEC §13): the Millman
 // network with the source's resistance in series with R1 (and the reference
 // buffer's offset on the reference, when the design has one), the follower,
 // the converter, and the reading by the design's conversion constant.

@@ -9,8 +9,10 @@ import { displayPath, loadCatalogue } from "../../src/node/load-data.ts";
 import { textProblems } from "../helpers/catalogue.ts";
 import { comparator, csvLine, csvText, diode, DIODE_CELLS, opAmp, OP_AMP_CELLS } from "../helpers/parts.ts";
 
-const FIXTURES = join(import.meta.dirname, "../fixtures/catalogue");
-const VALID_FOLDERS = ["valid", "bom-crlf-trailing-blank", "kind-left-out"];
+// Each case's own files over test/fixtures/base/, laid out by test/helpers/fixtures.ts.
+const FIXTURES = join(import.meta.dirname, "../../.fixtures/catalogue");
+const BASE = join(import.meta.dirname, "../../.fixtures/base");
+const VALID_FOLDERS = ["bom-crlf-trailing-blank", "kind-left-out"];
 
 /** Problems of one fixture folder, with the folder prefix cut so the snapshot reads "file:line: …". */
 function folderProblems(folder: string): string[] {
@@ -29,7 +31,14 @@ describe("fixture folders (one defect each, test/fixtures/catalogue/)", () => {
     const { catalogue, problems, empty } = loadCatalogue(join(FIXTURES, "kind-left-out"));
     expect(problems).toEqual([]);
     expect(empty).toEqual(["diode"]);
-    expect([catalogue.opAmps.length, catalogue.comparators.length, catalogue.diodes.length]).toEqual([2, 2, 0]);
+    expect([catalogue.opAmps.length, catalogue.comparators.length, catalogue.diodes.length]).toEqual([4, 3, 0]);
+  });
+
+  it("the base every case starts from loads clean: four op amps, three comparators, four diodes", () => {
+    const { catalogue, problems, empty } = loadCatalogue(BASE);
+    expect(problems).toEqual([]);
+    expect(empty).toEqual([]);
+    expect([catalogue.opAmps.length, catalogue.comparators.length, catalogue.diodes.length]).toEqual([4, 3, 4]);
   });
 
   it("a folder with no catalogue file at all is a problem (more likely a wrong --data than a catalogue)", () => {
@@ -66,7 +75,7 @@ describe("fixture folders (one defect each, test/fixtures/catalogue/)", () => {
           "diodes.csv:1: column 'notes': column appears twice (expected each column once)",
         ],
         "duplicate-id-across-files": [
-          "diodes.csv:3: column 'id': duplicate id (got 'oa-cmos-rrio', expected an id not already used in op-amps.csv)",
+          "diodes.csv:3: column 'id': duplicate id (got 'oa-cmos-rrio-16v', expected an id not already used in op-amps.csv)",
         ],
         "duplicate-id-in-file": [
           "comparators.csv:3: column 'id': duplicate id (got 'cmp-od-gp', expected an id not already used in comparators.csv)",

@@ -134,7 +134,7 @@ describe("layoutRailDiagram", () => {
   });
 
   it("refuses a diode", () => {
-    expect(() => layoutRailDiagram({ part: diode(), stage: buffer, rails })).toThrow(/op amps and comparators only/);
+    expect(() => layoutRailDiagram({ part: diode(), stage: buffer, rails })).toThrow(/parts that run from the rails only/);
   });
 });
 

@@ -12,8 +12,12 @@ export async function runCli(argv: string[]): Promise<CliRun> {
   return { code, out, err };
 }
 
-/** The corpus folder, relative to the repository root (vitest's cwd), as messages print it. */
-export const BAD = "test/fixtures/bad";
+/**
+ * The corpus laid out as whole data folders (test/helpers/fixtures.ts: each case's
+ * own files over test/fixtures/base/), relative to the repository root (vitest's
+ * cwd), as messages print it.
+ */
+export const BAD = ".fixtures/bad";
 
 export function corpusFolders(): string[] {
   return readdirSync(BAD, { withFileTypes: true })

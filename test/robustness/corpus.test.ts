@@ -146,244 +146,244 @@ describe("messages, pinned", () => {
   it("bom-names-no-part", async () => {
     expect(await seen("bom-names-no-part")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/bom-names-no-part/designs/audio-1v5-20k.json: bom.buffer: names no part in the catalogue (got 'oa-jfet-precision', expected the id of an op amp such as 'oa-bip-gs-dual')
+      .fixtures/bad/bom-names-no-part/designs/audio-1v5-20k.json: bom.buffer: names no part in the catalogue (got 'oa-jfet-precision', expected the id of an op amp such as 'oa-bip-gs-dual')
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/bom-names-no-part/designs/audio-1v5-20k.json: bom.buffer: names no part in the catalogue (got 'oa-jfet-precision', expected the id of an op amp such as 'oa-bip-gs-dual')
+      .fixtures/bad/bom-names-no-part/designs/audio-1v5-20k.json: bom.buffer: names no part in the catalogue (got 'oa-jfet-precision', expected the id of an op amp such as 'oa-bip-gs-dual')
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("bom-names-wrong-kind", async () => {
     expect(await seen("bom-names-wrong-kind")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/bom-names-wrong-kind/designs/audio-1v5-20k.json: bom.rectifier-diode: names a part of the wrong kind (got 'oa-jfet-prec', an op amp, expected a diode)
+      .fixtures/bad/bom-names-wrong-kind/designs/audio-1v5-20k.json: bom.rectifier-diode: names a part of the wrong kind (got 'oa-jfet-prec', an op amp, expected a diode)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/bom-names-wrong-kind/designs/audio-1v5-20k.json: bom.rectifier-diode: names a part of the wrong kind (got 'oa-jfet-prec', an op amp, expected a diode)
+      .fixtures/bad/bom-names-wrong-kind/designs/audio-1v5-20k.json: bom.rectifier-diode: names a part of the wrong kind (got 'oa-jfet-prec', an op amp, expected a diode)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("bom-unknown-role", async () => {
     expect(await seen("bom-unknown-role")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/bom-unknown-role/designs/audio-1v5-20k.json: bom.buffr: unknown role (got 'buffr', expected 'buffer')
+      .fixtures/bad/bom-unknown-role/designs/audio-1v5-20k.json: bom.buffr: unknown role (got 'buffr', expected 'buffer')
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/bom-unknown-role/designs/audio-1v5-20k.json: bom.buffr: unknown role (got 'buffr', expected 'buffer')
+      .fixtures/bad/bom-unknown-role/designs/audio-1v5-20k.json: bom.buffr: unknown role (got 'buffr', expected 'buffer')
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("csv-control-characters", async () => {
     expect(await seen("csv-control-characters")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/csv-control-characters/diodes.csv:4: column 'id': not a valid id (got 'd-schottky\\n30v\\u001b[2J', expected lower-case letters, digits and '-', starting with a letter or digit, at most 80 characters)
+      .fixtures/bad/csv-control-characters/diodes.csv:4: column 'id': not a valid id (got 'd-schottky\\n30v\\u001b[2J', expected lower-case letters, digits and '-', starting with a letter or digit, at most 80 characters)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/csv-control-characters/diodes.csv:4: column 'id': not a valid id (got 'd-schottky\\n30v\\u001b[2J', expected lower-case letters, digits and '-', starting with a letter or digit, at most 80 characters)
+      .fixtures/bad/csv-control-characters/diodes.csv:4: column 'id': not a valid id (got 'd-schottky\\n30v\\u001b[2J', expected lower-case letters, digits and '-', starting with a letter or digit, at most 80 characters)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("csv-line-100kb", async () => {
     expect(await seen("csv-line-100kb")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/csv-line-100kb/op-amps.csv:3: line is 102592 characters long (expected at most 20000; is this really a catalogue file?)
+      .fixtures/bad/csv-line-100kb/op-amps.csv:3: line is 102592 characters long (expected at most 20000; is this really a catalogue file?)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/csv-line-100kb/op-amps.csv:3: line is 102592 characters long (expected at most 20000; is this really a catalogue file?)
+      .fixtures/bad/csv-line-100kb/op-amps.csv:3: line is 102592 characters long (expected at most 20000; is this really a catalogue file?)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("csv-lone-cr-line-ends", async () => {
     expect(await seen("csv-lone-cr-line-ends")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/csv-lone-cr-line-ends/comparators.csv:4: column 'supply_max_v': not a number (got '16 V', expected a number such as 0.5, 500m or 2.2k, greater than 0)
+      .fixtures/bad/csv-lone-cr-line-ends/comparators.csv:4: column 'supply_max_v': not a number (got '16 V', expected a number such as 0.5, 500m or 2.2k, greater than 0)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/csv-lone-cr-line-ends/comparators.csv:4: column 'supply_max_v': not a number (got '16 V', expected a number such as 0.5, 500m or 2.2k, greater than 0)
+      .fixtures/bad/csv-lone-cr-line-ends/comparators.csv:4: column 'supply_max_v': not a number (got '16 V', expected a number such as 0.5, 500m or 2.2k, greater than 0)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("csv-negative-load-resistance", async () => {
     expect(await seen("csv-negative-load-resistance")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/csv-negative-load-resistance/op-amps.csv:2: column 'out_load_ohm': must not be negative (got '-10k', expected a number such as 0.5, 500m or 2.2k, greater than 0)
+      .fixtures/bad/csv-negative-load-resistance/op-amps.csv:2: column 'out_load_ohm': must not be negative (got '-10k', expected a number such as 0.5, 500m or 2.2k, greater than 0)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/csv-negative-load-resistance/op-amps.csv:2: column 'out_load_ohm': must not be negative (got '-10k', expected a number such as 0.5, 500m or 2.2k, greater than 0)
+      .fixtures/bad/csv-negative-load-resistance/op-amps.csv:2: column 'out_load_ohm': must not be negative (got '-10k', expected a number such as 0.5, 500m or 2.2k, greater than 0)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("csv-non-utf8-bytes", async () => {
     expect(await seen("csv-non-utf8-bytes")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/csv-non-utf8-bytes/comparators.csv:4: bytes that are not UTF-8 (got byte 0xb1 at byte 730, expected UTF-8 text; re-save the file as UTF-8)
+      .fixtures/bad/csv-non-utf8-bytes/comparators.csv:4: bytes that are not UTF-8 (got byte 0xb1 at byte 730, expected UTF-8 text; re-save the file as UTF-8)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/csv-non-utf8-bytes/comparators.csv:4: bytes that are not UTF-8 (got byte 0xb1 at byte 730, expected UTF-8 text; re-save the file as UTF-8)
+      .fixtures/bad/csv-non-utf8-bytes/comparators.csv:4: bytes that are not UTF-8 (got byte 0xb1 at byte 730, expected UTF-8 text; re-save the file as UTF-8)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("csv-tab-separated", async () => {
     expect(await seen("csv-tab-separated")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/csv-tab-separated/diodes.csv:1: header looks tab-separated (got 'id\\tname\\tstatus\\tcost_band\\ttags\\tnotes\\tt…', expected comma-separated columns; export the sheet as CSV with commas)
+      .fixtures/bad/csv-tab-separated/diodes.csv:1: header looks tab-separated (got 'id\\tname\\tstatus\\tcost_band\\ttags\\tnotes\\tt…', expected comma-separated columns; export the sheet as CSV with commas)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/csv-tab-separated/diodes.csv:1: header looks tab-separated (got 'id\\tname\\tstatus\\tcost_band\\ttags\\tnotes\\tt…', expected comma-separated columns; export the sheet as CSV with commas)
+      .fixtures/bad/csv-tab-separated/diodes.csv:1: header looks tab-separated (got 'id\\tname\\tstatus\\tcost_band\\ttags\\tnotes\\tt…', expected comma-separated columns; export the sheet as CSV with commas)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("csv-utf16-no-bom", async () => {
     expect(await seen("csv-utf16-no-bom")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/csv-utf16-no-bom/diodes.csv:1: file is saved as UTF-16 (expected UTF-8; save or export it as 'CSV UTF-8')
+      .fixtures/bad/csv-utf16-no-bom/diodes.csv:1: file is saved as UTF-16 (expected UTF-8; save or export it as 'CSV UTF-8')
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/csv-utf16-no-bom/diodes.csv:1: file is saved as UTF-16 (expected UTF-8; save or export it as 'CSV UTF-8')
+      .fixtures/bad/csv-utf16-no-bom/diodes.csv:1: file is saved as UTF-16 (expected UTF-8; save or export it as 'CSV UTF-8')
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("csv-utf16-with-bom", async () => {
     expect(await seen("csv-utf16-with-bom")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/csv-utf16-with-bom/diodes.csv:1: file is saved as UTF-16 (expected UTF-8; save or export it as 'CSV UTF-8')
+      .fixtures/bad/csv-utf16-with-bom/diodes.csv:1: file is saved as UTF-16 (expected UTF-8; save or export it as 'CSV UTF-8')
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/csv-utf16-with-bom/diodes.csv:1: file is saved as UTF-16 (expected UTF-8; save or export it as 'CSV UTF-8')
+      .fixtures/bad/csv-utf16-with-bom/diodes.csv:1: file is saved as UTF-16 (expected UTF-8; save or export it as 'CSV UTF-8')
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("csv-zero-gbw", async () => {
     expect(await seen("csv-zero-gbw")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/csv-zero-gbw/op-amps.csv:5: column 'gbw_mhz': out of range (got '0', expected a number such as 0.5, 500m or 2.2k, greater than 0)
+      .fixtures/bad/csv-zero-gbw/op-amps.csv:5: column 'gbw_mhz': out of range (got '0', expected a number such as 0.5, 500m or 2.2k, greater than 0)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/csv-zero-gbw/op-amps.csv:5: column 'gbw_mhz': out of range (got '0', expected a number such as 0.5, 500m or 2.2k, greater than 0)
+      .fixtures/bad/csv-zero-gbw/op-amps.csv:5: column 'gbw_mhz': out of range (got '0', expected a number such as 0.5, 500m or 2.2k, greater than 0)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-json-trailing-comma", async () => {
     expect(await seen("design-json-trailing-comma")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-json-trailing-comma/designs/bridge-10v-5v-adc.json:20: not valid JSON: Expected double-quoted property name (expected a design object as in SPEC §5)
+      .fixtures/bad/design-json-trailing-comma/designs/bridge-10v-5v-adc.json:20: not valid JSON: Expected double-quoted property name (expected a design object as in SPEC §5)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-json-trailing-comma/designs/bridge-10v-5v-adc.json:20: not valid JSON: Expected double-quoted property name (expected a design object as in SPEC §5)
+      .fixtures/bad/design-json-trailing-comma/designs/bridge-10v-5v-adc.json:20: not valid JSON: Expected double-quoted property name (expected a design object as in SPEC §5)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-line-100kb", async () => {
     expect(await seen("design-line-100kb")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-line-100kb/designs/bridge-10v-5v-adc.json: title: not a valid title (got '±10 V bridge ±10 V bridge ±10 V bridg…', expected text of 1 to 200 characters)
+      .fixtures/bad/design-line-100kb/designs/bridge-10v-5v-adc.json: title: not a valid title (got '±10 V bridge ±10 V bridge ±10 V bridg…', expected text of 1 to 200 characters)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-line-100kb/designs/bridge-10v-5v-adc.json: title: not a valid title (got '±10 V bridge ±10 V bridge ±10 V bridg…', expected text of 1 to 200 characters)
+      .fixtures/bad/design-line-100kb/designs/bridge-10v-5v-adc.json: title: not a valid title (got '±10 V bridge ±10 V bridge ±10 V bridg…', expected text of 1 to 200 characters)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-negative-frequency", async () => {
     expect(await seen("design-negative-frequency")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-negative-frequency/designs/bridge-10v-5v-adc.json: supply.negative.frequency_hz: out of range (got -980, expected a number (or a string such as "100k"), greater than 0)
+      .fixtures/bad/design-negative-frequency/designs/bridge-10v-5v-adc.json: supply.negative.frequency_hz: out of range (got -980, expected a number (or a string such as "100k"), greater than 0)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-negative-frequency/designs/bridge-10v-5v-adc.json: supply.negative.frequency_hz: out of range (got -980, expected a number (or a string such as "100k"), greater than 0)
+      .fixtures/bad/design-negative-frequency/designs/bridge-10v-5v-adc.json: supply.negative.frequency_hz: out of range (got -980, expected a number (or a string such as "100k"), greater than 0)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-negative-resistance", async () => {
     expect(await seen("design-negative-resistance")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-negative-resistance/designs/bridge-10v-5v-adc.json: signal.source_ohm: out of range (got -1000, expected a number (or a string such as "100k"), at least 0)
-      test/fixtures/bad/design-negative-resistance/designs/bridge-10v-5v-adc.json: front_end.rectifier_load_ohm: out of range (got '-10k', expected a number (or a string such as "100k"), greater than 0)
+      .fixtures/bad/design-negative-resistance/designs/bridge-10v-5v-adc.json: signal.source_ohm: out of range (got -1000, expected a number (or a string such as "100k"), at least 0)
+      .fixtures/bad/design-negative-resistance/designs/bridge-10v-5v-adc.json: front_end.rectifier_load_ohm: out of range (got '-10k', expected a number (or a string such as "100k"), greater than 0)
       railsieve: 2 problems found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-negative-resistance/designs/bridge-10v-5v-adc.json: signal.source_ohm: out of range (got -1000, expected a number (or a string such as "100k"), at least 0)
-      test/fixtures/bad/design-negative-resistance/designs/bridge-10v-5v-adc.json: front_end.rectifier_load_ohm: out of range (got '-10k', expected a number (or a string such as "100k"), greater than 0)
+      .fixtures/bad/design-negative-resistance/designs/bridge-10v-5v-adc.json: signal.source_ohm: out of range (got -1000, expected a number (or a string such as "100k"), at least 0)
+      .fixtures/bad/design-negative-resistance/designs/bridge-10v-5v-adc.json: front_end.rectifier_load_ohm: out of range (got '-10k', expected a number (or a string such as "100k"), greater than 0)
       railsieve: 2 problems found; nothing was checked"
     `);
   });
   it("design-nested-too-deep", async () => {
     expect(await seen("design-nested-too-deep")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-nested-too-deep/designs/bridge-10v-5v-adc.json: policy: wrong type (got […], expected an object { … })
+      .fixtures/bad/design-nested-too-deep/designs/bridge-10v-5v-adc.json: policy: wrong type (got […], expected an object { … })
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-nested-too-deep/designs/bridge-10v-5v-adc.json: policy: wrong type (got […], expected an object { … })
+      .fixtures/bad/design-nested-too-deep/designs/bridge-10v-5v-adc.json: policy: wrong type (got […], expected an object { … })
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-non-utf8-bytes", async () => {
     expect(await seen("design-non-utf8-bytes")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-non-utf8-bytes/designs/bridge-10v-5v-adc.json:3: bytes that are not UTF-8 (got byte 0xb1 at byte 43, expected UTF-8 text; re-save the file as UTF-8)
+      .fixtures/bad/design-non-utf8-bytes/designs/bridge-10v-5v-adc.json:3: bytes that are not UTF-8 (got byte 0xb1 at byte 43, expected UTF-8 text; re-save the file as UTF-8)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-non-utf8-bytes/designs/bridge-10v-5v-adc.json:3: bytes that are not UTF-8 (got byte 0xb1 at byte 43, expected UTF-8 text; re-save the file as UTF-8)
+      .fixtures/bad/design-non-utf8-bytes/designs/bridge-10v-5v-adc.json:3: bytes that are not UTF-8 (got byte 0xb1 at byte 43, expected UTF-8 text; re-save the file as UTF-8)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-not-an-object", async () => {
     expect(await seen("design-not-an-object")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-not-an-object/designs/bridge-10v-5v-adc.json: wrong type (got ["bridge-10v-5v-adc"], expected an object { … })
+      .fixtures/bad/design-not-an-object/designs/bridge-10v-5v-adc.json: wrong type (got ["bridge-10v-5v-adc"], expected an object { … })
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-not-an-object/designs/bridge-10v-5v-adc.json: wrong type (got ["bridge-10v-5v-adc"], expected an object { … })
+      .fixtures/bad/design-not-an-object/designs/bridge-10v-5v-adc.json: wrong type (got ["bridge-10v-5v-adc"], expected an object { … })
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-number-overflow", async () => {
     expect(await seen("design-number-overflow")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-number-overflow/designs/bridge-10v-5v-adc.json: signal.peak_v: out of range (got Infinity, expected a number (or a string such as "100k"), greater than 0 and at most 100000)
+      .fixtures/bad/design-number-overflow/designs/bridge-10v-5v-adc.json: signal.peak_v: out of range (got Infinity, expected a number (or a string such as "100k"), greater than 0 and at most 100000)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-number-overflow/designs/bridge-10v-5v-adc.json: signal.peak_v: out of range (got Infinity, expected a number (or a string such as "100k"), greater than 0 and at most 100000)
+      .fixtures/bad/design-number-overflow/designs/bridge-10v-5v-adc.json: signal.peak_v: out of range (got Infinity, expected a number (or a string such as "100k"), greater than 0 and at most 100000)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-unknown-level-shift", async () => {
     expect(await seen("design-unknown-level-shift")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-unknown-level-shift/designs/bridge-10v-5v-adc.json: logic.level_shift: unknown value (got 'optocoupler', expected 'diode-clamp' or 'npn-inverter' or 'pull-up')
+      .fixtures/bad/design-unknown-level-shift/designs/bridge-10v-5v-adc.json: logic.level_shift: unknown value (got 'optocoupler', expected 'diode-clamp' or 'npn-inverter' or 'pull-up')
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-unknown-level-shift/designs/bridge-10v-5v-adc.json: logic.level_shift: unknown value (got 'optocoupler', expected 'diode-clamp' or 'npn-inverter' or 'pull-up')
+      .fixtures/bad/design-unknown-level-shift/designs/bridge-10v-5v-adc.json: logic.level_shift: unknown value (got 'optocoupler', expected 'diode-clamp' or 'npn-inverter' or 'pull-up')
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-unknown-topology", async () => {
     expect(await seen("design-unknown-topology")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-unknown-topology/designs/bridge-10v-5v-adc.json: topology: unknown value (got 'full-wave-bridge', expected 'rectify-and-sign' or 'offset-to-mid-rail' or 'all')
+      .fixtures/bad/design-unknown-topology/designs/bridge-10v-5v-adc.json: topology: unknown value (got 'full-wave-bridge', expected 'rectify-and-sign' or 'offset-to-mid-rail' or 'all')
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-unknown-topology/designs/bridge-10v-5v-adc.json: topology: unknown value (got 'full-wave-bridge', expected 'rectify-and-sign' or 'offset-to-mid-rail' or 'all')
+      .fixtures/bad/design-unknown-topology/designs/bridge-10v-5v-adc.json: topology: unknown value (got 'full-wave-bridge', expected 'rectify-and-sign' or 'offset-to-mid-rail' or 'all')
       railsieve: 1 problem found; nothing was checked"
     `);
   });
@@ -402,119 +402,119 @@ describe("messages, pinned", () => {
   it("design-window-wider-than-rails", async () => {
     expect(await seen("design-window-wider-than-rails")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-window-wider-than-rails/designs/bridge-10v-5v-adc.json: front_end.window_v: window can never fit inside the positive rail (got 5 V, expected less than supply.positive_v 5 V)
+      .fixtures/bad/design-window-wider-than-rails/designs/bridge-10v-5v-adc.json: front_end.window_v: window can never fit inside the positive rail (got 5 V, expected less than supply.positive_v 5 V)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-window-wider-than-rails/designs/bridge-10v-5v-adc.json: front_end.window_v: window can never fit inside the positive rail (got 5 V, expected less than supply.positive_v 5 V)
+      .fixtures/bad/design-window-wider-than-rails/designs/bridge-10v-5v-adc.json: front_end.window_v: window can never fit inside the positive rail (got 5 V, expected less than supply.positive_v 5 V)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-wrong-types", async () => {
     expect(await seen("design-wrong-types")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: supply.positive_v: not a number (got '5 V', expected a number (or a string such as "100k"), greater than 0 and at most 100)
-      test/fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: signal.peak_v: not a number (got true, expected a number (or a string such as "100k"), greater than 0 and at most 100000)
-      test/fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: logic.level_shift: unknown value (got 3, expected 'diode-clamp' or 'npn-inverter' or 'pull-up')
-      test/fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: temperature: wrong type (got [0,50], expected an object { … })
+      .fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: supply.positive_v: not a number (got '5 V', expected a number (or a string such as "100k"), greater than 0 and at most 100)
+      .fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: signal.peak_v: not a number (got true, expected a number (or a string such as "100k"), greater than 0 and at most 100000)
+      .fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: logic.level_shift: unknown value (got 3, expected 'diode-clamp' or 'npn-inverter' or 'pull-up')
+      .fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: temperature: wrong type (got [0,50], expected an object { … })
       railsieve: 4 problems found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: supply.positive_v: not a number (got '5 V', expected a number (or a string such as "100k"), greater than 0 and at most 100)
-      test/fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: signal.peak_v: not a number (got true, expected a number (or a string such as "100k"), greater than 0 and at most 100000)
-      test/fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: logic.level_shift: unknown value (got 3, expected 'diode-clamp' or 'npn-inverter' or 'pull-up')
-      test/fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: temperature: wrong type (got [0,50], expected an object { … })
+      .fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: supply.positive_v: not a number (got '5 V', expected a number (or a string such as "100k"), greater than 0 and at most 100)
+      .fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: signal.peak_v: not a number (got true, expected a number (or a string such as "100k"), greater than 0 and at most 100000)
+      .fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: logic.level_shift: unknown value (got 3, expected 'diode-clamp' or 'npn-inverter' or 'pull-up')
+      .fixtures/bad/design-wrong-types/designs/bridge-10v-5v-adc.json: temperature: wrong type (got [0,50], expected an object { … })
       railsieve: 4 problems found; nothing was checked"
     `);
   });
   it("design-zero-bits", async () => {
     expect(await seen("design-zero-bits")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-zero-bits/designs/bridge-10v-5v-adc.json: adc.bits: out of range (got 0, expected a whole number, at least 1 and at most 32)
+      .fixtures/bad/design-zero-bits/designs/bridge-10v-5v-adc.json: adc.bits: out of range (got 0, expected a whole number, at least 1 and at most 32)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-zero-bits/designs/bridge-10v-5v-adc.json: adc.bits: out of range (got 0, expected a whole number, at least 1 and at most 32)
+      .fixtures/bad/design-zero-bits/designs/bridge-10v-5v-adc.json: adc.bits: out of range (got 0, expected a whole number, at least 1 and at most 32)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-zero-frequency", async () => {
     expect(await seen("design-zero-frequency")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-zero-frequency/designs/bridge-10v-5v-adc.json: signal.max_frequency_hz: out of range (got 0, expected a number (or a string such as "100k"), greater than 0)
+      .fixtures/bad/design-zero-frequency/designs/bridge-10v-5v-adc.json: signal.max_frequency_hz: out of range (got 0, expected a number (or a string such as "100k"), greater than 0)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-zero-frequency/designs/bridge-10v-5v-adc.json: signal.max_frequency_hz: out of range (got 0, expected a number (or a string such as "100k"), greater than 0)
+      .fixtures/bad/design-zero-frequency/designs/bridge-10v-5v-adc.json: signal.max_frequency_hz: out of range (got 0, expected a number (or a string such as "100k"), greater than 0)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-zero-peak", async () => {
     expect(await seen("design-zero-peak")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-zero-peak/designs/bridge-10v-5v-adc.json: signal.peak_v: out of range (got 0, expected a number (or a string such as "100k"), greater than 0 and at most 100000)
+      .fixtures/bad/design-zero-peak/designs/bridge-10v-5v-adc.json: signal.peak_v: out of range (got 0, expected a number (or a string such as "100k"), greater than 0 and at most 100000)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-zero-peak/designs/bridge-10v-5v-adc.json: signal.peak_v: out of range (got 0, expected a number (or a string such as "100k"), greater than 0 and at most 100000)
+      .fixtures/bad/design-zero-peak/designs/bridge-10v-5v-adc.json: signal.peak_v: out of range (got 0, expected a number (or a string such as "100k"), greater than 0 and at most 100000)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-zero-reference", async () => {
     expect(await seen("design-zero-reference")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-zero-reference/designs/bridge-10v-5v-adc.json: adc.reference_v: out of range (got 0, expected a number (or a string such as "100k"), greater than 0 and at most 100)
+      .fixtures/bad/design-zero-reference/designs/bridge-10v-5v-adc.json: adc.reference_v: out of range (got 0, expected a number (or a string such as "100k"), greater than 0 and at most 100)
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-zero-reference/designs/bridge-10v-5v-adc.json: adc.reference_v: out of range (got 0, expected a number (or a string such as "100k"), greater than 0 and at most 100)
+      .fixtures/bad/design-zero-reference/designs/bridge-10v-5v-adc.json: adc.reference_v: out of range (got 0, expected a number (or a string such as "100k"), greater than 0 and at most 100)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("design-zero-resistance", async () => {
     expect(await seen("design-zero-resistance")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/design-zero-resistance/designs/bridge-10v-5v-adc.json: front_end.divider_total_ohm: out of range (got 0, expected a number (or a string such as "100k"), greater than 0)
-      test/fixtures/bad/design-zero-resistance/designs/bridge-10v-5v-adc.json: logic.pull_down_ohm: out of range (got '0k', expected a number (or a string such as "100k"), greater than 0)
+      .fixtures/bad/design-zero-resistance/designs/bridge-10v-5v-adc.json: front_end.divider_total_ohm: out of range (got 0, expected a number (or a string such as "100k"), greater than 0)
+      .fixtures/bad/design-zero-resistance/designs/bridge-10v-5v-adc.json: logic.pull_down_ohm: out of range (got '0k', expected a number (or a string such as "100k"), greater than 0)
       railsieve: 2 problems found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/design-zero-resistance/designs/bridge-10v-5v-adc.json: front_end.divider_total_ohm: out of range (got 0, expected a number (or a string such as "100k"), greater than 0)
-      test/fixtures/bad/design-zero-resistance/designs/bridge-10v-5v-adc.json: logic.pull_down_ohm: out of range (got '0k', expected a number (or a string such as "100k"), greater than 0)
+      .fixtures/bad/design-zero-resistance/designs/bridge-10v-5v-adc.json: front_end.divider_total_ohm: out of range (got 0, expected a number (or a string such as "100k"), greater than 0)
+      .fixtures/bad/design-zero-resistance/designs/bridge-10v-5v-adc.json: logic.pull_down_ohm: out of range (got '0k', expected a number (or a string such as "100k"), greater than 0)
       railsieve: 2 problems found; nothing was checked"
     `);
   });
   it("duplicate-design-ids", async () => {
     expect(await seen("duplicate-design-ids")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/duplicate-design-ids/designs/audio-1v5-20k.json: id: duplicate design id (got 'audio-1v5-20k', expected an id not already used in test/fixtures/bad/duplicate-design-ids/designs/audio-1v5-20k-copy.json)
-      test/fixtures/bad/duplicate-design-ids/designs/audio-1v5-20k-copy.json: id: id does not match the file name (got 'audio-1v5-20k', expected 'audio-1v5-20k-copy')
+      .fixtures/bad/duplicate-design-ids/designs/audio-1v5-20k.json: id: duplicate design id (got 'audio-1v5-20k', expected an id not already used in .fixtures/bad/duplicate-design-ids/designs/audio-1v5-20k-copy.json)
+      .fixtures/bad/duplicate-design-ids/designs/audio-1v5-20k-copy.json: id: id does not match the file name (got 'audio-1v5-20k', expected 'audio-1v5-20k-copy')
       railsieve: 2 problems found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/duplicate-design-ids/designs/audio-1v5-20k.json: id: duplicate design id (got 'audio-1v5-20k', expected an id not already used in test/fixtures/bad/duplicate-design-ids/designs/audio-1v5-20k-copy.json)
+      .fixtures/bad/duplicate-design-ids/designs/audio-1v5-20k.json: id: duplicate design id (got 'audio-1v5-20k', expected an id not already used in .fixtures/bad/duplicate-design-ids/designs/audio-1v5-20k-copy.json)
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("pump-drive-below-two-diode-drops", async () => {
     expect(await seen("pump-drive-below-two-diode-drops")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/pump-drive-below-two-diode-drops/designs/bridge-10v-5v-adc.json: supply.negative.drive_v: pump drive cannot make a negative rail (got 1.20 V, expected more than two diode drops, 2 × 0.65 V = 1.30 V with diode d-si-switch); raise the drive or use a diode with a lower forward voltage
+      .fixtures/bad/pump-drive-below-two-diode-drops/designs/bridge-10v-5v-adc.json: supply.negative.drive_v: pump drive cannot make a negative rail (got 1.20 V, expected more than two diode drops, 2 × 0.65 V = 1.30 V with diode d-si-switch); raise the drive or use a diode with a lower forward voltage
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/pump-drive-below-two-diode-drops/designs/bridge-10v-5v-adc.json: supply.negative.drive_v: pump drive cannot make a negative rail (got 1.20 V, expected more than two diode drops, 2 × 0.65 V = 1.30 V with diode d-si-switch); raise the drive or use a diode with a lower forward voltage
+      .fixtures/bad/pump-drive-below-two-diode-drops/designs/bridge-10v-5v-adc.json: supply.negative.drive_v: pump drive cannot make a negative rail (got 1.20 V, expected more than two diode drops, 2 × 0.65 V = 1.30 V with diode d-si-switch); raise the drive or use a diode with a lower forward voltage
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("pump-load-past-collapse", async () => {
     expect(await seen("pump-load-past-collapse")).toMatchInlineSnapshot(`
       "validate: exit 2
-      test/fixtures/bad/pump-load-past-collapse/designs/bridge-10v-5v-adc.json: supply.negative.load_a: load is at or past the pump's collapse current (got 5.00 mA, expected less than (drive − 2·Vf)·f·C = 3.31 mA with diode d-si-switch); raise the frequency or the flying capacitor, or lower the load
+      .fixtures/bad/pump-load-past-collapse/designs/bridge-10v-5v-adc.json: supply.negative.load_a: load is at or past the pump's collapse current (got 5.00 mA, expected less than (drive − 2·Vf)·f·C = 3.31 mA with diode d-si-switch); raise the frequency or the flying capacitor, or lower the load
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      test/fixtures/bad/pump-load-past-collapse/designs/bridge-10v-5v-adc.json: supply.negative.load_a: load is at or past the pump's collapse current (got 5.00 mA, expected less than (drive − 2·Vf)·f·C = 3.31 mA with diode d-si-switch); raise the frequency or the flying capacitor, or lower the load
+      .fixtures/bad/pump-load-past-collapse/designs/bridge-10v-5v-adc.json: supply.negative.load_a: load is at or past the pump's collapse current (got 5.00 mA, expected less than (drive − 2·Vf)·f·C = 3.31 mA with diode d-si-switch); raise the frequency or the flying capacitor, or lower the load
       railsieve: 1 problem found; nothing was checked"
     `);
   });

@@ -4,8 +4,8 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { runCli, STACK_TRACE } from "./cli.ts";
 
-const DESIGN = "test/fixtures/bad/bom-names-no-part/designs/bridge-10v-5v-adc.json";
-const DATA = "test/fixtures/bad/bom-names-no-part";
+const DESIGN = ".fixtures/bad/bom-names-no-part/designs/bridge-10v-5v-adc.json";
+const DATA = ".fixtures/bad/bom-names-no-part";
 
 const MISTAKES: [string, string[], number][] = [
   ["no command", [], 2],

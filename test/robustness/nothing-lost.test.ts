@@ -110,7 +110,7 @@ describe("a failed build", () => {
     expect(snapshot(dist)).toEqual(before);
 
     // A defect only the engine sees (a BOM id naming no part) stops the build the same way.
-    const bom = build({ RAILSIEVE_DIST: dist, RAILSIEVE_DATA: resolve(ROOT, "test/fixtures/bad/bom-names-no-part") });
+    const bom = build({ RAILSIEVE_DIST: dist, RAILSIEVE_DATA: resolve(ROOT, ".fixtures/bad/bom-names-no-part") });
     expect(bom.code).toBe(2);
     expect(bom.err).toContain(
       "audio-1v5-20k.json: bom.buffer: names no part in the catalogue (got 'oa-jfet-precision'",

@@ -6,6 +6,7 @@
 import type { PartResult } from "../../core/engine/evaluate-part.ts";
 import type { DesignResult, RoleResult } from "../../core/engine/result.ts";
 import type { Finding } from "../../core/engine/types.ts";
+import { isRailedKind, kindWords } from "../../core/kinds.ts";
 import { escapeHtml } from "../../render/escape.ts";
 import { renderRailDiagram } from "../../render/rail-diagram.ts";
 import { renderVerdict } from "../../render/verdict.ts";
@@ -22,8 +23,6 @@ export const FIRST_ROWS = 8;
 
 /** Which long lists the visitor opened, by key "<role>:fits" / "<role>:rejected". */
 export type ViewState = { expanded: ReadonlySet<string> };
-
-const KIND_WORD = { "op-amp": "op amp", comparator: "comparator", diode: "diode" } as const;
 
 /** The derived values grouped and worded as on the design pages, one piece per value. */
 export function derivedPiece(result: DesignResult): Container {
@@ -125,7 +124,7 @@ function listTable(id: string, caption: string, head: (keyof typeof COLUMNS)[], 
 function diagram(role: RoleResult, result: DesignResult): string {
   if (role.stage.stage === "diode" || role.chosen === undefined) return "";
   const pick = role.resultOf(role.chosen);
-  if (!pick || pick.part.kind === "diode") return "";
+  if (!pick || !isRailedKind(pick.part.kind)) return "";
   const svg = renderRailDiagram({
     part: pick.part,
     stage: role.stage,
@@ -147,7 +146,7 @@ export function rolePiece(role: RoleResult, result: DesignResult, view: ViewStat
   const fits = allFits ? role.fits : role.fits.slice(0, FIRST_ROWS);
   const rejected = allRejected ? role.rejected : role.rejected.slice(0, FIRST_ROWS);
   const total = role.fits.length + role.rejected.length;
-  const kinds = role.kinds.map((k) => KIND_WORD[k]).join(" or ");
+  const kinds = role.kinds.map((k) => kindWords(k).one).join(" or ");
   const chosen =
     role.chosen === undefined
       ? "No part chosen: nothing fits."

@@ -2,6 +2,7 @@
 // and cleaned at build time, and the demo designs as their files hold them.
 // Written once by src/pages/data/catalogue.json.ts; read here in the browser.
 import type { Part } from "../../core/catalogue-index.ts";
+import { KIND_IDS } from "../../core/kinds.ts";
 
 export type DemoDesign = { id: string; title: string; input: unknown };
 
@@ -10,7 +11,7 @@ export type TryData = { parts: Part[]; designs: DemoDesign[] };
 /** Path of the asset below the site's base. */
 export const TRY_DATA_PATH = "data/catalogue.json";
 
-const KINDS = new Set(["op-amp", "comparator", "diode"]);
+const KINDS = new Set<string>(KIND_IDS);
 
 /** A shape check of the fetched asset, so a stale or cut file is reported instead of crashing the page. */
 export function readTryData(json: unknown): TryData | string {

@@ -71,6 +71,11 @@ export function crossingError(
 }
 
 /** The longest time the sign (or a stage) may be late for `crossingError` to stay inside `limitV`. */
-export function timeForError(frequencyHz: number, peakV: number, limitV: number, mode: "inverts" | "clips" = "inverts"): number {
+export function timeForError(
+  frequencyHz: number,
+  peakV: number,
+  limitV: number,
+  mode: "inverts" | "clips" = "inverts",
+): number {
   return limitV / crossingError(frequencyHz, peakV, 1, mode);
 }

@@ -63,7 +63,8 @@ export function comparatorDelay(p: ComparatorDelayInput): { delay: SignDelay; ov
     { name: "overdrive", seconds: od / s, formula: assumed ? "V_od (assumed) / S_in" : "V_od / S_in" },
   ];
   const vh = p.hysteresis_v ?? 0;
-  if (vh > 0) parts.push({ name: "hysteresis", seconds: vh / 2 / s, formula: "(Vh/2) / S_in", counted_in_dead_band: true });
+  if (vh > 0)
+    parts.push({ name: "hysteresis", seconds: vh / 2 / s, formula: "(Vh/2) / S_in", counted_in_dead_band: true });
   return { delay: sumDelay(parts), overdrive_assumed: assumed };
 }
 
@@ -95,9 +96,7 @@ export function opAmpComparatorDelay(p: OpAmpComparatorInput): SignDelay {
       name: "output-transition",
       seconds: t.seconds,
       formula:
-        t.regime === "gain-bandwidth"
-          ? "√(2·swing / (2π·GBW·S_in))"
-          : "SR/(2π·GBW·S_in) + (swing − SR·t₁/2) / SR",
+        t.regime === "gain-bandwidth" ? "√(2·swing / (2π·GBW·S_in))" : "SR/(2π·GBW·S_in) + (swing − SR·t₁/2) / SR",
     },
   ]);
 }

@@ -37,9 +37,7 @@ export function forwardVoltageRange(d: RatedDiode, current: number, range: Tempe
 
 /** The end, its temperature and the drop there, for a check that a larger (or smaller) drop hurts. */
 export function worstDrop(v: VfAtEnds, hurts: "larger" | "smaller"): { end: End; c: number; vf_v: number } {
-  return hurts === "larger"
-    ? { end: "cold", c: v.cold_c, vf_v: v.cold_v }
-    : { end: "hot", c: v.hot_c, vf_v: v.hot_v };
+  return hurts === "larger" ? { end: "cold", c: v.cold_c, vf_v: v.cold_v } : { end: "hot", c: v.hot_c, vf_v: v.hot_v };
 }
 
 /**
