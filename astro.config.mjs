@@ -1,5 +1,6 @@
 // @ts-check
 import { defineConfig } from "astro/config";
+import { offlineGuide } from "./src/build/offline-guide.ts";
 
 // RAILSIEVE_BASE serves the guide from a subfolder of a team server
 // (e.g. RAILSIEVE_BASE=/tools/railsieve/); RAILSIEVE_OUT lets the build script
@@ -13,4 +14,6 @@ export default defineConfig({
   // Small scripts would otherwise be inlined, and the site's CSP allows no inline script.
   vite: { build: { assetsInlineLimit: 0 } },
   telemetry: false,
+  // Relative links (the guide opens from a folder), classic scripts, one-file design reports.
+  integrations: [offlineGuide()],
 });

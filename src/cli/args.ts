@@ -9,9 +9,9 @@ export type ParsedArgs = {
 
 export class UsageError extends Error {}
 
-const VALUE_FLAGS = new Set(["data", "format", "role", "topology", "part"]);
+const VALUE_FLAGS = new Set(["data", "format", "role", "topology", "part", "guide-url", "port"]);
 const REPEATABLE_FLAGS = new Set(["part"]);
-const BOOLEAN_FLAGS = new Set(["help", "no-color"]);
+const BOOLEAN_FLAGS = new Set(["help", "no-color", "strict"]);
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {
   const positional: string[] = [];
@@ -59,17 +59,26 @@ export const USAGE = `railsieve — shortlist op amps, comparators and diodes fo
 
 Usage:
   railsieve validate [--data DIR]
-  railsieve check DESIGN.json… [--data DIR] [--format text|json|csv] [--topology NAME]
+  railsieve check DESIGN.json… [--data DIR] [--format text|json|csv|markdown|junit] [--topology NAME]
+  railsieve diff BEFORE [AFTER] [--data DIR] [--format text|json|markdown]
   railsieve explain PART-ID DESIGN.json [--role ROLE] [--data DIR]
   railsieve simulate DESIGN.json [--part ROLE=ID]… [--topology NAME] [--format text|json|csv] [--data DIR]
+  railsieve serve [DIR] [--port N]           (DIR: the built guide, default dist)
 
   --data DIR       catalogue folder (${FILES}); default ./data
-  --format F       output of check and simulate: text (default), json or csv
+  --format F       output of check: text (default), json, csv, markdown or junit;
+                   of diff: text, json or markdown; of simulate: text, json or csv
+  --guide-url URL  markdown links into the published guide at URL
+  --strict         junit and diff: a marginal budget or design counts as failing
   --topology NAME  evaluate as ${TOPOLOGY_CHOICES}
   --role ROLE      explain one role only
   --part ROLE=ID   simulate with this part in this role (as if the design's bom named it)
+  --port N         serve: the port on 127.0.0.1 (default 4800)
+  BEFORE, AFTER    diff: data folders, or git:REV for the --data folder at a git
+                   revision (AFTER defaults to the --data folder as it is now)
 
 Exit status: 0 when everything asked holds, 1 when a BOM part fails or a role has no fit
-(simulate: when a simulation could not run or went beyond the static worst case),
+(diff: when a design goes from holding to failing or a BOM part stops fitting;
+simulate: when a simulation could not run or went beyond the static worst case),
 2 on invalid input.
 `;

@@ -6,11 +6,14 @@ import { withSimulation } from "../simulation.ts";
 import { flag, UsageError, type ParsedArgs } from "./args.ts";
 import type { Io } from "./io.ts";
 import { loadForCheck } from "./load.ts";
+import { guideLinks } from "./guide-links.ts";
 import { renderCsv } from "./render-csv.ts";
+import { renderJunit } from "./render-junit.ts";
+import { renderCheckMarkdown } from "./render-markdown.ts";
 import { renderJson } from "./render-json.ts";
 import { renderDesignText } from "./render-text.ts";
 
-const FORMATS = ["text", "json", "csv"] as const;
+const FORMATS = ["text", "json", "csv", "markdown", "junit"] as const;
 
 /** Evaluates the design files; with `simulate`, each result also carries its simulation report. */
 export function evaluateFiles(args: ParsedArgs, data: string, simulate = false): DesignResult[] {
@@ -37,10 +40,13 @@ export function evaluateFiles(args: ParsedArgs, data: string, simulate = false):
 export function runCheck(args: ParsedArgs, data: string, io: Io): number {
   const format = flag(args, "format") ?? "text";
   if (!(FORMATS as readonly string[]).includes(format))
-    throw new UsageError(`unknown format '${format}' (expected text, json or csv)`);
+    throw new UsageError(`unknown format '${format}' (expected text, json, csv, markdown or junit)`);
+  const links = guideLinks(flag(args, "guide-url"));
   const results = evaluateFiles(args, data, true);
   if (format === "json") io.out(renderJson(results));
   else if (format === "csv") io.out(renderCsv(results));
+  else if (format === "markdown") io.out(renderCheckMarkdown(results, links));
+  else if (format === "junit") io.out(renderJunit(results, args.flags.has("strict")));
   else io.out(results.map((r) => renderDesignText(r, io)).join("\n"));
   return results.every((r) => designHolds(r)) ? 0 : 1;
 }

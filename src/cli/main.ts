@@ -3,8 +3,10 @@
 import { InputError } from "../core/problems.ts";
 import { flag, parseArgs, UsageError, USAGE } from "./args.ts";
 import { runCheck } from "./check.ts";
+import { runDiff } from "./diff.ts";
 import { runExplain } from "./explain.ts";
 import { safeIo, type Io } from "./io.ts";
+import { runServe } from "./serve.ts";
 import { dataDir, renderProblems } from "./load.ts";
 import { runSimulate } from "./simulate.ts";
 import { runValidate } from "./validate.ts";
@@ -26,15 +28,21 @@ export async function main(argv: readonly string[], rawIo: Io): Promise<number> 
         return runValidate(data, io);
       case "check":
         return runCheck(args, data, io);
+      case "diff":
+        return runDiff(args, data, io);
       case "explain":
         return runExplain(args, data, io);
       case "simulate":
         return runSimulate(args, data, io);
+      case "serve":
+        return await runServe(args, io);
       case undefined:
         io.err(USAGE);
         return 2;
       default:
-        throw new UsageError(`unknown command '${args.command}' (expected validate, check, explain or simulate)`);
+        throw new UsageError(
+          `unknown command '${args.command}' (expected validate, check, diff, explain, simulate or serve)`,
+        );
     }
   } catch (e) {
     if (e instanceof UsageError) {

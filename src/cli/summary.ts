@@ -3,7 +3,7 @@ import type { DesignResult, RoleResult } from "../core/engine/result.ts";
 
 // A rule every candidate fails is the design's problem, not the parts': name it
 // first (a ground-only rail fails every op amp's negative output swing).
-function noFit(role: RoleResult): string {
+export function noFit(role: RoleResult): string {
   const candidates = role.rejected;
   const best = candidates[0];
   if (!best) return `${role.role}: no part fits, and the catalogue has no candidate of this kind`;

@@ -42,7 +42,8 @@ export const placeAnchor = (designId: string, role: Role) => `in-${designId}--${
 // build's environment (vitest sets one) override import.meta.env.BASE_URL, so
 // page-links.ts, which the Layout of every page imports, sets the configured
 // base before any page renders.
-let siteBase: string = import.meta.env.BASE_URL;
+// Outside Vite (the CLI, plain Node) there is no import.meta.env at all.
+let siteBase: string = import.meta.env?.BASE_URL ?? "/";
 
 export function setSiteBase(base: string): void {
   siteBase = base;

@@ -114,7 +114,9 @@ describe("check, text and csv", () => {
   it("refuses an unknown format with exit 2", async () => {
     const { code, err } = await run("check", "data/designs/bus-48v.json", "--format", "xml");
     expect(code).toBe(2);
-    expect(err.split("\n")[0]).toMatchInlineSnapshot(`"railsieve: unknown format 'xml' (expected text, json or csv)"`);
+    expect(err.split("\n")[0]).toMatchInlineSnapshot(
+      `"railsieve: unknown format 'xml' (expected text, json, csv, markdown or junit)"`,
+    );
   });
 });
 

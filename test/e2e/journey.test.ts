@@ -47,7 +47,7 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
     await page.goto(t.url());
     expect(await h1()).toBe("railsieve");
     await mainNav().getByRole("link", { name: "Catalogue" }).click();
-    await page.waitForURL(t.url("catalogue/"));
+    await page.waitForURL(t.url("catalogue/index.html"));
     expect(await h1()).toBe("Catalogue");
   });
 
@@ -74,7 +74,7 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
   it("opens the best match's part page with its parameters in SI units and its fit in each design", async () => {
     const part = data.catalogue.byId.get(firstHit)!;
     await page.locator(`tr[data-id="${firstHit}"]`).getByRole("link", { name: part.name }).click();
-    await page.waitForURL(t.url(`parts/${firstHit}/`));
+    await page.waitForURL(t.url(`parts/${firstHit}/index.html`));
     expect(await h1()).toBe(part.name);
     const value = (column: string) => page.locator(`dl.values dt:has(code:text-is("${column}")) + dd`).textContent();
     // oa-cmos-rrio-3m in data/op-amps.csv: gbw_mhz 3, ib_max_na 0.01 (= 10 pA), slew 2 V/µs.
@@ -93,7 +93,7 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
       .find((r) => r.role === "buffer")!
       .rejected.find((p) => p.part.id === firstHit)!;
     await page.locator(`table.matrix a[href="#in-${DESIGN}--buffer"]`).click();
-    await page.waitForURL(t.url(`parts/${firstHit}/#in-${DESIGN}--buffer`));
+    await page.waitForURL(t.url(`parts/${firstHit}/index.html#in-${DESIGN}--buffer`));
     const entry = page.locator(`#in-${DESIGN}--buffer`);
     expect(await entry.isVisible()).toBe(true);
     const open = rejection.findings.filter((f) => f.verdict !== "pass");
@@ -135,7 +135,7 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
     await screenshot(entry, "part-page-entry");
 
     await entry.getByRole("link", { name: "on the design page" }).click();
-    await page.waitForURL(t.url(`designs/${DESIGN}/#buffer--${firstHit}`));
+    await page.waitForURL(t.url(`designs/${DESIGN}/index.html#buffer--${firstHit}`));
   });
 
   it("shows the design's buffer shortlist in full, then every rejection with its reasons and numbers", async () => {

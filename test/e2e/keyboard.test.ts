@@ -35,7 +35,7 @@ describe.skipIf(!browserReady)("searching the catalogue with the keyboard alone"
   it("opens the catalogue from the main navigation", async () => {
     const nav = await tabUntil(page, (f) => f.tag === "a" && f.text === "Catalogue");
     stops.push(nav.at);
-    await Promise.all([page.waitForURL(t.url("catalogue/")), page.keyboard.press("Enter")]);
+    await Promise.all([page.waitForURL(t.url("catalogue/index.html")), page.keyboard.press("Enter")]);
   });
 
   it(`types "${TYPO}" into the search box and tabs to the best match`, async () => {
@@ -48,8 +48,8 @@ describe.skipIf(!browserReady)("searching the catalogue with the keyboard alone"
     const best = buildSearchIndex(catalogue.parts).search(TYPO)[0]!.id;
     const result = await tabUntil(page, (f) => f.tag === "a" && f.inResults);
     stops.push(result.at);
-    expect(result.at.href).toMatch(new RegExp(`/parts/${best}/$`));
-    await Promise.all([page.waitForURL(t.url(`parts/${best}/`)), page.keyboard.press("Enter")]);
+    expect(result.at.href).toMatch(new RegExp(`/parts/${best}/index\\.html$`));
+    await Promise.all([page.waitForURL(t.url(`parts/${best}/index.html`)), page.keyboard.press("Enter")]);
     expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe(catalogue.byId.get(best)!.name);
     // The focus starts again from the top of the new page.
     expect((await focused(page)).tag).toBe("body");

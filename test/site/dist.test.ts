@@ -72,6 +72,15 @@ function ids(html: string): Set<string> {
   return new Set([...html.matchAll(/\sid="([^"]*)"/g)].map((m) => decode(m[1] ?? "")));
 }
 
+/**
+ * The site's own pages. A design's one-file report (designs/<id>/report.html)
+ * is a download with its own stricter policy and its style inside, checked by
+ * test/view/design-report.test.ts and the browser tests.
+ */
+function sitePages(): [string, string][] {
+  return [...site.html].filter(([address]) => !address.endsWith("/report.html"));
+}
+
 function page(address: string): string {
   const html = site.html.get(address);
   if (html === undefined)
@@ -155,7 +164,7 @@ describe("the built site", () => {
 
   it("has nothing its Content-Security-Policy would block: no inline script, style attribute, <style> or on… handler", () => {
     const found: string[] = [];
-    for (const [address, html] of site.html) {
+    for (const [address, html] of sitePages()) {
       for (const m of html.matchAll(/<script\b([^>]*)>([\s\S]*?)<\/script>/g)) {
         const attrs = m[1] ?? "";
         if (/type="application\/(ld\+)?json"/.test(attrs)) continue;
@@ -172,7 +181,7 @@ describe("the built site", () => {
 
   it("declares the policy, the language and one h1 on every page", () => {
     const wrong: string[] = [];
-    for (const [address, html] of site.html) {
+    for (const [address, html] of sitePages()) {
       const meta = /<meta http-equiv="Content-Security-Policy" content="([^"]*)"/.exec(html);
       if (!meta || decode(meta[1] ?? "") !== CSP) wrong.push(`${address}: policy ${meta?.[1] ?? "missing"}`);
       if (!html.includes('<html lang="en"')) wrong.push(`${address}: no lang="en"`);
@@ -255,7 +264,7 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
         expect(f.reason, `${r.part.id} ${f.rule}`).toMatch(
           /\d(\.\d+)? ?(V|mV|µV|nV|A|mA|µA|nA|pA|s|ms|µs|ns|Hz|kHz|MHz|V\/µs|mV\/µs|Ω|kΩ)\b|'[a-z_]+'/,
         );
-      expect(row).toContain(`href="${BASE}parts/${r.part.id}/#in-bridge-10v-5v-adc--buffer"`);
+      expect(row).toContain(`href="../../parts/${r.part.id}/index.html#in-bridge-10v-5v-adc--buffer"`);
     }
   });
 
@@ -279,7 +288,7 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
       const onRange = open.some((f) => f.rule === "input-common-mode" || f.rule === "output-swing");
       expect(html.match(/<svg class="rail-diagram"/g)?.length ?? 0, r.part.id).toBe(onRange ? 1 : 0);
       if (onRange) drawn++;
-      expect(html).toContain(`href="${BASE}designs/bridge-10v-5v-adc/#buffer--${r.part.id}"`);
+      expect(html).toContain(`href="../../designs/bridge-10v-5v-adc/index.html#buffer--${r.part.id}"`);
     }
     expect(drawn).toBeGreaterThan(0);
   });
@@ -357,7 +366,8 @@ describe("the other pages", () => {
       expect(html).toContain(`>${header}</th>`);
     }
     expect(html).toMatch(/<form class="filters" id="catalogue-filters"[^>]*hidden/);
-    expect(html).toMatch(/<script type="module" src="\/guide\/_astro\/[^"]+\.js"><\/script>/);
+    // A classic script (it also runs from a folder opened from disk), linked relative to the page.
+    expect(html).toMatch(/<script defer src="\.\.\/scripts\/catalogue\.js"><\/script>/);
   });
 
   it("shows a part's parameters in SI and its verdict in every design", () => {
@@ -415,9 +425,22 @@ describe("the other pages", () => {
     }
   });
 
+  it("offers each design's one-file report: linked from its page, loading nothing", () => {
+    for (const d of data.designs) {
+      const id = d.design?.id ?? "";
+      expect(page(`${BASE}designs/${id}/`)).toMatch(/<a href="report\.html" download="[a-z0-9-]+-review\.html">/);
+      const report = page(`${BASE}designs/${id}/report.html`);
+      expect(report).toMatch(
+        /<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'sha256-[A-Za-z0-9+/=]+'; /,
+      );
+      expect(report).not.toMatch(/<(script|link|img|iframe)\b/);
+      expect(report.match(/\shref="(?!#)[^"]*"/g) ?? []).toEqual([]);
+    }
+  });
+
   it("states each design's state and the catalogue counts on the home page", () => {
     const html = page(BASE);
-    for (const d of data.designs) expect(html).toContain(`href="${BASE}designs/${d.design?.id}/"`);
+    for (const d of data.designs) expect(html).toContain(`href="designs/${d.design?.id}/index.html"`);
     expect(html).toMatch(/<td class="num">\d+<\/td>/);
     expect(html).toMatch(/Built on <time datetime="\d{4}-\d\d-\d\dT[^"]+">\d{4}-\d\d-\d\d<\/time>/);
   });

@@ -8,7 +8,7 @@ import type { DesignResult, Evaluation } from "../../core/engine/result.ts";
 import { formatProblem, type Problem } from "../../core/problems.ts";
 import type { Design } from "../../core/schemas/design.ts";
 import { needsCaution } from "../../site/design-view.ts";
-import { joinBase } from "../../site/links.ts";
+import { joinBase, setSiteBase } from "../../site/links.ts";
 import { shortlistCsv, shortlistCsvName } from "./csv-export.ts";
 import { DEFAULT_DRAFT } from "./defaults.ts";
 import { designFileFromDraft } from "./design-file.ts";
@@ -363,7 +363,11 @@ class TryPage {
 export async function startTry(doc: Document = document): Promise<void> {
   const page = find(doc);
   if (!page) return;
-  const url = joinBase(import.meta.env.BASE_URL, TRY_DATA_PATH);
+  // The built pages carry their root relative to themselves (data-root), so the
+  // guide works from whatever path a server puts it under.
+  const root = new URL(doc.documentElement.dataset.root ?? import.meta.env.BASE_URL, doc.location.href);
+  setSiteBase(root.pathname);
+  const url = joinBase(root.pathname, TRY_DATA_PATH);
   const data = await fetchData(url);
   if (typeof data === "string") {
     say(page.status, `The try page cannot start: ${data}. The design pages show the demo designs without it.`);

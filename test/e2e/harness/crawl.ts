@@ -26,12 +26,13 @@ export async function crawl(t: Tracked): Promise<{ pages: CrawledPage[]; files: 
   const home = new URL(site.home);
   const queue = [home.href];
   const seen = new Set(queue);
+  const downloads = new Set<string>();
   const pages: CrawledPage[] = [];
   const files: { url: string; status: number }[] = [];
   while (queue.length > 0 && pages.length < MAX_PAGES) {
     const href = queue.shift() as string;
     const url = new URL(href);
-    if (!isPage(url)) {
+    if (!isPage(url) || downloads.has(href)) {
       const response = await t.context.request.get(href);
       files.push({ url: href, status: response.status() });
       await response.dispose();
@@ -47,6 +48,7 @@ export async function crawl(t: Tracked): Promise<{ pages: CrawledPage[]; files: 
         links: [...document.querySelectorAll("a[href]")].map((a) => ({
           raw: a.getAttribute("href") ?? "",
           resolved: (a as HTMLAnchorElement).href,
+          download: a.hasAttribute("download"),
         })),
       };
     });
@@ -75,6 +77,8 @@ export async function crawl(t: Tracked): Promise<{ pages: CrawledPage[]; files: 
       }
       if (!seen.has(target.href)) {
         seen.add(target.href);
+        // A download (a design's one-file report) is a file to fetch, not a page of the site to browse.
+        if (link.download) downloads.add(target.href);
         queue.push(target.href);
       }
     }

@@ -2,7 +2,7 @@
 // Directive semantics: W3C Content Security Policy Level 3 (§2.2 parsing, §6.8
 // default-src fallback); what counts as "no other host" is issue 7 §5.
 import { describe, expect, it } from "vitest";
-import { parsePolicy, policyProblems } from "./csp.ts";
+import { parsePolicy, policyProblems, reportPolicyProblems } from "./csp.ts";
 
 describe("parsePolicy", () => {
   it("lower-cases directive names and keeps the first of a repeated directive (CSP3 §2.2.1)", () => {
@@ -50,5 +50,34 @@ describe("policyProblems", () => {
     ],
   ] as const)("%s", (_name, policy, problems) => {
     expect(policyProblems(policy)).toEqual(problems);
+  });
+});
+
+describe("reportPolicyProblems", () => {
+  it.each([
+    [
+      "the report's own policy",
+      "default-src 'none'; style-src 'sha256-ffJ3rRWiy4KVE6YbNuMoACvtqbOhOEGIq1irZbT4Q/s='; img-src data:",
+      [],
+    ],
+    [
+      "the site's policy (loads from itself)",
+      "default-src 'self'; style-src 'self'",
+      [
+        "default-src is not 'none'",
+        "script-src allows 'self' (expected 'none')",
+        "style-src allows 'self' (expected only hashes of the report's own style)",
+      ],
+    ],
+    [
+      "inline styles allowed",
+      "default-src 'none'; style-src 'unsafe-inline'",
+      [
+        "style-src allows 'unsafe-inline' (expected only hashes of the report's own style)",
+        "style-src allows 'unsafe-inline' (expected no unsafe keyword)",
+      ],
+    ],
+  ] as const)("%s", (_name, policy, problems) => {
+    expect(reportPolicyProblems(policy)).toEqual(problems);
   });
 });

@@ -43,3 +43,27 @@ export function policyProblems(text: string | null): string[] {
   }
   return problems;
 }
+
+/**
+ * The policy of a one-file design report (issue 20): nothing may load at all
+ * (default-src 'none'), no script runs, and the only styles are the report's
+ * own style block, allowed by its hash (CSP3 §8.3 hash-source).
+ */
+export function reportPolicyProblems(text: string | null): string[] {
+  if (text === null) return ['no <meta http-equiv="Content-Security-Policy"> in <head>'];
+  const policy = parsePolicy(text);
+  const problems: string[] = [];
+  if (policy.get("default-src")?.join(" ") !== "'none'") problems.push("default-src is not 'none'");
+  const scripts = effective(policy, "script-src") ?? [];
+  if (scripts.join(" ") !== "'none'") problems.push(`script-src allows ${scripts.join(" ")} (expected 'none')`);
+  const styles = effective(policy, "style-src") ?? [];
+  if (styles.length === 0 || !styles.every((s) => /^'sha(256|384|512)-[A-Za-z0-9+/=]+'$/.test(s)))
+    problems.push(`style-src allows ${styles.join(" ")} (expected only hashes of the report's own style)`);
+  for (const [directive, sources] of policy) {
+    for (const source of sources) {
+      if (/^'unsafe-/.test(source)) problems.push(`${directive} allows ${source} (expected no unsafe keyword)`);
+      else if (!HOSTLESS.test(source)) problems.push(`${directive} allows ${source} (expected no host at all)`);
+    }
+  }
+  return problems;
+}
