@@ -5,7 +5,8 @@
 import type { Catalogue } from "../src/core/catalogue-index.ts";
 import type { DesignResult } from "../src/core/engine/result.ts";
 import type { Design } from "../src/core/schemas/design.ts";
-import { evaluateDesign, simulateDesign } from "../src/engine.ts";
+import { evaluateDesign } from "../src/engine.ts";
+import { simulateDesign } from "../src/simulation.ts";
 import { median, timePerCall } from "./stats.ts";
 
 export type SimulationRow = { design: string; topology: string; ms: number };

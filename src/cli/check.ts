@@ -1,7 +1,8 @@
 // `railsieve check DESIGN.json…`: evaluate, print, and exit 0 / 1 / 2.
 import { designHolds, type DesignResult } from "../core/engine/result.ts";
 import { InputError, type Problem } from "../core/problems.ts";
-import { evaluateDesign, TOPOLOGY_IDS, withSimulation } from "../engine.ts";
+import { evaluateDesign, TOPOLOGY_IDS } from "../engine.ts";
+import { withSimulation } from "../simulation.ts";
 import { flag, UsageError, type ParsedArgs } from "./args.ts";
 import type { Io } from "./io.ts";
 import { loadForCheck } from "./load.ts";

@@ -4,12 +4,13 @@
 import { csvLine } from "../core/csv-escape.ts";
 import {
   describeConditions,
+  whyBeyond,
   type RunSummary,
   type SimulationOutcome,
   type SimulationReport,
 } from "../core/sim/report.ts";
 import type { Trace } from "../core/sim/simulate.ts";
-import { formatPercent, formatSI } from "../core/units.ts";
+import { formatSI } from "../core/units.ts";
 
 const v = (x: number) => formatSI(x, "V");
 
@@ -29,14 +30,6 @@ export function simulationLine(r: SimulationReport | SimulationSkip): string {
   if (!c) return head;
   if (c.within) return `${head}; inside the static worst case ${v(c.worst_case_v)} by ${v(c.margin_v)}`;
   return `${head}; BEYOND the static worst case ${v(c.worst_case_v)} by ${v(-c.margin_v)}: distrust the budget, ${whyBeyond(r)}`;
-}
-
-/** Why the simulation went beyond the budget: what the chain was doing, or the static error it found. */
-export function whyBeyond(r: SimulationReport): string {
-  const because = r.comparison?.distrust?.because ?? [];
-  if (because.length > 0) return `which leaves out what happened while ${describeConditions(because)}`;
-  const f = r.slow.fit;
-  return `whose static model differs from the circuit: even at ${formatSI(r.slow.frequency_hz, "Hz")} the reading is off by ${formatPercent(f.gain_error)} in gain and ${v(f.offset_v)} at zero`;
 }
 
 function runLines(label: string, s: RunSummary): string[] {

@@ -5,7 +5,8 @@
 // otherwise, 2 on bad input.
 import type { DesignResult } from "../core/engine/result.ts";
 import { InputError, type Problem } from "../core/problems.ts";
-import { evaluateDesign, simulateDesign, TOPOLOGY_IDS } from "../engine.ts";
+import { evaluateDesign, TOPOLOGY_IDS } from "../engine.ts";
+import { simulateDesign } from "../simulation.ts";
 import { flag, flagValues, UsageError, type ParsedArgs } from "./args.ts";
 import type { Io } from "./io.ts";
 import { loadForCheck } from "./load.ts";

@@ -25,7 +25,7 @@ export type SimulationPicture = {
 };
 
 const W = 340;
-const LEFT = 46;
+const LEFT = 58;
 const RIGHT = 8;
 const PANEL_H = 110;
 const GAP = 30;
@@ -76,8 +76,8 @@ export function renderSimulationFigure(p: SimulationPicture): string {
     `<text class="sim-key sim-key-reading" x="${LEFT + 48}" y="${top + 12}">reading</text>`,
     // Panel 2: error with bands.
     `<text class="sim-key" x="${LEFT + 4}" y="${top2 - 6}">error (reading − input)</text>`,
-    band("sim-required", p.required_v, "required", ye, bound),
-    p.worst_case_v === null ? "" : band("sim-worst", p.worst_case_v, "static worst case", ye, bound),
+    band("sim-required", p.required_v, "required", ye, bound, "start"),
+    p.worst_case_v === null ? "" : band("sim-worst", p.worst_case_v, "worst case", ye, bound, "end"),
     `<line class="sim-axis" x1="${LEFT}" x2="${W - RIGHT}" y1="${ye(0).toFixed(1)}" y2="${ye(0).toFixed(1)}"/>`,
     `<text class="sim-tick" x="${LEFT - 4}" y="${(ye(bound) + 10).toFixed(1)}" text-anchor="end">${escapeHtml(formatSI(bound, "V", { digits: 2 }))}</text>`,
     `<text class="sim-tick" x="${LEFT - 4}" y="${ye(-bound).toFixed(1)}" text-anchor="end">${escapeHtml(formatSI(-bound, "V", { digits: 2 }))}</text>`,
@@ -95,14 +95,23 @@ export function renderSimulationFigure(p: SimulationPicture): string {
   ].join("");
 }
 
-function band(cls: string, v: number, label: string, y: (v: number) => number, bound: number): string {
+/** A ± band with its label above the upper line, at the left or the right end (two bands never share an end). */
+function band(
+  cls: string,
+  v: number,
+  label: string,
+  y: (v: number) => number,
+  bound: number,
+  end: "start" | "end",
+): string {
   if (!(v > 0) || v > bound) return "";
   const a = y(v).toFixed(1);
   const b = y(-v).toFixed(1);
+  const x = end === "start" ? LEFT + 2 : W - RIGHT;
   return (
     `<line class="${cls}" x1="${LEFT}" x2="${W - RIGHT}" y1="${a}" y2="${a}"/>` +
     `<line class="${cls}" x1="${LEFT}" x2="${W - RIGHT}" y1="${b}" y2="${b}"/>` +
-    `<text class="sim-band-label ${cls}-label" x="${W - RIGHT}" y="${(Number(a) - 3).toFixed(1)}" text-anchor="end">${escapeHtml(`${label} ±${formatSI(v, "V", { digits: 2 })}`)}</text>`
+    `<text class="sim-band-label ${cls}-label" x="${x}" y="${(Number(a) - 3).toFixed(1)}" text-anchor="${end}">${escapeHtml(`${label} ±${formatSI(v, "V", { digits: 2 })}`)}</text>`
   );
 }
 

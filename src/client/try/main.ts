@@ -84,6 +84,9 @@ async function fetchData(url: string): Promise<TryData | string> {
   }
 }
 
+/** Edits closer together than this share one simulation. */
+const SIMULATION_PAUSE_MS = 150;
+
 class TryPage {
   readonly page: Page;
   readonly doc: Document;
@@ -98,6 +101,9 @@ class TryPage {
   /** A timer writing the address after the frame an edit redrew (0: none pending), and the design it writes. */
   addressTimer = 0;
   addressDraft: Readonly<Draft> = this.draft;
+  /** The visitor asked for the simulated reading: it follows every evaluation, after a pause. */
+  simulating = false;
+  simulationTimer = 0;
   // The link check evaluates a design once; the update that follows reuses that evaluation.
   cached: { key: string; evaluation: Evaluation } | undefined;
 
@@ -137,6 +143,10 @@ class TryPage {
     page.results.addEventListener("click", (e) => this.onResultsClick(e));
     page.downloadDesign.addEventListener("click", () => this.downloadDesign());
     page.downloadCsv.addEventListener("click", () => this.downloadCsv());
+    doc.getElementById("try-simulate")?.addEventListener("click", () => {
+      this.simulating = true;
+      this.queueSimulation(0);
+    });
     window.addEventListener("popstate", () => {
       // The address now belongs to another history entry; a pending write would overwrite it.
       this.cancelAddress();
@@ -264,6 +274,7 @@ class TryPage {
     page.status.classList.toggle("try-fails", !holds);
     if (writeUrl === "after-frame") this.queueAddress();
     else if (writeUrl !== "none") this.writeUrl(writeUrl === "replace");
+    if (this.simulating) this.queueSimulation(SIMULATION_PAUSE_MS);
     // For benchmarks and the browser tests: schema check + engine, and the DOM update, in ms.
     const done = performance.now();
     // Only the latest pair is kept, so a long session does not grow the timeline.
@@ -272,6 +283,30 @@ class TryPage {
     performance.measure("railsieve:try-evaluate", { start: started, end: evaluated });
     performance.measure("railsieve:try-render", { start: evaluated, end: done });
     page.root.dataset.updateMs = (done - started).toFixed(1);
+  }
+
+  /**
+   * The simulation runs in a task of its own once edits pause, never in the
+   * frame that answers a keystroke; its code is fetched the first time.
+   */
+  queueSimulation(pauseMs: number): void {
+    window.clearTimeout(this.simulationTimer);
+    const out = this.doc.getElementById("try-simulation");
+    if (!out) return;
+    this.simulationTimer = window.setTimeout(() => {
+      this.simulationTimer = 0;
+      const result = this.result;
+      if (!result) return;
+      say(out, "Simulating…");
+      import("./simulation.ts")
+        .then(({ simulationHtml }) => {
+          // A newer edit may have replaced the result meanwhile: draw only the latest.
+          if (this.result === result) out.innerHTML = simulationHtml(result, this.catalogue);
+        })
+        .catch((e: unknown) =>
+          say(out, `The simulation could not run: ${e instanceof Error ? e.message : String(e)}.`),
+        );
+    }, pauseMs);
   }
 
   /**

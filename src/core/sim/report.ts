@@ -1,6 +1,7 @@
 // A simulation's findings as data (SPEC §13): per frequency the largest and rms
 // error and what caused the largest, and how the largest compares with the
 // static budget's worst case. Text is made from it at the edges (CLI, pages).
+import { formatPercent, formatSI } from "../units.ts";
 import type { ChainRun, Condition, Trace } from "./simulate.ts";
 
 export type RunSummary = {
@@ -127,4 +128,12 @@ const STATE_WORDS: Record<Condition["state"], string> = {
 /** "rectifier-1 was crossing its diode drops …; sign had not yet switched …". */
 export function describeConditions(conditions: readonly Condition[]): string {
   return conditions.map((c) => `${c.stage} ${STATE_WORDS[c.state]}`).join("; ");
+}
+
+/** Why the simulation went beyond the budget: what the chain was doing, or the static error it found. */
+export function whyBeyond(r: SimulationReport): string {
+  const because = r.comparison?.distrust?.because ?? [];
+  if (because.length > 0) return `which leaves out what happened while ${describeConditions(because)}`;
+  const f = r.slow.fit;
+  return `whose static model differs from the circuit: even at ${formatSI(r.slow.frequency_hz, "Hz")} the reading is off by ${formatPercent(f.gain_error)} in gain and ${formatSI(f.offset_v, "V")} at zero`;
 }
