@@ -124,8 +124,10 @@ describe("diff between two data folders", () => {
     const d = report.changed.find((x) => x.id === "bridge-10v-5v-adc");
     expect(d?.state.before?.state).toBe("holds");
     expect(d?.state.after?.state).toBe("fails");
-    expect(d?.state.after?.reasons.join(" ")).toMatch(/accuracy budget fails/);
-    expect(d?.budget?.after.verdict).toBe("fail");
+    // At 1 mV no sign part fits either (dead band, and since issue 21 the last candidates'
+    // input clamps and overload recovery), so the budget may be incomplete rather than failing.
+    expect(d?.state.after?.reasons.join(" ")).toMatch(/accuracy budget (fails|incomplete)/);
+    expect(["fail", "incomplete", undefined]).toContain(d?.budget?.after.verdict);
     expect(report.regressions).toContain("bridge-10v-5v-adc went from holding to failing");
   });
 
