@@ -1,4 +1,14 @@
-import { defineRule, record, shareVerdict, spareOrShort, type Step } from "../src/core/rule-kit/index.ts";
+import {
+  defineRule,
+  record,
+  shareVerdict,
+  spareOrShort,
+  type Explanation,
+  type Measured,
+  type RoleContext,
+  type Step,
+} from "../src/core/rule-kit/index.ts";
+import type { PartOf } from "../src/core/kind-rows.ts";
 import { formatSI, formatVolts } from "../src/core/units.ts";
 import { pinCap, signEdge, signTimeLimit } from "./sign-path.ts";
 
@@ -18,11 +28,31 @@ export const riseTime = defineRule({
     const limit = signTimeLimit(ctx);
     const e = signEdge(ctx, part);
     if (e.case === "no-pull-up") return record(out, "unrated", limit, 0, limit, limit);
+    // An edge that never reaches its threshold is a fail with no finite delay:
+    // it is shown as short by at least the whole limit.
+    if (!Number.isFinite(e.seconds)) return record(out, "fail", limit, 2 * limit, -limit, limit);
     const margin = limit - e.seconds;
     record(out, shareVerdict(margin, limit, ctx.policy), limit, e.seconds, margin, limit);
   },
-  describe({ needed: limit, available: t, margin }, ctx, part) {
+  describe(m, ctx, part) {
     const e = signEdge(ctx, part);
+    if (e.case !== "no-pull-up" && !Number.isFinite(e.seconds)) {
+      return {
+        reason: `the pin never reaches its logic threshold through this RC edge (its final level is not past the threshold), so the sign never arrives: fail`,
+        steps: [{ label: "limit", value: m.needed, unit: "s" }],
+      };
+    }
+    return describeEdge(m, ctx, part, e);
+  },
+});
+
+function describeEdge(
+  { needed: limit, available: t, margin }: Readonly<Measured>,
+  ctx: RoleContext,
+  part: PartOf<"op-amp" | "comparator">,
+  e: ReturnType<typeof signEdge>,
+): Explanation {
+  {
     const cap = pinCap(ctx);
     const c = `${formatSI(cap.farad, "F")}${cap.assumed ? " (assumed, common practice)" : ""}`;
     const tail = `the sign may be late by ${formatSI(limit, "s")}: ${spareOrShort(margin, "s")}`;
@@ -75,5 +105,5 @@ export const riseTime = defineRule({
           ],
         };
     }
-  },
-});
+  }
+}
