@@ -78,6 +78,8 @@ function oneOf<const T extends readonly [string, ...string[]]>(values: T) {
 
 export const LEVEL_SHIFTS = ["diode-clamp", "npn-inverter", "pull-up"] as const;
 export const SERIES = ["E12", "E24", "E96"] as const;
+/** A signal against ground, or the difference of two inputs riding on a common mode (a bridge), SPEC §12.2. */
+export const SIGNAL_KINDS = ["single-ended", "differential"] as const;
 /** A role id; the topology registry (src/topologies/) says which exist. */
 export type Role = string;
 
@@ -210,6 +212,15 @@ function designObject(names: DesignNames) {
       peak_v: si({ above: 0, max: 100000 }),
       max_frequency_hz: si({ above: 0 }),
       source_ohm: si({ min: 0 }),
+      // Optional (issue 17, SPEC §12.2): a differential source and the range its common mode moves over.
+      /** "single-ended" when absent. */
+      kind: oneOf(SIGNAL_KINDS).optional(),
+      /** Lowest common-mode voltage of a differential source (both inputs' mean). */
+      common_mode_min_v: si({ min: -100, max: 100 }).optional(),
+      /** Highest common-mode voltage of a differential source. */
+      common_mode_max_v: si({ min: -100, max: 100 }).optional(),
+      // Optional (issue 17, SPEC §12.4): the largest voltage the input may see in a fault, either sign.
+      fault_v: si({ above: 0, max: 100000 }).optional(),
     }),
     front_end: z.strictObject({
       window_v: si({ above: 0 }),
@@ -219,11 +230,26 @@ function designObject(names: DesignNames) {
       rectifier_load_ohm: si({ above: 0 }),
       /** Series resistor into the sign input: limits the current when its input clamps conduct (issue 21). */
       sign_series_ohm: si({ above: 0 }).optional(),
+      /** Series resistor between the input connector and the front end: limits the fault current into clamps (issue 17). */
+      protection_ohm: si({ above: 0 }).optional(),
     }),
     adc: z.strictObject({
       bits: si({ integer: true, min: 1, max: 32 }),
       reference_v: si({ above: 0, max: 100 }),
       reference_tolerance: si({ min: 0, max: 0.2 }),
+      // Optional (issue 17, SPEC §12.3): the converter's sampling input; settling is unrated without them.
+      /** Sampling capacitor. */
+      sample_cap_f: si({ above: 0, max: 1e-6 }).optional(),
+      /** Resistance of the sampling switch. */
+      switch_ohm: si({ min: 0, max: 1e6 }).optional(),
+      /** Acquisition (tracking) time the converter allows. */
+      acquisition_s: si({ above: 0, max: 1 }).optional(),
+      /** Conversions per second. */
+      sample_rate_hz: si({ above: 0 }).optional(),
+      /** Optional series resistor between the driving stage and the pin. */
+      pin_r_ohm: si({ min: 0, max: 1e7 }).optional(),
+      /** Optional capacitor from the pin to ground (the charge reservoir). */
+      pin_c_f: si({ min: 0, max: 1e-3 }).optional(),
     }),
     logic: z.strictObject({
       vdd_v: si({ above: 0, max: 100 }),
@@ -248,6 +274,8 @@ function designObject(names: DesignNames) {
       npn_vebo_v: si({ above: 0, max: 100 }).optional(),
       /** NPN inverter: the transistor's storage time when it leaves saturation (default 300 ns, common practice). */
       npn_storage_s: si({ min: 0, max: 1 }).optional(),
+      /** Current a logic or converter pin's clamps may carry, mA (default 5 mA, common practice: math/clamp-current.ts). */
+      injection_ma: si({ above: 0, max: 1000 }).optional(),
     }),
     accuracy: z.strictObject({ required_v: si({ above: 0 }) }),
     temperature: z.strictObject({ min_c: si({ min: -273.15 }), max_c: si({ max: 500 }) }),
@@ -269,6 +297,34 @@ export function designSchemaFor(names: DesignNames) {
       );
     }
     for (const p of names.check?.(d) ?? []) issue(p.path, p.message);
+    const { signal } = d;
+    if (signal.kind === "differential") {
+      for (const key of ["common_mode_min_v", "common_mode_max_v"] as const) {
+        if (signal[key] === undefined) {
+          issue(
+            ["signal", key],
+            `required value is missing (got nothing, expected the ${key === "common_mode_min_v" ? "lowest" : "highest"} common-mode voltage of the differential source, in volts)`,
+          );
+        }
+      }
+    }
+    if (
+      signal.common_mode_min_v !== undefined &&
+      signal.common_mode_max_v !== undefined &&
+      signal.common_mode_min_v > signal.common_mode_max_v
+    ) {
+      issue(
+        ["signal", "common_mode_min_v"],
+        `range is upside down (got ${signal.common_mode_min_v} V, expected at most signal.common_mode_max_v ${signal.common_mode_max_v} V)`,
+      );
+    }
+    const { acquisition_s, sample_rate_hz } = d.adc;
+    if (acquisition_s !== undefined && sample_rate_hz !== undefined && acquisition_s > 1 / sample_rate_hz) {
+      issue(
+        ["adc", "acquisition_s"],
+        `acquisition is longer than a conversion period (got ${acquisition_s} s, expected at most 1 / adc.sample_rate_hz = ${Number((1 / sample_rate_hz).toPrecision(4))} s)`,
+      );
+    }
     // The converter runs from the positive rail; a reference above it would put full scale out of reach.
     if (d.adc.reference_v > d.supply.positive_v) {
       issue(
