@@ -2,11 +2,13 @@
 // Adding a rule: write its module, list it here, and hand the rule object to
 // the roles that use it in a topology module (src/topologies/).
 import type { AnyRule } from "../src/core/rule-kit/index.ts";
+import { adcSettling } from "./adc-settling.ts";
 import { bandwidth } from "./bandwidth.ts";
 import { baseEmitterReverse } from "./base-emitter-reverse.ts";
 import { differentialInput } from "./differential-input.ts";
 import { forwardCurrent } from "./forward-current.ts";
 import { inputCommonMode } from "./input-common-mode.ts";
+import { inputFault } from "./input-fault.ts";
 import { leakage } from "./leakage.ts";
 import { logicHigh } from "./logic-high.ts";
 import { logicLow } from "./logic-low.ts";
@@ -48,6 +50,8 @@ export const RULES = [
   recovery,
   leakage,
   forwardCurrent,
+  adcSettling,
+  inputFault,
 ] as const;
 
 /** Every rule id, derived from the list: no hand-kept union. */

@@ -2,7 +2,9 @@
 // the order pages and comparisons list them. Adding a topology: write its
 // module (defineTopology) and list it here.
 import type { TopologyDef } from "../core/engine/topology.ts";
+import { differenceToMid } from "./difference-to-mid.ts";
+import { gainedLevelShift } from "./gained-level-shift.ts";
 import { offsetToMidRail } from "./offset-to-mid-rail.ts";
 import { rectifyAndSign } from "./rectify-and-sign.ts";
 
-export const TOPOLOGIES: readonly TopologyDef[] = [rectifyAndSign, offsetToMidRail];
+export const TOPOLOGIES: readonly TopologyDef[] = [rectifyAndSign, offsetToMidRail, gainedLevelShift, differenceToMid];

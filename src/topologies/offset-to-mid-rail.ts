@@ -2,7 +2,9 @@
 // bipolar signal and centres it on half the ADC reference; one op amp follows
 // it on a single positive rail, so the ADC sees the whole signal with no
 // negative supply and no comparator. An optional op amp buffers the reference.
+import { adcSettling } from "../../rules/adc-settling.ts";
 import { bandwidth } from "../../rules/bandwidth.ts";
+import { inputFault } from "../../rules/input-fault.ts";
 import { inputCommonMode } from "../../rules/input-common-mode.ts";
 import { offset } from "../../rules/offset.ts";
 import { outputSwing } from "../../rules/output-swing.ts";
@@ -11,15 +13,35 @@ import { unityGainStable } from "../../rules/unity-gain-stable.ts";
 import type { BudgetTerm, Conversion, RoleTerm } from "../core/engine/budget.ts";
 import type { Derived, DisplayGroup } from "../core/engine/result.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
-import { chooseLevelShift, networkToleranceError, type LevelShiftNetwork } from "../core/math/level-shift.ts";
+import {
+  chooseLevelShift,
+  networkOf,
+  networkToleranceError,
+  type LevelShiftNetwork,
+} from "../core/math/level-shift.ts";
 import type { OpAmpStage, Rails } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
 import { formatVolts } from "../core/units.ts";
+import {
+  aliasTerm,
+  driveDisplay,
+  DRIVE_FIELDS,
+  faultPath,
+  rulesFor,
+  seriesInOhm,
+  singleEndedOnly,
+} from "./converter-drive.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { offsetToMidRailChain } from "./offset-to-mid-rail-sim.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
 
+const LEVEL_SHIFT_RULES = [...OP_AMP_STAGE_RULES, adcSettling, inputFault];
+
 function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
+  const notSingle = singleEndedOnly(design);
+  if (notSingle !== null) {
+    return { ok: false, problems: [{ path: "topology", message: `offset-to-mid-rail does not apply: ${notSingle}` }] };
+  }
   const vref = design.adc.reference_v;
   const peak = design.signal.peak_v;
   const margin = design.policy.headroom_margin_v;
@@ -61,6 +83,9 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     bandwidth_peak_v: peak,
     slew_amplitude_v: a * peak,
   };
+  // A fault reaches the follower's input through R1 with the source and any series resistor in front of it.
+  const faultNet = networkOf(network.r1_ohm + seriesInOhm(design), network.r2_ohm, network.r3_ohm, vref);
+  levelShift.fault = faultPath(faultNet.gain, faultNet.offset_v, faultNet.parallel_ohm, "the level shifter's input");
   const referenceBuffer: OpAmpStage = {
     stage: "op-amp",
     label: "the reference buffer",
@@ -74,7 +99,7 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     bandwidth_peak_v: 0,
     slew_amplitude_v: 0,
   };
-  role("level-shift", levelShift, rails);
+  role("level-shift", [{ stage: levelShift, rules: rulesFor(design, LEVEL_SHIFT_RULES) }], rails);
   role("reference-buffer", referenceBuffer, rails);
   const derived: Derived = {
     rails,
@@ -103,6 +128,8 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
       calibrates_out: true,
     },
   ];
+  const alias = aliasTerm(design);
+  if (alias) fixed.push(alias);
   return {
     ok: true,
     outcome: {
@@ -111,7 +138,7 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
       terms: fixed,
       effectiveBits: bits + Math.log2((high - low) / vref),
       conversion: conversion(design, a, b),
-      display: display(derived, network, low, high),
+      display: [...display(derived, network, low, high), driveDisplay(design)],
     },
   };
 }
@@ -183,6 +210,7 @@ export const offsetToMidRail = defineTopology({
     "accuracy.required_v",
     "temperature.min_c",
     "temperature.max_c",
+    ...DRIVE_FIELDS,
   ],
   roles: [
     {
@@ -191,7 +219,7 @@ export const offsetToMidRail = defineTopology({
       field: "Level-shift op amp",
       label: "follower after the level-shift network, single supply (in = out = b ± a·peak)",
       wants: "amplify",
-      rules: OP_AMP_STAGE_RULES,
+      rules: LEVEL_SHIFT_RULES,
     },
     {
       id: "reference-buffer",
@@ -204,6 +232,7 @@ export const offsetToMidRail = defineTopology({
     },
   ],
   roleTerms: ROLE_TERMS,
+  appliesTo: singleEndedOnly,
   evaluate,
   simulation: offsetToMidRailChain,
 });

@@ -9,6 +9,8 @@ import { logicHigh } from "../../rules/logic-high.ts";
 import { logicLow } from "../../rules/logic-low.ts";
 import { offset } from "../../rules/offset.ts";
 import { bandwidth } from "../../rules/bandwidth.ts";
+import { adcSettling } from "../../rules/adc-settling.ts";
+import { inputFault } from "../../rules/input-fault.ts";
 import { baseEmitterReverse } from "../../rules/base-emitter-reverse.ts";
 import { differentialInput } from "../../rules/differential-input.ts";
 import { outputCurrent } from "../../rules/output-current.ts";
@@ -32,6 +34,15 @@ import type { DiodeStage, OpAmpStage, Rails, SignStage } from "../core/rule-kit/
 import type { Design } from "../core/schemas/design.ts";
 import type { Diode } from "../core/schemas/diode.ts";
 import { formatSI, formatVolts } from "../core/units.ts";
+import {
+  aliasTerm,
+  driveDisplay,
+  DRIVE_FIELDS,
+  faultPath,
+  rulesFor,
+  seriesInOhm,
+  singleEndedOnly,
+} from "./converter-drive.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { rectifyAndSignChain } from "./rectify-and-sign-sim.ts";
 import { frontEnd } from "./front-end.ts";
@@ -56,7 +67,15 @@ const NOMINAL_SILICON: Diode = {
   if_max_ma: 200,
 };
 
+// The buffer's input is the one a fault on the signal reaches; the rectifier drives the converter.
+const BUFFER_RULES = [...OP_AMP_STAGE_RULES, inputFault];
+const RECTIFIER_RULES = [...OP_AMP_STAGE_RULES, zeroCrossing, adcSettling];
+
 function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation {
+  const notSingle = singleEndedOnly(design);
+  if (notSingle !== null) {
+    return { ok: false, problems: [{ path: "topology", message: `rectify-and-sign does not apply: ${notSingle}` }] };
+  }
   const fe = frontEnd(design);
   if (!fe.ok) return fe;
   const { divider, ratio: k, window_v: W, thevenin_ohm, target_ratio } = fe;
@@ -251,8 +270,18 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     ...(baseClamp ? { base_clamp: baseClamp } : {}),
     deepest_negative_v: deepest_v,
   };
-  role("buffer", buffer, rails);
-  role("rectifier", rectifier, rails);
+  // A fault reaches the buffer through the divider, the source and any series resistor in its top leg.
+  const top = (divider ? divider.top_ohm : 0) + seriesInOhm(design);
+  buffer.fault = divider
+    ? faultPath(
+        divider.bottom_ohm / (top + divider.bottom_ohm),
+        0,
+        (top * divider.bottom_ohm) / (top + divider.bottom_ohm),
+        "the buffer's input",
+      )
+    : faultPath(1, 0, top, "the buffer's input");
+  role("buffer", [{ stage: buffer, rules: rulesFor(design, BUFFER_RULES) }], rails);
+  role("rectifier", [{ stage: rectifier, rules: rulesFor(design, RECTIFIER_RULES) }], rails);
   role("sign", sign, rails);
 
   const derived: Derived = {
@@ -272,10 +301,10 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     outcome: {
       derived,
       notes,
-      terms: fixedTerms(design, k),
+      terms: [...fixedTerms(design, k), ...[aliasTerm(design)].filter((t) => t !== null)],
       effectiveBits: design.adc.bits + Math.log2(W / design.adc.reference_v) + 1,
       conversion: conversion(design, k),
-      display: display(design, derived),
+      display: [...display(design, derived), driveDisplay(design)],
     },
   };
 }
@@ -405,6 +434,7 @@ export const rectifyAndSign = defineTopology({
     "accuracy.required_v",
     "temperature.min_c",
     "temperature.max_c",
+    ...DRIVE_FIELDS,
   ],
   roles: [
     {
@@ -413,7 +443,7 @@ export const rectifyAndSign = defineTopology({
       field: "Buffer op amp",
       label: "follower after the divider (in = out = ±W)",
       wants: "amplify",
-      rules: OP_AMP_STAGE_RULES,
+      rules: BUFFER_RULES,
     },
     {
       id: "rectifier",
@@ -421,7 +451,7 @@ export const rectifyAndSign = defineTopology({
       field: "Rectifier op amp",
       label: "precision rectifier, two per design (output −Vf … W + Vf, noise gain 2)",
       wants: "amplify",
-      rules: [...OP_AMP_STAGE_RULES, zeroCrossing],
+      rules: RECTIFIER_RULES,
       count: 2,
     },
     {
@@ -486,6 +516,7 @@ export const rectifyAndSign = defineTopology({
     },
   ],
   roleTerms: ROLE_TERMS,
+  appliesTo: singleEndedOnly,
   checkDesign(d) {
     if (d.front_end.window_v <= d.adc.reference_v) return [];
     return [

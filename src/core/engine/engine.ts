@@ -185,11 +185,30 @@ export function createEngine(topologies: readonly TopologyDef[]): Engine {
       if (!t) return { ok: false, problems: [{ path: "topology", message: `unknown topology (got '${topology}')` }] };
       return evaluateTopology(design, catalogue, t);
     }
-    const evaluations = topologies.map((t) => evaluateTopology(design, catalogue, t));
+    // Topologies that cannot serve this design (a single-ended front end for a
+    // differential source) are left out of the comparison, with the reason.
+    const skipped: { topology: string; reason: string }[] = [];
+    const applicable = topologies.filter((t) => {
+      const why = t.appliesTo?.(design) ?? null;
+      if (why !== null) skipped.push({ topology: t.id, reason: why });
+      return why === null;
+    });
+    if (applicable.length === 0) {
+      return {
+        ok: false,
+        problems: [
+          {
+            path: "topology",
+            message: `no topology serves this design (${skipped.map((s) => `${s.topology}: ${s.reason}`).join("; ")})`,
+          },
+        ],
+      };
+    }
+    const evaluations = applicable.map((t) => evaluateTopology(design, catalogue, t));
     const failed = evaluations.flatMap((e) => (e.ok ? [] : e.problems));
     if (failed.length > 0) return { ok: false, problems: failed };
     const results = evaluations.flatMap((e) => (e.ok ? [e.result] : []));
-    const comparison = compare(results, catalogue);
+    const comparison = { ...compare(results, catalogue), ...(skipped.length > 0 ? { skipped } : {}) };
     const primary = results.find((r) => r.topology === comparison.recommended) ?? results[0];
     if (!primary) throw new Error("no topology evaluated");
     return { ok: true, result: { ...primary, comparison } };

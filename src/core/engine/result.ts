@@ -100,6 +100,8 @@ export type Comparison = {
   reason: string;
   /** Every topology's full result, in row order. */
   results: DesignResult[];
+  /** Registered topologies left out because they cannot serve the design, and why. */
+  skipped?: { topology: string; reason: string }[];
 };
 
 export type DesignProblem = { path: string; message: string };

@@ -45,8 +45,8 @@ export type RoleDef = {
  * each checked with its own rules, and every finding names its stage.
  */
 export type StagePlan = {
-  /** Short id shown with each finding ("stage-1"). */
-  id: string;
+  /** Short id shown with each finding ("stage-1"); absent for a role of one stage whose rules depend on the design. */
+  id?: string;
   stage: Stage;
   /** Rules for this stage; the role's rules when absent. */
   rules?: readonly AnyRule[];
@@ -87,6 +87,12 @@ export type TopologyDef = {
   fields: readonly string[];
   /** Budget terms taken from the chosen part's finding of one rule. */
   roleTerms: readonly RoleTerm[];
+  /**
+   * Why this topology cannot serve a design (a differential source for a
+   * single-ended front end), or null when it can; `all` leaves such topologies
+   * out and says why. Absent: it serves every design.
+   */
+  appliesTo?(design: Design): string | null;
   /** Checks of a design that only this topology needs, by JSON path (run when the design names it). */
   checkDesign?(design: Design): DesignProblem[];
   evaluate(run: TopologyRun): TopologyEvaluation;

@@ -51,7 +51,15 @@ export type OpAmpStage = {
   slew_amplitude_v: number;
   /** Extra output jump at each zero crossing (two diode drops), when the stage has one. */
   zero_crossing_v?: number;
+  /** What a fault on the signal input puts at this stage's input pins (input-fault rule, SPEC §12.4). */
+  fault?: FaultPath;
 };
+
+/**
+ * The Thévenin source a fault meets at a stage's input pins, as a function of
+ * the signal input: V_th = gain·V_in + offset_v behind `ohm` (SPEC §12.4).
+ */
+export type FaultPath = { gain: number; offset_v: number; ohm: number; what: string };
 
 /** What the sign decision asks of a comparator (or an op amp used as one). */
 export type SignStage = {
@@ -65,6 +73,8 @@ export type SignStage = {
   base_clamp?: ClampDiode;
   /** The deepest V− the output can see (no load, ripple trough), for reverse stress; the worst-case rail when absent. */
   deepest_negative_v?: number;
+  /** What a fault on the signal input puts at the sign input (input-fault rule). */
+  fault?: FaultPath;
 };
 
 export type ClampDiode = { id: string; vf_1ma_v: number; vf_10ma_v: number; ir_na: number };
