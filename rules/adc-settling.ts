@@ -58,7 +58,7 @@ export const adcSettling = defineRule({
       .join(" + ");
     const have = x.acquisition / x.tau;
     return {
-      reason: `needs ${x.n.toFixed(3)} τ to settle to ½ LSB (${formatSI(x.halfLsb, "V")}) at ${bits} bits${pin}, with τ = ${t(x.tauAmp)} (GBW ÷ noise gain ${x.s.noise_gain}) + ${t(x.tauNet)} (${rc}) = ${t(x.tau)}: ${t(x.needed)}; the acquisition time ${t(x.acquisition)} is ${have.toFixed(3)} τ: ${margin >= 0 ? `${t(margin)} to spare` : `${t(-margin)} short`}`,
+      reason: `needs ${x.n.toFixed(3)} τ to settle to ½ LSB (${formatSI(x.halfLsb, "V")}) at ${bits} bits${pin}, with τ = ${t(x.tauAmp)} (GBW ÷ noise gain ${Number(x.s.noise_gain.toPrecision(4))}) + ${t(x.tauNet)} (${rc}) = ${t(x.tau)}: ${t(x.needed)}; the acquisition time ${t(x.acquisition)} is ${have.toFixed(3)} τ: ${margin >= 0 ? `${t(margin)} to spare` : `${t(-margin)} short`}`,
       steps: [
         { label: "½ LSB = V_ref / 2^(N+1)", value: x.halfLsb, unit: "V" },
         { label: "step = V_ref·C_s/(C_s + C_pin)", value: x.step, unit: "V" },

@@ -21,6 +21,7 @@ export const DRIVE_FIELDS = [
   "adc.pin_r_ohm",
   "adc.pin_c_f",
   "signal.fault_v",
+  "signal.out_of_band_v",
   "front_end.protection_ohm",
   "logic.injection_ma",
 ] as const;
@@ -60,22 +61,39 @@ function pinCorner(design: Design): number | null {
 }
 
 /**
- * The alias term (SPEC §12.3): content at sample_rate − f_max folds onto f_max.
- * Assumed as large as the signal's peak at the input (nothing in the design
- * says it is smaller), attenuated by the pin RC alone (the op amps' own poles
- * are left out, which can only overstate the term).
+ * The converter-pin terms (SPEC §12.3). Alias: content at sample_rate − f_max
+ * folds onto f_max; it is taken as signal.out_of_band_v, or as large as the
+ * signal's peak when the design does not say (nothing else bounds it),
+ * attenuated by the pin RC alone (the op amps' own poles are left out, which
+ * can only overstate it). The pin RC's own gain error at f_max,
+ * (1 − |H(f_max)|)·peak, joins it when the design has an RC.
  */
-export function aliasTerm(design: Design): BudgetTerm | null {
+export function pinTerms(design: Design): BudgetTerm[] {
+  const terms: BudgetTerm[] = [];
+  const r = design.adc.pin_r_ohm ?? 0;
+  const c = design.adc.pin_c_f ?? 0;
+  const fmax = design.signal.max_frequency_hz;
+  if (r > 0 && c > 0) {
+    terms.push({
+      name: "pin-rc",
+      label: "pin RC gain error at f max",
+      v: (1 - rcAttenuation(fmax, r, c)) * design.signal.peak_v,
+      calibrates_out: false,
+    });
+  }
   const fs = design.adc.sample_rate_hz;
-  if (fs === undefined) return null;
-  const fa = Math.abs(fs - design.signal.max_frequency_hz);
-  const h = rcAttenuation(fa, design.adc.pin_r_ohm ?? 0, design.adc.pin_c_f ?? 0);
-  return {
-    name: "alias",
-    label: `alias: signal-size content at sample rate − f max (${formatSI(fa, "Hz")}) after the pin RC (×${Number(h.toPrecision(3))})`,
-    v: design.signal.peak_v * h,
-    calibrates_out: false,
-  };
+  if (fs !== undefined) {
+    const fa = Math.abs(fs - fmax);
+    const h = rcAttenuation(fa, r, c);
+    const stated = design.signal.out_of_band_v;
+    terms.push({
+      name: "alias",
+      label: `alias: ${stated === undefined ? "signal-size content (no signal.out_of_band_v)" : "out-of-band content"} at sample rate − f max (${formatSI(fa, "Hz")}) after the pin RC (×${Number(h.toPrecision(3))})`,
+      v: (stated ?? design.signal.peak_v) * h,
+      calibrates_out: false,
+    });
+  }
+  return terms;
 }
 
 /** The rows every topology shows about the converter's pin and faults: what is checked, or what to fill in. */
@@ -120,4 +138,12 @@ export function singleEndedOnly(design: Design): string | null {
   return design.signal.kind === "differential"
     ? "it takes a single-ended signal, and this design's is differential"
     : null;
+}
+
+/** The problem a single-ended topology gives a differential design named for it. */
+export function notSingleEnded(topology: string): { path: string; message: string } {
+  return {
+    path: "signal.kind",
+    message: `${topology} takes a single-ended signal (got 'differential', expected 'single-ended' or no signal.kind; difference-to-mid takes a differential source)`,
+  };
 }

@@ -23,7 +23,7 @@ import { fillGain } from "../core/math/gained-level-shift.ts";
 import type { FaultPath, OpAmpStage, Rails } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
 import { formatVolts } from "../core/units.ts";
-import { aliasTerm, driveDisplay, DRIVE_FIELDS, faultPath, rulesFor, seriesInOhm } from "./converter-drive.ts";
+import { pinTerms, driveDisplay, DRIVE_FIELDS, faultPath, rulesFor, seriesInOhm } from "./converter-drive.ts";
 import { differenceToMidChain } from "./difference-to-mid-sim.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
@@ -143,8 +143,7 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
       calibrates_out: false,
     },
   ];
-  const alias = aliasTerm(design);
-  if (alias) terms.push(alias);
+  terms.push(...pinTerms(design));
   const perCode = vref / 2 ** bits / G;
   const offsetIn = ref / G;
   return {

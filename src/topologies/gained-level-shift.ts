@@ -20,27 +20,25 @@ import {
 import type { OpAmpStage, Rails } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
 import { formatVolts } from "../core/units.ts";
-import { aliasTerm, driveDisplay, DRIVE_FIELDS, faultPath, rulesFor, seriesInOhm } from "./converter-drive.ts";
+import {
+  pinTerms,
+  driveDisplay,
+  DRIVE_FIELDS,
+  faultPath,
+  rulesFor,
+  seriesInOhm,
+  singleEndedOnly,
+  notSingleEnded,
+} from "./converter-drive.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { gainedLevelShiftChain } from "./gained-level-shift-sim.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
 
 const ROLE_RULES = [...OP_AMP_STAGE_RULES, adcSettling, inputFault];
 
-/** Why the topology does not apply to a design, or null when it does. */
-function appliesTo(design: Design): string | null {
-  if (design.signal.kind === "differential") return "it takes a single-ended signal, and this design's is differential";
-  const want = fillGain(design.signal.peak_v, design.adc.reference_v, design.policy.headroom_margin_v);
-  if (want <= 0.5) {
-    return `the signal needs no gain (it fills the range at ${ratio(want)} ≤ ½, which offset-to-mid-rail reaches)`;
-  }
-  return null;
-}
-
 function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
-  const why = appliesTo(design);
-  if (why !== null)
-    return { ok: false, problems: [{ path: "topology", message: `gained-level-shift does not apply: ${why}` }] };
+  const why = singleEndedOnly(design);
+  if (why !== null) return { ok: false, problems: [notSingleEnded("gained-level-shift")] };
   const vref = design.adc.reference_v;
   const peak = design.signal.peak_v;
   const margin = design.policy.headroom_margin_v;
@@ -117,8 +115,7 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
       calibrates_out: false,
     },
   ];
-  const alias = aliasTerm(design);
-  if (alias) terms.push(alias);
+  terms.push(...pinTerms(design));
   const perCode = vref / 2 ** bits / x.gain;
   const offsetIn = x.offset_v / x.gain;
   return {
@@ -215,7 +212,7 @@ export const gainedLevelShift = defineTopology({
     },
   ],
   roleTerms: ROLE_TERMS,
-  appliesTo,
+  appliesTo: singleEndedOnly,
   evaluate,
   simulation: gainedLevelShiftChain,
 });

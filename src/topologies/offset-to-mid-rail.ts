@@ -23,13 +23,14 @@ import type { OpAmpStage, Rails } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
 import { formatVolts } from "../core/units.ts";
 import {
-  aliasTerm,
+  pinTerms,
   driveDisplay,
   DRIVE_FIELDS,
   faultPath,
   rulesFor,
   seriesInOhm,
   singleEndedOnly,
+  notSingleEnded,
 } from "./converter-drive.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { offsetToMidRailChain } from "./offset-to-mid-rail-sim.ts";
@@ -40,7 +41,7 @@ const LEVEL_SHIFT_RULES = [...OP_AMP_STAGE_RULES, adcSettling, inputFault];
 function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
   const notSingle = singleEndedOnly(design);
   if (notSingle !== null) {
-    return { ok: false, problems: [{ path: "topology", message: `offset-to-mid-rail does not apply: ${notSingle}` }] };
+    return { ok: false, problems: [notSingleEnded("offset-to-mid-rail")] };
   }
   const vref = design.adc.reference_v;
   const peak = design.signal.peak_v;
@@ -128,8 +129,7 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
       calibrates_out: true,
     },
   ];
-  const alias = aliasTerm(design);
-  if (alias) fixed.push(alias);
+  fixed.push(...pinTerms(design));
   return {
     ok: true,
     outcome: {

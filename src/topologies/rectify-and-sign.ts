@@ -35,13 +35,14 @@ import type { Design } from "../core/schemas/design.ts";
 import type { Diode } from "../core/schemas/diode.ts";
 import { formatSI, formatVolts } from "../core/units.ts";
 import {
-  aliasTerm,
+  pinTerms,
   driveDisplay,
   DRIVE_FIELDS,
   faultPath,
   rulesFor,
   seriesInOhm,
   singleEndedOnly,
+  notSingleEnded,
 } from "./converter-drive.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { rectifyAndSignChain } from "./rectify-and-sign-sim.ts";
@@ -74,7 +75,7 @@ const RECTIFIER_RULES = [...OP_AMP_STAGE_RULES, zeroCrossing, adcSettling];
 function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation {
   const notSingle = singleEndedOnly(design);
   if (notSingle !== null) {
-    return { ok: false, problems: [{ path: "topology", message: `rectify-and-sign does not apply: ${notSingle}` }] };
+    return { ok: false, problems: [notSingleEnded("rectify-and-sign")] };
   }
   const fe = frontEnd(design);
   if (!fe.ok) return fe;
@@ -301,7 +302,7 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     outcome: {
       derived,
       notes,
-      terms: [...fixedTerms(design, k), ...[aliasTerm(design)].filter((t) => t !== null)],
+      terms: [...fixedTerms(design, k), ...pinTerms(design)],
       effectiveBits: design.adc.bits + Math.log2(W / design.adc.reference_v) + 1,
       conversion: conversion(design, k),
       display: [...display(design, derived), driveDisplay(design)],

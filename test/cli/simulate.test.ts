@@ -61,7 +61,13 @@ describe("railsieve simulate", () => {
         .slice(1)
         .map((r) => r.split(",")[0]),
     );
-    expect([...topologies]).toEqual(["rectify-and-sign", "offset-to-mid-rail"]);
+    // Every registered topology serves this single-ended design.
+    expect([...topologies]).toEqual([
+      "rectify-and-sign",
+      "offset-to-mid-rail",
+      "gained-level-shift",
+      "difference-to-mid",
+    ]);
   });
 });
 

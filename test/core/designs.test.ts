@@ -175,7 +175,7 @@ describe("parseDesignValue", () => {
     ).toMatchInlineSnapshot(`
       {
         "far from any": [
-          "designs/test-design.json: front_end.colour: unknown key (got 'colour', expected one of 'window_v', 'divider_total_ohm', 'resistor_tolerance', 'series', 'rectifier_load_ohm', 'sign_series_ohm')",
+          "designs/test-design.json: front_end.colour: unknown key (got 'colour', expected one of 'window_v', 'divider_total_ohm', 'resistor_tolerance', 'series', 'rectifier_load_ohm', 'sign_series_ohm', 'protection_ohm')",
         ],
         "inside a charge pump": [
           "designs/test-design.json: supply.negative.flying_cap_f: required value is missing (got nothing, expected a number (or a string such as "100k"), greater than 0)",
@@ -216,7 +216,7 @@ describe("parseDesignValue", () => {
           "designs/test-design.json: bom.buffer: not a valid id (got 'OA X', expected lower-case letters, digits and '-', starting with a letter or digit, at most 80 characters)",
         ],
         "bom role far from any": [
-          "designs/test-design.json: bom.op-amp: unknown role (got 'op-amp', expected one of buffer, rectifier, sign, pump-diode, rectifier-diode, clamp-diode, base-clamp-diode, level-shift, reference-buffer)",
+          "designs/test-design.json: bom.op-amp: unknown role (got 'op-amp', expected one of buffer, rectifier, sign, pump-diode, rectifier-diode, clamp-diode, base-clamp-diode, level-shift, reference-buffer, gain-stage, difference)",
         ],
         "bom role typo": [
           "designs/test-design.json: bom.bufer: unknown role (got 'bufer', expected 'buffer')",
@@ -237,7 +237,7 @@ describe("parseDesignValue", () => {
           "designs/test-design.json: front_end.series: unknown value (got 'e24', expected 'E12' or 'E24' or 'E96')",
         ],
         "topology": [
-          "designs/test-design.json: topology: unknown value (got 'rectify', expected 'rectify-and-sign' or 'offset-to-mid-rail' or 'all')",
+          "designs/test-design.json: topology: unknown value (got 'rectify', expected 'rectify-and-sign' or 'offset-to-mid-rail' or 'gained-level-shift' or 'difference-to-mid' or 'all')",
         ],
       }
     `);

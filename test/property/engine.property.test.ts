@@ -31,7 +31,8 @@ const DESIGN_PROBLEM_PATHS = new Set([
   "supply.negative.load_a", // charge pump at or past collapse (SPEC §6)
   "supply.negative.drive_v", // drive below two diode drops
   "front_end.divider_total_ohm", // no E-series divider in range (SPEC §6)
-  "adc.reference_v", // no level-shift network for offset-to-mid-rail
+  "adc.reference_v", // no level-shift network for offset-to-mid-rail (or its gained form, or a difference amplifier)
+  "signal.kind", // a single-ended front end named for a differential source (SPEC §12.2)
 ]);
 
 function evaluate(design: Design, catalogue: Catalogue): DesignResult | undefined {

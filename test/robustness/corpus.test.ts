@@ -379,11 +379,11 @@ describe("messages, pinned", () => {
   it("design-unknown-topology", async () => {
     expect(await seen("design-unknown-topology")).toMatchInlineSnapshot(`
       "validate: exit 2
-      .fixtures/bad/design-unknown-topology/designs/bridge-10v-5v-adc.json: topology: unknown value (got 'full-wave-bridge', expected 'rectify-and-sign' or 'offset-to-mid-rail' or 'all')
+      .fixtures/bad/design-unknown-topology/designs/bridge-10v-5v-adc.json: topology: unknown value (got 'full-wave-bridge', expected 'rectify-and-sign' or 'offset-to-mid-rail' or 'gained-level-shift' or 'difference-to-mid' or 'all')
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      .fixtures/bad/design-unknown-topology/designs/bridge-10v-5v-adc.json: topology: unknown value (got 'full-wave-bridge', expected 'rectify-and-sign' or 'offset-to-mid-rail' or 'all')
+      .fixtures/bad/design-unknown-topology/designs/bridge-10v-5v-adc.json: topology: unknown value (got 'full-wave-bridge', expected 'rectify-and-sign' or 'offset-to-mid-rail' or 'gained-level-shift' or 'difference-to-mid' or 'all')
       railsieve: 1 problem found; nothing was checked"
     `);
   });

@@ -25,7 +25,15 @@ describe("partUses", () => {
   ];
 
   it("has a column for each role that takes the kind", () => {
-    expect(partUses(good, designs).roles).toEqual(["buffer", "rectifier", "sign", "level-shift", "reference-buffer"]);
+    expect(partUses(good, designs).roles).toEqual([
+      "buffer",
+      "rectifier",
+      "sign",
+      "level-shift",
+      "reference-buffer",
+      "gain-stage",
+      "difference",
+    ]);
     expect(partUses(catalogue.byId.get("cmp-test")!, designs).roles).toEqual(["sign"]);
     expect(partUses(catalogue.byId.get("d-test")!, designs).roles).toEqual([
       "pump-diode",
@@ -73,8 +81,9 @@ describe("partUses", () => {
     const cells = partUses(good, all).rows[0]?.cells ?? [];
     for (const role of other?.roles ?? [])
       expect(cells.find((c) => c.role === role.role)?.cell.state, role.role).not.toBe("unused");
+    const others = result.result.comparison?.results.filter((r) => r.topology !== result.result.topology) ?? [];
     expect(placesOf(good.id, "both", all).map((p) => [p.role.role, p.topology])).toEqual(
-      [result.result, other!].flatMap((r) =>
+      [result.result, ...others].flatMap((r) =>
         r.roles.filter((x) => x.kinds.includes("op-amp")).map((x) => [x.role, r.topology]),
       ),
     );

@@ -52,6 +52,8 @@ describe("every demo design and topology, simulated", () => {
       [
         "audio-1v5-20k rectify-and-sign: BEYOND 208 / 33",
         "audio-1v5-20k offset-to-mid-rail: BEYOND 167 / 59",
+        "audio-1v5-20k gained-level-shift: within 50 / 71",
+        "audio-1v5-20k difference-to-mid: within 25 / 74",
         "bridge-10v-5v-adc rectify-and-sign: BEYOND 190 / 114",
         "bus-48v rectify-and-sign: BEYOND 878 / 457",
         "hub-generator-15v rectify-and-sign: BEYOND 1287 / 171",

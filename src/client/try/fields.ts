@@ -2,7 +2,7 @@
 // serves the page's markup (built at build time), the URL codec and the form
 // script, so a field's name, label and unit are written once.
 import type { RoleDef } from "../../core/engine/topology.ts";
-import { LEVEL_SHIFTS, POLICY_DEFAULTS, SERIES, type Role } from "../../core/schemas/design.ts";
+import { LEVEL_SHIFTS, POLICY_DEFAULTS, SERIES, SIGNAL_KINDS, type Role } from "../../core/schemas/design.ts";
 import { ALL_TOPOLOGIES, engine, roleApplies, TOPOLOGY_IDS } from "../../engine.ts";
 
 export type FieldGroup = { id: string; legend: string; hint?: string };
@@ -52,6 +52,7 @@ export type Field = NumberField | TextField | ChoiceField | PartField;
 const isPump = (d: Readonly<Record<string, string>>) => d["supply.negative.kind"] === "charge-pump";
 const isFixed = (d: Readonly<Record<string, string>>) => d["supply.negative.kind"] === "fixed";
 const isNpn = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] === "npn-inverter";
+const isDifferential = (d: Readonly<Record<string, string>>) => d["signal.kind"] === "differential";
 const pulledUp = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] !== "diode-clamp";
 
 /**
@@ -149,6 +150,27 @@ export const FIELDS: readonly Field[] = [
   num("signal.peak_v", "signal", "Peak signal (±)", "V"),
   num("signal.max_frequency_hz", "signal", "Highest signal frequency", "Hz"),
   num("signal.source_ohm", "signal", "Source resistance", "Ω"),
+  {
+    path: "signal.kind",
+    group: "signal",
+    label: "Signal kind",
+    type: "choice",
+    optional: true,
+    choices: [
+      { value: "", label: "single-ended (default)" },
+      ...SIGNAL_KINDS.map((k) => ({ value: k, label: k === "differential" ? "differential (a bridge)" : k })),
+    ],
+  },
+  num("signal.common_mode_min_v", "signal", "Lowest common-mode voltage", "V", { ...plain, when: isDifferential }),
+  num("signal.common_mode_max_v", "signal", "Highest common-mode voltage", "V", { ...plain, when: isDifferential }),
+  num("signal.fault_v", "signal", "Largest fault voltage on the input (±)", "V", {
+    optional: true,
+    hint: "optional; empty leaves input protection unrated",
+  }),
+  num("signal.out_of_band_v", "signal", "Largest content above the band (pickup, noise)", "V", {
+    optional: true,
+    hint: "optional; the alias term takes the peak signal when empty",
+  }),
 
   num("front_end.window_v", "front_end", "Window at the ADC (±)", "V"),
   num("front_end.divider_total_ohm", "front_end", "Divider total resistance", "Ω"),
@@ -162,10 +184,20 @@ export const FIELDS: readonly Field[] = [
   },
   num("front_end.rectifier_load_ohm", "front_end", "Rectifier resistors", "Ω"),
   num("front_end.sign_series_ohm", "front_end", "Series resistor into the sign input", "Ω", { optional: true }),
+  num("front_end.protection_ohm", "front_end", "Series protection resistor at the input", "Ω", { optional: true }),
 
   num("adc.bits", "adc", "ADC resolution", "bits", plain),
   num("adc.reference_v", "adc", "ADC reference", "V"),
   num("adc.reference_tolerance", "adc", "Reference tolerance", "fraction", { ...plain, hint: "0.002 = 0.2 %" }),
+  num("adc.sample_cap_f", "adc", "Sampling capacitor", "F", {
+    optional: true,
+    hint: "optional; with the switch and acquisition time, settling is checked",
+  }),
+  num("adc.switch_ohm", "adc", "Sampling switch resistance", "Ω", { optional: true }),
+  num("adc.acquisition_s", "adc", "Acquisition time", "s", { optional: true }),
+  num("adc.sample_rate_hz", "adc", "Sample rate", "Hz", { optional: true, hint: "optional; gives the alias term" }),
+  num("adc.pin_r_ohm", "adc", "Series resistor at the ADC pin", "Ω", { optional: true }),
+  num("adc.pin_c_f", "adc", "Capacitor at the ADC pin", "F", { optional: true }),
 
   num("logic.vdd_v", "logic", "Logic supply VDD", "V"),
   num("logic.vih_v", "logic", "Logic-high threshold V_IH", "V"),
@@ -185,6 +217,12 @@ export const FIELDS: readonly Field[] = [
   }),
   num("logic.pull_up_ohm", "logic", "Pull-up resistor", "Ω", { optional: true, when: pulledUp }),
   num("logic.pin_cap_f", "logic", "Logic pin capacitance", "F", { optional: true, placeholder: "10p" }),
+  num("logic.injection_ma", "logic", "Clamp current a pin may carry", "mA", {
+    ...plain,
+    optional: true,
+    placeholder: "5",
+    hint: "optional; empty is 5 mA (common practice)",
+  }),
   num("logic.npn_base_ohm", "logic", "NPN base resistor", "Ω", { optional: true, when: isNpn }),
   {
     path: "logic.npn_base_clamp",

@@ -41,7 +41,17 @@ export function compare(results: DesignResult[], catalogue: Catalogue): Comparis
   const best = ranked[0];
   const other = ranked[1];
   if (!best) throw new Error("nothing to compare");
-  return { rows, recommended: best.topology, reason: reasonFor(best, other), results };
+  const rest = ranked.slice(2).map(briefly);
+  const reason = reasonFor(best, other) + (rest.length > 0 ? `; behind them ${rest.join(", ")}` : "");
+  return { rows, recommended: best.topology, reason, results };
+}
+
+/** One clause for a topology further down the ranking. */
+function briefly(row: ComparisonRow): string {
+  if (!row.holds) return `${row.topology} (a role without a fit)`;
+  const verdict =
+    row.budget_verdict === "pass" ? "passes" : row.budget_verdict === "marginal" ? "is marginal" : "fails";
+  return `${row.topology} (budget ${verdict}, worst case ${formatSI(row.budget_worst_case_v, "V")}${row.budget_verdict === "pass" ? `, cost bands ${row.cost_total}` : `, decided by ${row.dominant ?? "its largest term"}`})`;
 }
 
 function reasonFor(best: ComparisonRow, other: ComparisonRow | undefined): string {

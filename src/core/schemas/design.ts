@@ -221,6 +221,8 @@ function designObject(names: DesignNames) {
       common_mode_max_v: si({ min: -100, max: 100 }).optional(),
       // Optional (issue 17, SPEC §12.4): the largest voltage the input may see in a fault, either sign.
       fault_v: si({ above: 0, max: 100000 }).optional(),
+      /** Largest content above the band (pickup, noise) at the input, volts peak; the alias term takes peak_v when absent (issue 17). */
+      out_of_band_v: si({ min: 0, max: 100000 }).optional(),
     }),
     front_end: z.strictObject({
       window_v: si({ above: 0 }),

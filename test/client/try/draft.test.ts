@@ -126,6 +126,20 @@ describe("draftFromInput / rawFromDraft", () => {
       "logic.npn_base_clamp",
       "logic.npn_vebo_v",
       "logic.npn_storage_s",
+      // The optional front-end fields of issue 17.
+      "signal.kind",
+      "signal.common_mode_min_v",
+      "signal.common_mode_max_v",
+      "signal.fault_v",
+      "signal.out_of_band_v",
+      "front_end.protection_ohm",
+      "adc.sample_cap_f",
+      "adc.switch_ohm",
+      "adc.acquisition_s",
+      "adc.sample_rate_hz",
+      "adc.pin_r_ohm",
+      "adc.pin_c_f",
+      "logic.injection_ma",
       ...[
         "buffer",
         "rectifier",
@@ -136,6 +150,8 @@ describe("draftFromInput / rawFromDraft", () => {
         "base-clamp-diode",
         "level-shift",
         "reference-buffer",
+        "gain-stage",
+        "difference",
       ].map((r) => `bom.${r}`),
     ].filter((p) => p !== "policy");
     expect(FIELDS.map((f) => f.path).sort()).toEqual([...new Set(spec)].sort());

@@ -19,7 +19,9 @@ describe("comparison of both topologies", () => {
     expect(byTopology["rectify-and-sign"]?.budget_verdict).toBe("pass");
     expect(byTopology["offset-to-mid-rail"]?.budget_verdict).toBe("fail");
     expect(byTopology["offset-to-mid-rail"]?.dominant).toBe("network-ratio");
-    expect(c?.reason).toContain("network-ratio");
+    // The runner-up gets the full clause; the topologies behind it one each, with their deciding term.
+    expect(c?.reason).toContain("offset-to-mid-rail (budget fails, worst case");
+    expect(c?.reason).toContain("decided by network-ratio");
     expect(e.result.topology).toBe("rectify-and-sign");
   });
 
