@@ -6,13 +6,7 @@ import { loadCatalogue } from "../../src/node/load-data.ts";
 import { DEFAULT_DRAFT } from "../../src/client/try/defaults.ts";
 import { checkDraft } from "../../src/client/try/draft.ts";
 import { pieceHtml, type Piece } from "../../src/view/pieces.ts";
-import {
-  FIRST_ROWS,
-  holdsLine,
-  renderResults,
-  renderRole,
-  resultPieces,
-} from "../../src/view/render-results.ts";
+import { FIRST_ROWS, holdsLine, renderResults, renderRole, resultPieces } from "../../src/view/render-results.ts";
 
 const { catalogue } = loadCatalogue("data");
 

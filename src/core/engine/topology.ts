@@ -5,7 +5,7 @@ import type { Catalogue } from "../catalogue-index.ts";
 import type { Capability } from "../kinds.ts";
 import type { AnyRule, Rails, Stage } from "../rule-kit/types.ts";
 import type { Design } from "../schemas/design.ts";
-import type { ChainBuilder } from "../sim/run-design.ts";
+import type { ChainBuilder } from "./simulate-result.ts";
 import type { BudgetTerm, Conversion, NoiseFigure, RoleTerm } from "./budget.ts";
 import type { Derived, DesignProblem, DisplayGroup, RoleResult } from "./result.ts";
 
