@@ -204,7 +204,13 @@ describe("evaluateDesign: issue 3 acceptance", () => {
 
   it("with no source resistance, 39 kΩ over 13 kΩ: k = 0.25 (issue 3)", () => {
     const r = evaluate({ signal: { peak_v: 10, source_ohm: 0 } });
-    expect(r.derived.divider).toEqual({ top_ohm: 39000, bottom_ohm: 13000, ratio: 0.25, total_ohm: 52000, source_ohm: 0 });
+    expect(r.derived.divider).toEqual({
+      top_ohm: 39000,
+      bottom_ohm: 13000,
+      ratio: 0.25,
+      total_ohm: 52000,
+      source_ohm: 0,
+    });
   });
 
   it("needs no divider when the peak fits the window", () => {

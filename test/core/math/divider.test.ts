@@ -75,11 +75,14 @@ describe("chooseDivider (SPEC §6, IEC 60063 values)", () => {
     [0.25, 100e3, "E96", 600],
     [2.5 / 48, 1e6, "E24", 50e3],
     [0.5, 10e3, "E12", 4700],
-  ] as const)("k_t = %d, total %d Ω, %s, Rs = %d Ω: the loaded search matches brute force", (target, total, series, rs) => {
-    const chosen = chooseDivider(target, total, series, rs);
-    expect(chosen).toEqual(bruteForce(target, total, series, rs));
-    expect(chosen?.ratio).toBeLessThanOrEqual(target * (1 + 1e-12));
-  });
+  ] as const)(
+    "k_t = %d, total %d Ω, %s, Rs = %d Ω: the loaded search matches brute force",
+    (target, total, series, rs) => {
+      const chosen = chooseDivider(target, total, series, rs);
+      expect(chosen).toEqual(bruteForce(target, total, series, rs));
+      expect(chosen?.ratio).toBeLessThanOrEqual(target * (1 + 1e-12));
+    },
+  );
 
   it("with a 1 kΩ source, 10 V into 2.5 V from E24 picks 47 kΩ over 16 kΩ: 16k/(1k + 47k + 16k) = 0.25 exactly", () => {
     // SPEC §11.1: the source is in series with R1, so 39k/13k (k = 13/53 = 0.24528) is no longer the best.
