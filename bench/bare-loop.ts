@@ -28,10 +28,7 @@ import type { RuleId } from "../rules/index.ts";
  * fails the type check when a rule is added without one, and
  * test/bench/bare-loop.test.ts checks the same at run time.
  */
-export const NOT_BENCHMARKED = [
-  { id: "adc-settling", why: "runs only when a design states its converter's sampling input; the bench designs do not" },
-  { id: "input-fault", why: "runs only when a design states signal.fault_v; the bench designs do not" },
-] as const satisfies readonly { id: RuleId; why: string }[];
+export const NOT_BENCHMARKED = [] as const satisfies readonly { id: RuleId; why: string }[];
 
 type Benchmarked = Exclude<RuleId, (typeof NOT_BENCHMARKED)[number]["id"]>;
 
@@ -257,6 +254,38 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
           (stage.vos_multiplier * vos + (c.ib_max_na[i] as number) * 1e-9 * stage.bias_ohm) / stage.output_per_input;
         share(i, limit - error, limit);
       }
+      return;
+    }
+    case "adc-settling": {
+      if (stage.stage !== "op-amp") return;
+      const adc = design.adc;
+      const cs = adc.sample_cap_f ?? 0;
+      const cp = adc.pin_c_f ?? 0;
+      const step = (adc.reference_v * cs) / (cs + cp);
+      const half = adc.reference_v / 2 ** (adc.bits + 1);
+      const nTau = step > half ? Math.log(step / half) : 0;
+      const tauNet = (adc.pin_r_ohm ?? 0) * (cp + cs) + (adc.switch_ohm ?? 0) * cs;
+      const acq = adc.acquisition_s ?? 0;
+      for (let i = 0; i < n; i++) {
+        const tau = stage.noise_gain / (2 * Math.PI * (c.gbw_mhz[i] as number) * 1e6) + tauNet;
+        share(i, acq - nTau * tau, acq);
+      }
+      return;
+    }
+    case "input-fault": {
+      if (stage.stage === "diode") return;
+      const path = stage.fault;
+      const fault = design.signal.fault_v ?? 0;
+      const limit = design.logic.injection_ma === undefined ? 5e-3 : design.logic.injection_ma * 1e-3;
+      let current = 0;
+      if (path) {
+        for (const v of [fault, -fault]) {
+          const vth = path.gain * v + path.offset_v;
+          const excess = Math.max(vth - (P + 0.3), N - 0.3 - vth, 0);
+          current = Math.max(current, path.ohm > 0 ? excess / path.ohm : excess > 0 ? Infinity : 0);
+        }
+      }
+      for (let i = 0; i < n; i++) share(i, limit - current, limit);
       return;
     }
     case "bandwidth": {
@@ -507,6 +536,8 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
 
 /** Every rule with a case above; a Record over the union, so a missing key fails the type check. */
 const CASES: Record<Benchmarked, true> = {
+  "adc-settling": true,
+  "input-fault": true,
   "supply-range": true,
   "input-common-mode": true,
   "output-swing": true,

@@ -1,4 +1,5 @@
 // Human-readable report of one evaluated design, readable at 80 columns.
+import { needsCaution } from "../core/caution.ts";
 import type { PartResult } from "../core/engine/evaluate-part.ts";
 import type { DesignResult, RoleResult } from "../core/engine/result.ts";
 import type { Verdict } from "../core/engine/types.ts";
@@ -33,7 +34,7 @@ function renderComparison(result: DesignResult, io: Pick<Io, "color">): string {
     );
     out.push(
       wrap(
-        `budget ${row.budget_verdict} (worst case ${formatSI(row.budget_worst_case_v, "V")}, largest term ${row.dominant ?? "none"}); ${row.effective_bits.toFixed(1)} effective bits; ${row.part_count} parts, cost bands ${row.cost_total}`,
+        `budget ${row.budget_verdict} (worst case ${formatSI(row.budget_worst_case_v, "V")}, largest term ${row.dominant ?? "none"}); design ${row.state}; codes spanned ${row.codes_spanned_bits.toFixed(1)} bits; ${row.part_count} parts, cost bands ${row.cost_total}`,
         WIDTH,
         "      ",
         "    ",
@@ -55,7 +56,7 @@ function renderSingle(result: DesignResult, io: Pick<Io, "color">): string {
     for (const row of group.rows) out.push(wrap(`${row.label}: ${row.value}`, WIDTH, "        ", "    "));
   }
   for (const note of result.notes) out.push(wrap(`note: ${note}`, WIDTH, "    ", "  "));
-  if (d.signal.peak_v > 30) {
+  if (needsCaution(d)) {
     out.push(
       wrap(
         "caution: voltages above extra-low-voltage limits need isolation and protection designed to local codes and licensed practice, which this guide does not assess.",
@@ -93,7 +94,12 @@ function renderBudget(result: DesignResult): string[] {
     ),
   );
   if (b.missing.length > 0) out.push(`    incomplete: no part for ${b.missing.join(", ")}, so its errors are unknown`);
-  out.push(`    effective ADC bits used: ${b.effective_bits.toFixed(2)}`);
+  if (b.noise) {
+    out.push(
+      `    noise ${formatSI(b.noise.rms_v, "V")} rms at the input; SINAD ${b.noise.sinad_db.toFixed(2)} dB, ENOB ${b.noise.enob.toFixed(2)} bits (IEEE 1241)`,
+    );
+  }
+  out.push(`    codes spanned by the signal: ${b.codes_spanned_bits.toFixed(2)} bits`);
   const c = result.conversion;
   out.push(
     "",

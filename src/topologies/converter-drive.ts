@@ -3,7 +3,7 @@
 // term, and the display rows that say what is checked and what to fill in.
 import { adcSettling } from "../../rules/adc-settling.ts";
 import { inputFault } from "../../rules/input-fault.ts";
-import type { BudgetTerm } from "../core/engine/budget.ts";
+import { budgetTerm, type BudgetTerm } from "../core/engine/budget.ts";
 import type { DisplayGroup, DisplayRow } from "../core/engine/result.ts";
 import { DEFAULT_INJECTION_A } from "../core/math/clamp-current.ts";
 import { rcAttenuation } from "../core/math/settling.ts";
@@ -74,24 +74,33 @@ export function pinTerms(design: Design): BudgetTerm[] {
   const c = design.adc.pin_c_f ?? 0;
   const fmax = design.signal.max_frequency_hz;
   if (r > 0 && c > 0) {
-    terms.push({
-      name: "pin-rc",
-      label: "pin RC gain error at f max",
-      v: (1 - rcAttenuation(fmax, r, c)) * design.signal.peak_v,
-      calibrates_out: false,
-    });
+    const h = rcAttenuation(fmax, r, c);
+    const e = (1 - h) * design.signal.peak_v;
+    terms.push(
+      budgetTerm(
+        "pin-rc",
+        "pin RC gain error at f max",
+        e,
+        `(1 − 1/√(1 + (f/fc)²)) × peak, fc = 1/(2π·${formatSI(r, "Ω")}·${formatSI(c, "F")}) = ${formatSI(1 / (2 * Math.PI * r * c), "Hz")}: (1 − ${Number(h.toPrecision(6))}) × ${formatSI(design.signal.peak_v, "V")} = ${formatSI(e, "V")}`,
+        "none",
+      ),
+    );
   }
   const fs = design.adc.sample_rate_hz;
   if (fs !== undefined) {
     const fa = Math.abs(fs - fmax);
     const h = rcAttenuation(fa, r, c);
     const stated = design.signal.out_of_band_v;
-    terms.push({
-      name: "alias",
-      label: `alias: ${stated === undefined ? "signal-size content (no signal.out_of_band_v)" : "out-of-band content"} at sample rate − f max (${formatSI(fa, "Hz")}) after the pin RC (×${Number(h.toPrecision(3))})`,
-      v: (stated ?? design.signal.peak_v) * h,
-      calibrates_out: false,
-    });
+    const size = stated ?? design.signal.peak_v;
+    terms.push(
+      budgetTerm(
+        "alias",
+        `alias: ${stated === undefined ? "signal-size content (no signal.out_of_band_v)" : "out-of-band content"} at sample rate − f max`,
+        size * h,
+        `content × |H(f_s − f_max)| of the pin RC = ${formatSI(size, "V")} × ${Number(h.toPrecision(4))} at ${formatSI(fa, "Hz")} = ${formatSI(size * h, "V")}`,
+        "none",
+      ),
+    );
   }
   return terms;
 }

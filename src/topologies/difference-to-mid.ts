@@ -7,7 +7,7 @@ import { adcSettling } from "../../rules/adc-settling.ts";
 import { bandwidth } from "../../rules/bandwidth.ts";
 import { inputFault } from "../../rules/input-fault.ts";
 import { offset } from "../../rules/offset.ts";
-import type { BudgetTerm, RoleTerm } from "../core/engine/budget.ts";
+import { budgetTerm, type BudgetTerm, type RoleTerm } from "../core/engine/budget.ts";
 import type { Derived, DisplayGroup } from "../core/engine/result.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import { worstClampCurrent } from "../core/math/clamp-current.ts";
@@ -22,7 +22,8 @@ import {
 import { fillGain } from "../core/math/gained-level-shift.ts";
 import type { FaultPath, OpAmpStage, Rails } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
-import { formatVolts } from "../core/units.ts";
+import { formatSI, formatVolts } from "../core/units.ts";
+import { converterTerms } from "./converter-terms.ts";
 import { pinTerms, driveDisplay, DRIVE_FIELDS, faultPath, rulesFor, seriesInOhm } from "./converter-drive.ts";
 import { differenceToMidChain } from "./difference-to-mid-sim.ts";
 import { railRows, ratio, si } from "./display.ts";
@@ -121,27 +122,25 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     thevenin_ohm: ((amp.r_in_ohm + amp.source_ohm) * amp.r_fb_ohm) / (amp.r_in_ohm + amp.source_ohm + amp.r_fb_ohm),
     adc_step_at_input_v: vref / 2 ** design.adc.bits / G,
   };
-  const { bits, reference_tolerance } = design.adc;
+  const { bits } = design.adc;
+  const tolErr = differenceToleranceError(amp, t, peak, ref);
+  const cmErr = Number.isFinite(cmrr) ? plus.cm_max_abs / cmrr : 0;
   const terms: BudgetTerm[] = [
-    {
-      name: "quantization",
-      label: "quantization, half a step",
-      v: (0.5 * (vref / 2 ** bits)) / G,
-      calibrates_out: false,
-    },
-    { name: "reference", label: "ADC reference tolerance", v: reference_tolerance * peak, calibrates_out: true },
-    {
-      name: "resistor-gain",
-      label: "resistor tolerance in the gain and REF paths (worst corner)",
-      v: differenceToleranceError(amp, t, peak, ref),
-      calibrates_out: false,
-    },
-    {
-      name: "common-mode",
-      label: `common-mode error: |Vcm| ${formatVolts(plus.cm_max_abs)} / worst-case CMRR (1+G)/(4t) = ${Number(cmrr.toPrecision(4))} (${toDecibels(cmrr).toFixed(1)} dB)`,
-      v: Number.isFinite(cmrr) ? plus.cm_max_abs / cmrr : 0,
-      calibrates_out: false,
-    },
+    ...converterTerms(design, G, peak),
+    budgetTerm(
+      "resistor-gain",
+      "resistor tolerance in the gain and REF paths (worst corner)",
+      tolErr,
+      `R1…R4 ± ${Number((t * 100).toPrecision(4))} % at the worst of 16 corners, the reading's error at ±${formatVolts(peak)} with no common mode: ${formatSI(tolErr, "V")}`,
+      "two-point",
+    ),
+    budgetTerm(
+      "common-mode",
+      `common-mode error, worst-case CMRR (1+G)/(4t) = ${Number(cmrr.toPrecision(4))} (${toDecibels(cmrr).toFixed(1)} dB)`,
+      cmErr,
+      `|Vcm|max / CMRR = ${formatVolts(plus.cm_max_abs)} / ((1 + ${Number(G.toPrecision(4))})/(4 × ${t})) = ${formatSI(cmErr, "V")}`,
+      "none",
+    ),
   ];
   terms.push(...pinTerms(design));
   const perCode = vref / 2 ** bits / G;
@@ -155,7 +154,7 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
         "REF is taken as V_ref/2 from a low-impedance source (a buffered half of the reference); resistance in series with REF adds to R4 and spoils the common-mode rejection.",
       ],
       terms,
-      effectiveBits: bits + Math.log2((outHigh - outLow) / vref),
+      codesSpannedBits: bits + Math.log2((outHigh - outLow) / vref),
       conversion: {
         volts_per_code: perCode,
         offset_v: offsetIn,

@@ -8,7 +8,7 @@ import { adcSettling } from "../../rules/adc-settling.ts";
 import { bandwidth } from "../../rules/bandwidth.ts";
 import { inputFault } from "../../rules/input-fault.ts";
 import { offset } from "../../rules/offset.ts";
-import type { BudgetTerm, RoleTerm } from "../core/engine/budget.ts";
+import { budgetTerm, type BudgetTerm, type RoleTerm } from "../core/engine/budget.ts";
 import type { Derived, DisplayGroup } from "../core/engine/result.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import {
@@ -19,7 +19,8 @@ import {
 } from "../core/math/gained-level-shift.ts";
 import type { OpAmpStage, Rails } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
-import { formatVolts } from "../core/units.ts";
+import { formatSI, formatVolts } from "../core/units.ts";
+import { converterTerms } from "./converter-terms.ts";
 import {
   pinTerms,
   driveDisplay,
@@ -93,27 +94,25 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     level_shift: { ...n, output_low_v: nodeLow, output_high_v: nodeHigh },
   };
   const tol = gainedToleranceError(x, design.front_end.resistor_tolerance, peak, vref);
-  const { bits, reference_tolerance } = design.adc;
+  const { bits } = design.adc;
+  const t = design.front_end.resistor_tolerance;
+  const pct = `${Number((t * 100).toPrecision(4))} %`;
   const terms: BudgetTerm[] = [
-    {
-      name: "quantization",
-      label: "quantization, half a step",
-      v: (0.5 * (vref / 2 ** bits)) / x.gain,
-      calibrates_out: false,
-    },
-    { name: "reference", label: "ADC reference tolerance", v: reference_tolerance * peak, calibrates_out: true },
-    {
-      name: "network-gain",
-      label: "network and gain resistors, gain part (worst corner)",
-      v: tol.gain_v,
-      calibrates_out: true,
-    },
-    {
-      name: "network-offset",
-      label: "network and gain resistors, offset part (worst corner)",
-      v: tol.offset_v,
-      calibrates_out: false,
-    },
+    ...converterTerms(design, x.gain, peak),
+    budgetTerm(
+      "network-gain",
+      "network and gain resistors, gain part (worst corner)",
+      tol.gain_v,
+      `R1, R2, R3, Rf, Rg ± ${pct} at the worst of 32 corners: |ΔA|/A × peak = ${formatSI(tol.gain_v, "V")}`,
+      "one-point",
+    ),
+    budgetTerm(
+      "network-offset",
+      "network and gain resistors, offset part (worst corner)",
+      tol.offset_v,
+      `R1, R2, R3, Rf, Rg ± ${pct} at the worst of 32 corners: |Δ(Gs·b)|/A = ${formatSI(tol.offset_v, "V")}`,
+      "two-point",
+    ),
   ];
   terms.push(...pinTerms(design));
   const perCode = vref / 2 ** bits / x.gain;
@@ -127,7 +126,7 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
         "The network draws its offset from the ADC reference directly; a reference that cannot drive R2 needs a buffer (see offset-to-mid-rail's reference buffer).",
       ],
       terms,
-      effectiveBits: bits + Math.log2((x.output_high_v - x.output_low_v) / vref),
+      codesSpannedBits: bits + Math.log2((x.output_high_v - x.output_low_v) / vref),
       conversion: {
         volts_per_code: perCode,
         offset_v: offsetIn,

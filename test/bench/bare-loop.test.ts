@@ -24,7 +24,8 @@ describe.each(catalogues)("bare loop against the engine, %s catalogue", (_label,
     const plans = planOf(design, catalogue);
     const out = outputsFor(plans);
     bareLoop(plans, out);
-    expect(plans.length).toBeGreaterThanOrEqual(design.topology === "all" ? 6 : 2);
+    // The front ends of issue 17 have one role each.
+    expect(plans.length).toBeGreaterThanOrEqual(design.topology === "all" ? 6 : 1);
     const wrong: string[] = [];
     let checked = 0;
     plans.forEach((plan, r) => {

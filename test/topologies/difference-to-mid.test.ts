@@ -50,6 +50,7 @@ describe("difference-to-mid", () => {
     expect(e.result.derived.ratio).toBe(1);
     const term = e.result.budget.terms.find((t) => t.name === "common-mode");
     expect(term?.label).toContain("= 500 (54.0 dB)");
+    expect(term?.removed_by).toBe("none");
     // 1.70 V / 500 = 3.40 mV.
     expect(term?.v).toBeCloseTo(1.7 / 500, 12);
     expect(term?.calibrates_out).toBe(false);

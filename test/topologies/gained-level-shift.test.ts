@@ -45,7 +45,7 @@ describe("gained-level-shift", () => {
   const rows = Object.fromEntries(r.display.flatMap((g) => g.rows.map((row) => [row.label, row.value])));
 
   it("acceptance: the signal spans at least 80 % of the codes, inside the 0.1 V margins", () => {
-    const span = r.budget.effective_bits - 12;
+    const span = r.budget.codes_spanned_bits - 12;
     // effective bits = N + log2(span / V_ref): 80 % of the codes is N − 0.322.
     expect(span).toBeGreaterThanOrEqual(Math.log2(0.8));
     const [low, high] = (rows["Output span for ±peak"] ?? "").split(" … ").map((v) => Number.parseFloat(v));

@@ -4,7 +4,7 @@
 import { describe, expect, it } from "vitest";
 import { evaluateDesign } from "../../src/engine.ts";
 import { loadDataSet } from "../../src/node/load-data.ts";
-import { renderSimulationSection } from "../../src/render/simulation-section.ts";
+import { renderSimulationSection } from "../../src/view/simulation-section.ts";
 import { simulateDesign } from "../../src/simulation.ts";
 import { formatSI } from "../../src/core/units.ts";
 
@@ -50,17 +50,19 @@ describe("every demo design and topology, simulated", () => {
     });
     expect(table).toMatchInlineSnapshot(`
       [
-        "audio-1v5-20k rectify-and-sign: BEYOND 208 / 33",
+        "audio-1v5-20k rectify-and-sign: BEYOND 201 / 32",
         "audio-1v5-20k offset-to-mid-rail: BEYOND 167 / 59",
         "audio-1v5-20k gained-level-shift: within 50 / 71",
         "audio-1v5-20k difference-to-mid: within 25 / 74",
-        "bridge-10v-5v-adc rectify-and-sign: BEYOND 190 / 114",
+        "bridge-10v-5v-adc rectify-and-sign: BEYOND 283 / 114",
+        "bridge-20mv-on-3v3 difference-to-mid: within 0 / 0",
         "bus-48v rectify-and-sign: BEYOND 878 / 457",
-        "hub-generator-15v rectify-and-sign: BEYOND 1287 / 171",
+        "hub-generator-15v rectify-and-sign: BEYOND 1286 / 171",
+        "pickup-0v2-on-1v8 gained-level-shift: within 0 / 2",
         "probe-0v5-10meg rectify-and-sign: within 2 / 2",
         "thermoelectric-3v-on-3v3 rectify-and-sign: BEYOND 38 / 31",
         "vibration-2v-split-2v5 rectify-and-sign: BEYOND 77 / 53",
-        "wave-flume-6v-npn rectify-and-sign: within 30 / 40",
+        "wave-flume-6v-npn rectify-and-sign: within 30 / 41",
       ]
     `);
   });

@@ -223,6 +223,8 @@ function designObject(names: DesignNames) {
       fault_v: si({ above: 0, max: 100000 }).optional(),
       /** Largest content above the band (pickup, noise) at the input, volts peak; the alias term takes peak_v when absent (issue 17). */
       out_of_band_v: si({ min: 0, max: 100000 }).optional(),
+      /** Optional (SPEC §11.1): the source resistance's tolerance, a budget term of its own. */
+      source_tolerance: si({ min: 0, max: 1 }).optional(),
     }),
     front_end: z.strictObject({
       window_v: si({ above: 0 }),
@@ -230,6 +232,8 @@ function designObject(names: DesignNames) {
       resistor_tolerance: si({ min: 0, max: 0.2 }),
       series: oneOf(SERIES),
       rectifier_load_ohm: si({ above: 0 }),
+      /** Optional (SPEC §11.2): the rectifier's resistors' tolerance; resistor_tolerance when absent. */
+      rectifier_tolerance: si({ min: 0, max: 0.2 }).optional(),
       /** Series resistor into the sign input: limits the current when its input clamps conduct (issue 21). */
       sign_series_ohm: si({ above: 0 }).optional(),
       /** Series resistor between the input connector and the front end: limits the fault current into clamps (issue 17). */
@@ -252,6 +256,11 @@ function designObject(names: DesignNames) {
       pin_r_ohm: si({ min: 0, max: 1e7 }).optional(),
       /** Optional capacitor from the pin to ground (the charge reservoir). */
       pin_c_f: si({ min: 0, max: 1e-3 }).optional(),
+      // Optional (SPEC §11.10): the reference's tempco and the converter's own errors.
+      reference_tempco_ppm_per_c: si({ min: 0, max: 10000 }).optional(),
+      offset_lsb: si({ min: 0, max: 1e6 }).optional(),
+      gain_error: si({ min: 0, max: 0.5 }).optional(),
+      inl_lsb: si({ min: 0, max: 1e6 }).optional(),
     }),
     logic: z.strictObject({
       vdd_v: si({ above: 0, max: 100 }),

@@ -4,7 +4,7 @@ import type { PartResult } from "../core/engine/evaluate-part.ts";
 import type { DesignResult, RoleResult } from "../core/engine/result.ts";
 import { POLICY_DEFAULTS, type Design, type Policy, type Role } from "../core/schemas/design.ts";
 import { formatSI, formatVolts } from "../core/units.ts";
-import { trimZeros } from "../render/trim-zeros.ts";
+import { trimZeros } from "./trim-zeros.ts";
 
 export type ValueRow = { label: string; value: string; partId?: string; role?: Role };
 // A topology's DisplayGroup has the same shape, so derived values need no copying.
@@ -18,7 +18,7 @@ const celsius = (c: number) => `${String(c).replace("-", "\u2212")}\u00a0°C`;
 const signed = (v: number) => formatVolts(v, { signed: true });
 const percent = (fraction: number) => `${Number((fraction * 100).toPrecision(3))} %`;
 
-export const HIGH_VOLTAGE_V = 30;
+export { HIGH_VOLTAGE_V } from "../core/caution.ts";
 
 /**
  * Fits a design page shows in full (rail diagram, findings, arithmetic) per
@@ -55,9 +55,7 @@ export function roleView(role: RoleResult, count = FITS_IN_FULL): RoleView {
 }
 
 /** SPEC §9: a visible caution above extra-low-voltage levels. */
-export function needsCaution(design: Design): boolean {
-  return design.signal.peak_v > HIGH_VOLTAGE_V;
-}
+export { needsCaution } from "../core/caution.ts";
 
 export const CAUTION_TEXT =
   "Voltages above extra-low-voltage limits need isolation and protection designed to local codes and licensed practice, which this guide does not assess.";
