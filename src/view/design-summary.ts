@@ -15,13 +15,17 @@ export type RoleState = {
   optional: boolean;
 };
 
+/** SPEC §11.11's design state: the words the CLI uses (src/cli/design-state.ts), until the engine gives them. */
+export type DesignVerdict = "holds" | "marginal" | "fails";
+
 export type DesignSummary =
-  { ok: false; line: string } | { ok: true; holds: boolean; line: string; roles: RoleState[] };
+  | { ok: false; line: string; verdict: "fails" }
+  | { ok: true; holds: boolean; verdict: DesignVerdict; line: string; roles: RoleState[] };
 
 export function summarizeDesign(entry: DesignEntry): DesignSummary {
   if (!entry.evaluation.ok) {
     const n = entry.evaluation.problems.length;
-    return { ok: false, line: `Could not be evaluated: ${n} problem${n === 1 ? "" : "s"} in the design file.` };
+    return { ok: false, verdict: "fails", line: `Could not be evaluated: ${n} problem${n === 1 ? "" : "s"} in the design file.` };
   }
   const result = entry.evaluation.result;
   const roles: RoleState[] = result.roles.map((r) => ({
@@ -51,7 +55,10 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
       ? "Every role has a fit and every BOM part fits."
       : `${capitalize(problems.join("; ") || "the design does not hold")}.`
   } ${budget}${compared}`;
-  return { ok: true, holds, line, roles };
+  // Every role fits and the budget's worst case fits: holds; only its root-sum-square: marginal; else fails.
+  const verdict: DesignVerdict =
+    !holds || b.missing.length > 0 || b.verdict === "fail" ? "fails" : b.verdict === "marginal" ? "marginal" : "holds";
+  return { ok: true, holds, verdict, line, roles };
 }
 
 function list(items: string[]): string {
