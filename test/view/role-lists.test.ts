@@ -73,9 +73,9 @@ describe("rejectionsPiece", () => {
   it("heads each group with its count, shortfall range and an example, then one line per part", () => {
     const html = pieceHtml(rejectionsPiece(input(buffer())));
     expect(html).toContain(
-      '<p class="reject-head"><a href="/sub/rules/#rule-input-common-mode">input-common-mode</a>: <strong>2</strong> parts fail, short by 0.10 V to 0.50 V. For example oa-icm-1: ',
+      '<p class="reject-head"><a href="/sub/rules/#rule-input-common-mode">input-common-mode</a>: <strong>2</strong> parts fail, short by 100 mV to 500 mV. For example oa-icm-1: ',
     );
-    expect(html).toContain('<li><a href="/sub/parts/oa-icm-5/">oa-icm-5</a> 0.50 V short</li>');
+    expect(html).toContain('<li><a href="/sub/parts/oa-icm-5/">oa-icm-5</a> 500 mV short</li>');
     expect(html).toContain("<strong>1</strong> part cannot be checked (not rated).");
     expect(html).toContain('<li><a href="/sub/parts/oa-unrated/">oa-unrated</a> not rated</li>');
   });

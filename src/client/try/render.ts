@@ -1,12 +1,13 @@
 // Puts one evaluation on the page. Each piece of the results (pieces.ts: a
 // role, a row, a cell …) keeps one element across edits, matched by key, and
 // only pieces whose HTML changed are touched. A changed piece is parsed (one
-// parse per table context) and morphed into the live element by morphdom, so
-// the browser restyles and re-lays-out only the text and attributes that moved
+// parse per table context) and merged node by node into the live element
+// (patchChildren: a keyed patch on the DOM, never on the HTML text), so the
+// browser restyles and re-lays-out only the text and attributes that moved
 // rather than every row of every table (style and layout of freshly parsed rows
-// were most of an edit's cost). HTML comes from src/view/render-results.ts,
-// where every piece of text is escaped.
-import morphdom from "morphdom";
+// were most of an edit's cost). A maintained morphing library would do the
+// same merge for about 3 KB more of the try page's script, over its budget.
+// HTML comes from src/view/render-results.ts, where every piece is escaped.
 import type { DesignResult } from "../../core/engine/result.ts";
 import { pieceHtml, type Piece } from "../../view/pieces.ts";
 import { resultPieces, type ViewState } from "../../view/render-results.ts";
@@ -127,7 +128,8 @@ function apply(job: Job, fresh: Element): void {
     return;
   }
   // A leaf takes the whole new element; a container only its own attributes (its children are pieces, drawn above).
-  morphdom(job.el, fresh, { childrenOnly: false, onBeforeElChildrenUpdated: () => "html" in job.piece });
+  patchAttributes(job.el, fresh);
+  if ("html" in job.piece) patchChildren(job.el, fresh);
   drawn.set(job.el, { key: job.piece.key, source: sourceOf(job.piece) });
 }
 
@@ -140,5 +142,43 @@ function remember(el: Element, piece: Piece): void {
     if (child === null) return;
     remember(child, p);
     child = child.nextElementSibling;
+  }
+}
+
+function patchAttributes(live: Element, next: Element): void {
+  if (!live.hasAttributes() && !next.hasAttributes()) return;
+  for (const name of live.getAttributeNames()) if (!next.hasAttribute(name)) live.removeAttribute(name);
+  for (const name of next.getAttributeNames()) {
+    const value = next.getAttribute(name) ?? "";
+    if (live.getAttribute(name) !== value) live.setAttribute(name, value);
+  }
+}
+
+/**
+ * Makes `live`'s children equal to `next`'s (a parsed copy of the new HTML),
+ * keeping live nodes of the same tag in place and changing only text and
+ * attributes that differ; anything else is taken over from `next`.
+ */
+function patchChildren(live: Node, next: Node): void {
+  let cursor = live.firstChild;
+  for (let incoming = next.firstChild; incoming !== null;) {
+    const following = incoming.nextSibling;
+    if (cursor !== null && cursor.nodeName === incoming.nodeName) {
+      if (cursor.nodeType === Node.ELEMENT_NODE) {
+        patchAttributes(cursor as Element, incoming as Element);
+        patchChildren(cursor, incoming);
+      } else if (cursor.nodeValue !== incoming.nodeValue) {
+        cursor.nodeValue = incoming.nodeValue;
+      }
+      cursor = cursor.nextSibling;
+    } else {
+      live.insertBefore(incoming, cursor);
+    }
+    incoming = following;
+  }
+  while (cursor !== null) {
+    const following = cursor.nextSibling;
+    live.removeChild(cursor);
+    cursor = following;
   }
 }
