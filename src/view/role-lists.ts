@@ -20,12 +20,17 @@ export type RoleListInput = {
   designId: string;
   role: RoleResult;
   links: ListLinks;
-    /** Rows (and lines per rejection group) shown before a "show all" button; every one when absent. */
+  /** Rows (and lines per rejection group) shown before a "show all" button; every one when absent. */
   first?: number;
   /** Lists the reader opened, by key "<role>:fits" / "<role>:rejected". */
   expanded?: ReadonlySet<string>;
   /** The try page marks each row with its part and verdict (data-part, data-verdict); the design page saves the bytes. */
   dataAttributes?: boolean;
+  /**
+   * Rejection groups as their heads only (count, shortfall range, an example): for a topology a design
+   * page shows only for comparison, whose parts each have their line on their own page.
+   */
+  headsOnly?: boolean;
 };
 
 /** The ranking of SPEC §7, said once where the fits are listed; each fit shows its own keys. */
@@ -51,9 +56,7 @@ function partLink(result: PartResult, { role, links }: RoleListInput): string {
 }
 
 function rowAttributes(result: PartResult, input: RoleListInput): string {
-  return input.dataAttributes
-    ? ` data-part="${escapeHtml(result.part.id)}" data-verdict="${result.verdict}"`
-    : "";
+  return input.dataAttributes ? ` data-part="${escapeHtml(result.part.id)}" data-verdict="${result.verdict}"` : "";
 }
 
 /** A fit's own ranking keys, as the row shows them. */
@@ -103,7 +106,7 @@ export function fitsPiece(input: RoleListInput, from: number, caption: string, i
       children: [
         { key: "rank", html: `<td class="num">${from + i}</td>` },
         { key: "part", html: `<th scope="row">${partLink(r, input)}</th>` },
-        { key: "verdict", html: `<td class="verdict-cell">${renderVerdict(r.verdict)}</td>` },
+        { key: "verdict", html: `<td>${renderVerdict(r.verdict)}</td>` },
         { key: "status", html: `<td>${escapeHtml(k.status)}</td>` },
         { key: "cost", html: `<td>${escapeHtml(k.cost)}</td>` },
         { key: "margin", html: `<td class="num">${escapeHtml(k.margin)}</td>` },
@@ -207,9 +210,7 @@ function groupSummary(g: RejectionGroup, link: (rule: string) => string): string
       : `, short by ${quantity(g.shortfall.low, g.shortfall.unit)} to ${quantity(g.shortfall.high, g.shortfall.unit)}`
     : "";
   const example = g.parts[0];
-  const eg = example
-    ? ` For example ${escapeHtml(example.result.part.id)}: ${escapeHtml(example.finding.reason)}`
-    : "";
+  const eg = example ? ` For example ${escapeHtml(example.result.part.id)}: ${escapeHtml(example.finding.reason)}` : "";
   return (
     `<p class="reject-head"><a href="${escapeHtml(link(g.rule))}">${escapeHtml(g.rule)}</a>: ` +
     `<strong>${n}</strong> part${n === 1 ? "" : "s"} ${what}${escapeHtml(range)}.${eg}</p>`
@@ -222,7 +223,8 @@ export function rejectionsPiece(input: RoleListInput): Container {
   const groups = rejectionGroups(input.role);
   const largest = Math.max(0, ...groups.map((g) => g.parts.length));
   const children: Piece[] = groups.map((g) => {
-    const lines: Piece[] = g.parts.slice(0, shown(input, key, g.parts.length)).map(({ result, finding }) => ({
+    const count = input.headsOnly ? 0 : shown(input, key, g.parts.length);
+    const lines: Piece[] = g.parts.slice(0, count).map(({ result, finding }) => ({
       key: result.part.id,
       html: `<li${rowAttributes(result, input)}>${partLink(result, input)} ${escapeHtml(shortLine(finding))}</li>`,
     }));
@@ -232,7 +234,9 @@ export function rejectionsPiece(input: RoleListInput): Container {
       close: "</section>",
       children: [
         { key: "head", html: groupSummary(g, input.links.rulesUrl) },
-        { key: "parts", open: `<ul class="part-lines">`, close: "</ul>", children: lines },
+        ...(lines.length > 0
+          ? [{ key: "parts", open: `<ul class="part-lines">`, close: "</ul>", children: lines }]
+          : []),
       ],
     };
   });

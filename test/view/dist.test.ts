@@ -335,7 +335,8 @@ describe("a long shortlist: vibration-2v-split-2v5's buffer", () => {
     expect(listedIn(top ?? "", /<li class="result result-[a-z]+" id="buffer--([a-z0-9-]+)"/g)).toEqual(
       buffer.fits.slice(0, FITS_IN_FULL).map((p) => p.part.id),
     );
-    expect(top).toContain(escapeHtml(RANKING_KEYS));
+    // The ranking's keys are stated once, in the page's summary; each row shows its own.
+    expect(page(`${BASE}designs/vibration-2v-split-2v5/`).split(escapeHtml(RANKING_KEYS)).length - 1).toBe(1);
     const restHtml = (rest ?? "").slice(0, (rest ?? "").indexOf("</table>"));
     const rows = [
       ...restHtml.matchAll(/<tr><td class="num">(\d+)<\/td><th scope="row"><a href="[^"]*">([a-z0-9-]+)<\/a>/g),
