@@ -1,5 +1,6 @@
 // The one-line state of a design for the home page and the design page head.
 import { designHolds } from "../core/engine/result.ts";
+import type { DesignState } from "../core/engine/design-verdict.ts";
 import { formatSI } from "../core/units.ts";
 import type { Role } from "../core/schemas/design.ts";
 import type { DesignEntry } from "./design-entry.ts";
@@ -15,8 +16,8 @@ export type RoleState = {
   optional: boolean;
 };
 
-/** SPEC §11.11's design state: the words the CLI uses (src/cli/design-state.ts), until the engine gives them. */
-export type DesignVerdict = "holds" | "marginal" | "fails";
+/** SPEC §11.11's design state, as the engine gives it (core/engine/design-verdict.ts). */
+export type DesignVerdict = DesignState;
 
 export type DesignSummary =
   | { ok: false; line: string; verdict: "fails" }
@@ -25,7 +26,11 @@ export type DesignSummary =
 export function summarizeDesign(entry: DesignEntry): DesignSummary {
   if (!entry.evaluation.ok) {
     const n = entry.evaluation.problems.length;
-    return { ok: false, verdict: "fails", line: `Could not be evaluated: ${n} problem${n === 1 ? "" : "s"} in the design file.` };
+    return {
+      ok: false,
+      verdict: "fails",
+      line: `Could not be evaluated: ${n} problem${n === 1 ? "" : "s"} in the design file.`,
+    };
   }
   const result = entry.evaluation.result;
   const roles: RoleState[] = result.roles.map((r) => ({
@@ -55,10 +60,7 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
       ? "Every role has a fit and every BOM part fits."
       : `${capitalize(problems.join("; ") || "the design does not hold")}.`
   } ${budget}${compared}`;
-  // Every role fits and the budget's worst case fits: holds; only its root-sum-square: marginal; else fails.
-  const verdict: DesignVerdict =
-    !holds || b.missing.length > 0 || b.verdict === "fail" ? "fails" : b.verdict === "marginal" ? "marginal" : "holds";
-  return { ok: true, holds, verdict, line, roles };
+  return { ok: true, holds, verdict: result.verdict.state, line, roles };
 }
 
 function list(items: string[]): string {

@@ -40,7 +40,8 @@ describe("derivedGroups", () => {
       "Target ratio = window ÷ peak": "0.25",
       "Top resistor R1 (E24)": "30 kΩ",
       "Bottom resistor R2 (E24)": "10 kΩ",
-      "Ratio k = R2 / (R1 + R2)": "0.25",
+      "Source resistance Rs, in series with R1": "0 Ω",
+      "Ratio k = R2 / (Rs + R1 + R2)": "0.25",
       "Total R1 + R2": "40 kΩ, as asked",
       "Why this total":
         "the E24 pair with the largest ratio not above the target, among totals from half to twice the 40 kΩ asked for (a larger ratio uses more of the ADC, so it wins over a total nearer the ask; ties go to the nearer total)",
@@ -56,7 +57,9 @@ describe("derivedGroups", () => {
   it("says how far the chosen total is from the one asked: 100 kΩ asked for k 0.25 gives E24 39k + 13k = 52 kΩ", () => {
     // 39k/13k = 0.25 exactly (E24, IEC 60063), the one E24 pair with k = 0.25 and a total within
     // 50…200 kΩ (30k/10k = 40 kΩ is below half the ask): the ratio wins, the total lands at 0.52 × the ask.
-    const result = evaluate(design({ signal: { peak_v: 10, source_ohm: 0 }, front_end: { divider_total_ohm: 100000 } }));
+    const result = evaluate(
+      design({ signal: { peak_v: 10, source_ohm: 0 }, front_end: { divider_total_ohm: 100000 } }),
+    );
     expect(rows(derivedGroups(result), "Divider")["Total R1 + R2"]).toBe("52 kΩ, asked 100 kΩ (0.52 × the ask)");
   });
 
