@@ -18,7 +18,6 @@ import { renderBudget, renderComparison } from "./render-budget.ts";
 /** Rows shown before a "show all" button: keeps each keystroke's DOM work bounded on a large catalogue. */
 export const FIRST_ROWS = 8;
 
-
 /** Which long lists the visitor opened, by key "<role>:fits" / "<role>:rejected". */
 export type ViewState = { expanded: ReadonlySet<string> };
 

@@ -61,7 +61,7 @@ describe("the bare loop that also sorts", () => {
       const catalogue = catalogues[1][1];
       const plans = planOf(design, catalogue);
       const out = outputsFor(plans);
-    const ranked = bareLoopSorted(plans, out);
+      const ranked = bareLoopSorted(plans, out);
       let compared = 0;
       plans.forEach((plan, r) => {
         const e = evaluateDesign(design, catalogue, plan.topology as "rectify-and-sign" | "offset-to-mid-rail");
@@ -72,14 +72,14 @@ describe("the bare loop that also sorts", () => {
         expect(loop.length, `${plan.topology}/${plan.role}`).toBe(role.fits.length);
         expect([...loop].sort(), `${plan.topology}/${plan.role}`).toEqual(role.fits.map((p) => p.part.id).sort());
         const key = plan.table.col.status_cost!;
-      const o = out[r]!;
-      const major = (i: number) => o.severity[i]! * 64 + key[i]!;
-      const order = [...ranked[r]!];
-      for (let k = 1; k < order.length; k++) {
-        const [a, b] = [order[k - 1]!, order[k]!];
-        expect(major(a) < major(b) || (major(a) === major(b) && o.relative[a]! >= o.relative[b]!)).toBe(true);
-      }
-      compared += loop.length;
+        const o = out[r]!;
+        const major = (i: number) => o.severity[i]! * 64 + key[i]!;
+        const order = [...ranked[r]!];
+        for (let k = 1; k < order.length; k++) {
+          const [a, b] = [order[k - 1]!, order[k]!];
+          expect(major(a) < major(b) || (major(a) === major(b) && o.relative[a]! >= o.relative[b]!)).toBe(true);
+        }
+        compared += loop.length;
       });
       expect(compared).toBeGreaterThan(0);
     },
