@@ -275,8 +275,18 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
     case "zero-crossing": {
       if (stage.stage !== "op-amp") return;
       const jump = stage.zero_crossing_v ?? 0;
-      const limit = policy.timing_fraction / f;
-      for (let i = 0; i < n; i++) share(i, limit - jump / ((c.slew_v_per_us[i] as number) * 1e6), limit);
+      const beta = stage.zero_crossing_beta ?? 0.5;
+      const slope = 2 * Math.PI * f * Math.max(Math.abs(stage.input.low), Math.abs(stage.input.high));
+      const perSecond = 2 * 2 * Math.PI * f * stage.bandwidth_peak_v;
+      const limit = policy.timing_share * A;
+      for (let i = 0; i < n; i++) {
+        const accel = 2 * Math.PI * (c.gbw_mhz[i] as number) * 1e6 * beta * slope;
+        const sr = (c.slew_v_per_us[i] as number) * 1e6;
+        const onset = sr / accel;
+        const onsetV = (sr * onset) / 2;
+        const t = jump <= onsetV ? Math.sqrt((2 * jump) / accel) : onset + (jump - onsetV) / sr;
+        share(i, limit - perSecond * t, limit);
+      }
       return;
     }
     case "logic-high": {

@@ -36,6 +36,7 @@ import { railRows, ratio, si } from "./display.ts";
 import { rectifyAndSignChain } from "./rectify-and-sign-sim.ts";
 import { frontEnd } from "./front-end.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
+import { TIMING_ROLE_TERMS } from "./rectify-and-sign-timing.ts";
 
 /** Used only when the catalogue has no diode at all, so rails can still be computed. */
 const NOMINAL_SILICON: Diode = {
@@ -287,6 +288,7 @@ const ROLE_TERMS: readonly RoleTerm[] = [
   { name: "rectifier-bandwidth", label: "rectifier gain error at f max", role: "rectifier", rule: bandwidth.id },
   { name: "sign-dead-band", label: "comparator dead band", role: "sign", rule: signDeadBand.id },
   { name: "rectifier-diode-leakage", label: "rectifier diode leakage", role: "rectifier-diode", rule: leakage.id },
+  ...TIMING_ROLE_TERMS,
 ];
 
 /** Terms that do not depend on the parts: the ADC, its reference, the divider. */

@@ -51,6 +51,8 @@ export type OpAmpStage = {
   slew_amplitude_v: number;
   /** Extra output jump at each zero crossing (two diode drops), when the stage has one. */
   zero_crossing_v?: number;
+  /** Feedback factor β while the diodes are off (SPEC §11.3); ½ (the inverting half-wave stage) when absent. */
+  zero_crossing_beta?: number;
 };
 
 /** What the sign decision asks of a comparator (or an op amp used as one). */
