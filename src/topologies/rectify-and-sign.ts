@@ -4,6 +4,7 @@
 // the diode drops it will really get.
 import { forwardCurrent } from "../../rules/forward-current.ts";
 import { inputCommonMode } from "../../rules/input-common-mode.ts";
+import { lateSign } from "../../rules/late-sign.ts";
 import { leakage } from "../../rules/leakage.ts";
 import { logicHigh } from "../../rules/logic-high.ts";
 import { logicLow } from "../../rules/logic-low.ts";
@@ -442,6 +443,7 @@ export const rectifyAndSign = defineTopology({
         differentialInput,
         overloadRecoveryRule,
         riseTime,
+        lateSign,
         outputCurrent,
         baseEmitterReverse,
       ],
