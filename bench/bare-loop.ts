@@ -203,7 +203,7 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
   const slope = 2 * Math.PI * f * Math.max(Math.abs(range.low), Math.abs(range.high));
   const stageDelayAt = (i: number): { seconds: number; budget: number; assumed: boolean } => {
     if (c.is_op_amp[i] === 1) {
-      const swing = P - (c.out_pos_headroom_v[i] as number) - (N + (c.out_neg_headroom_v[i] as number));
+      const swing = Math.max(0, P - (c.out_pos_headroom_v[i] as number) - (N + (c.out_neg_headroom_v[i] as number)));
       const accel = 2 * Math.PI * (c.gbw_mhz[i] as number) * 1e6 * slope;
       const sr = (c.slew_v_per_us[i] as number) * 1e6;
       const onset = sr / accel;
@@ -321,7 +321,7 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
       const jump = stage.zero_crossing_v ?? 0;
       const beta = stage.zero_crossing_beta ?? 0.5;
       const slope = 2 * Math.PI * f * Math.max(Math.abs(stage.input.low), Math.abs(stage.input.high));
-      const perSecond = 2 * 2 * Math.PI * f * stage.bandwidth_peak_v;
+      const perSecond = (stage.zero_crossing_error === "clips" ? 1 : 2) * 2 * Math.PI * f * stage.bandwidth_peak_v;
       const limit = policy.timing_share * A;
       for (let i = 0; i < n; i++) {
         const accel = 2 * Math.PI * (c.gbw_mhz[i] as number) * 1e6 * beta * slope;

@@ -33,7 +33,8 @@ export function stageDelay(ctx: RoleContext, part: Driver): StageDelay {
     });
     return { ...delay, overdrive_assumed };
   }
-  const swing = (outputHigh(part, ctx.rails) ?? ctx.rails.positive_v) - outputLow(part, ctx.rails);
+  // An op amp whose headrooms leave it no swing on these rails makes no edge here; the level rules fail it.
+  const swing = Math.max(0, (outputHigh(part, ctx.rails) ?? ctx.rails.positive_v) - outputLow(part, ctx.rails));
   const delay = opAmpComparatorDelay({
     gbw_hz: part.gbw_mhz * 1e6,
     slew_v_per_s: part.slew_v_per_us * 1e6,

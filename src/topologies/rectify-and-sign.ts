@@ -27,6 +27,7 @@ import type { Derived, DiodeUse, DisplayGroup, DisplayRow, RoleResult } from "..
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import { pumpRail } from "../core/math/charge-pump.ts";
 import { forwardVoltage } from "../core/math/diode.ts";
+import { endPhrase, forwardVoltageAt } from "../core/math/temperature.ts";
 import { ratioDeviation } from "../core/math/divider.ts";
 import { NPN_VBE_ON_V } from "../core/math/npn-inverter.ts";
 import type { DiodeStage, OpAmpStage, Rails, SignStage } from "../core/rule-kit/index.ts";
@@ -170,8 +171,12 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     },
     rails,
   );
-  const rectDiode = use(settleDiode(rectDiodeRole, "rectifier diode"), rectCurrent, rectDiodeRole);
+  const rectDiodePart = settleDiode(rectDiodeRole, "rectifier diode");
+  const rectDiode = use(rectDiodePart, rectCurrent, rectDiodeRole);
   const vf = rectDiode.vf_v;
+  // The dead time's jump is largest where the drops are: at the cold end (−2 mV/°C, SPEC §11.7).
+  const cold = design.temperature.min_c;
+  const vfCold = forwardVoltageAt(rectDiodePart, rectCurrent, cold);
 
   // 3. The clamp diode, when the level shift uses one.
   let clamp: SignStage["clamp"];
@@ -242,7 +247,10 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     output_per_input: k,
     bandwidth_peak_v: design.signal.peak_v,
     slew_amplitude_v: W + vf,
-    zero_crossing_v: 2 * vf,
+    zero_crossing_v: 2 * vfCold,
+    zero_crossing_at: endPhrase("cold", cold),
+    // While stage 1 is dead the summer's output is −x, below 0 V, and the single-supply converter reads 0: off by x.
+    zero_crossing_error: "clips",
   };
   const sign: SignStage = {
     stage: "sign",
