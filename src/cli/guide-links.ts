@@ -1,7 +1,7 @@
 // Links from a report into the published guide, when its address is given
 // (--guide-url). Page paths end in index.html so they open on any static host
 // and from a folder alike; anchors are the ones the pages carry.
-import { roleAnchor } from "../site/links.ts";
+import { roleAnchor } from "../view/links.ts";
 import type { Role } from "../core/schemas/design.ts";
 import { UsageError } from "./args.ts";
 

@@ -7,7 +7,7 @@ import type { PartResult } from "../core/engine/evaluate-part.ts";
 import { isFitResult } from "../core/engine/evaluate-part.ts";
 import type { DesignResult, RoleResult } from "../core/engine/result.ts";
 import { formatSI } from "../core/units.ts";
-import { decidingFinding } from "../site/deciding.ts";
+import { decidingFinding } from "../view/deciding.ts";
 import { designState } from "./design-state.ts";
 import { xmlAttr, xmlText } from "./formats/xml.ts";
 import { findingLabel } from "./finding-label.ts";

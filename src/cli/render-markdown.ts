@@ -5,7 +5,7 @@ import type { PartResult } from "../core/engine/evaluate-part.ts";
 import type { DesignResult, RoleResult } from "../core/engine/result.ts";
 import type { Finding } from "../core/engine/types.ts";
 import { formatSI } from "../core/units.ts";
-import { closestFinding, decidingFinding } from "../site/deciding.ts";
+import { closestFinding, decidingFinding } from "../view/deciding.ts";
 import { designState, type DesignState } from "./design-state.ts";
 import { mdCode, mdLink, mdTable, mdText } from "./formats/markdown.ts";
 import type { GuideLinks } from "./guide-links.ts";

@@ -2,8 +2,8 @@
 // kind, status and tag, and fuzzy search as you type. The tables are complete
 // without it; this script only hides and reorders rows. The filter state is
 // kept in the address (?q=…&kind=…) so a filtered view can be shared.
-import { orderRows, parseSortKey, type SortDirection } from "../site/catalogue-order.ts";
-import { buildSearchIndex, type SearchDoc } from "../site/search-index.ts";
+import { orderRows, parseSortKey, type SortDirection } from "../view/catalogue-order.ts";
+import { buildSearchIndex, type SearchDoc } from "../view/search-index.ts";
 
 type Row = { el: HTMLTableRowElement; position: number; doc: SearchDoc; status: string };
 type Table = {

@@ -4,7 +4,7 @@
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { loadDataSet } from "../../src/node/load-data.ts";
-import { buildSearchIndex } from "../../src/site/search-index.ts";
+import { buildSearchIndex } from "../../src/view/search-index.ts";
 import { browserReady, openBrowser, openTracked, site, troubles, type Tracked } from "./harness/session.ts";
 import { focused, tabUntil, type Focused } from "./harness/steps.ts";
 

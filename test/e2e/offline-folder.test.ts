@@ -12,7 +12,7 @@ import type { DefaultTreeAdapterTypes } from "parse5";
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { loadDataSet } from "../../src/node/load-data.ts";
-import { buildSearchIndex } from "../../src/site/search-index.ts";
+import { buildSearchIndex } from "../../src/view/search-index.ts";
 import { reportPolicyProblems } from "./harness/csp.ts";
 import { browserReady, openBrowser, site } from "./harness/session.ts";
 

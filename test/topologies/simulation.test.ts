@@ -4,7 +4,7 @@
 import { describe, expect, it } from "vitest";
 import { evaluateDesign } from "../../src/engine.ts";
 import { loadDataSet } from "../../src/node/load-data.ts";
-import { renderSimulationSection } from "../../src/render/simulation-section.ts";
+import { renderSimulationSection } from "../../src/view/simulation-section.ts";
 import { simulateDesign } from "../../src/simulation.ts";
 import { formatSI } from "../../src/core/units.ts";
 

@@ -8,8 +8,8 @@
 // one parse per table context, and merged. HTML comes from render-results.ts,
 // where every piece of text is escaped.
 import type { DesignResult } from "../../core/engine/result.ts";
-import { pieceHtml, type Piece } from "./pieces.ts";
-import { resultPieces, type ViewState } from "./render-results.ts";
+import { pieceHtml, type Piece } from "../../view/pieces.ts";
+import { resultPieces, type ViewState } from "../../view/render-results.ts";
 
 const NOTHING_EXPANDED: ViewState = { expanded: new Set() };
 

@@ -4,7 +4,7 @@
 import type { Catalogue } from "../../core/catalogue-index.ts";
 import type { DesignResult } from "../../core/engine/result.ts";
 import { simulateDesign } from "../../simulation.ts";
-import { renderSimulationSection } from "../../render/simulation-section.ts";
+import { renderSimulationSection } from "../../view/simulation-section.ts";
 
 export function simulationHtml(result: DesignResult, catalogue: Catalogue): string {
   const results = result.comparison ? result.comparison.results : [result];

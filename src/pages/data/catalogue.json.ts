@@ -4,7 +4,7 @@
 import { resolve } from "node:path";
 import type { APIRoute } from "astro";
 import { readText } from "../../node/load-data.ts";
-import { siteData } from "../../site/data.ts";
+import { siteData } from "../../node/site-data.ts";
 import type { DemoDesign, TryData } from "../../client/try/try-data.ts";
 
 export const prerender = true;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { escapeHtml } from "../../src/render/escape.ts";
-import { renderVerdict, VERDICT_LOOK } from "../../src/render/verdict.ts";
+import { escapeHtml } from "../../src/view/escape.ts";
+import { renderVerdict, VERDICT_LOOK } from "../../src/view/verdict.ts";
 
 describe("escapeHtml", () => {
   // The five characters HTML gives meaning to in text and quoted attributes (HTML Living Standard, "escaping a string").

@@ -1,7 +1,7 @@
 // The budget bar chart: escaped text, bars to scale, the requirement marked.
 import { describe, expect, it } from "vitest";
 import type { Budget } from "../../src/core/engine/budget.ts";
-import { renderBudgetChart } from "../../src/render/budget-chart.ts";
+import { renderBudgetChart } from "../../src/view/budget-chart.ts";
 
 const budget: Budget = {
   terms: [

@@ -4,7 +4,7 @@ import type { PartResult } from "../core/engine/evaluate-part.ts";
 import type { DesignResult, RoleResult } from "../core/engine/result.ts";
 import { POLICY_DEFAULTS, type Design, type Policy, type Role } from "../core/schemas/design.ts";
 import { formatSI, formatVolts } from "../core/units.ts";
-import { trimZeros } from "../render/trim-zeros.ts";
+import { trimZeros } from "./trim-zeros.ts";
 
 export type ValueRow = { label: string; value: string; partId?: string; role?: Role };
 // A topology's DisplayGroup has the same shape, so derived values need no copying.

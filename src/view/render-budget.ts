@@ -1,11 +1,11 @@
 // The accuracy budget of SPEC §8 (terms, worst case, RSS, verdict), the ADC
 // conversion constant and, for topology "all", the side-by-side comparison.
 // Kept apart from the role tables so budget changes in the engine touch one file.
-import type { DesignResult } from "../../core/engine/result.ts";
-import { formatQuantity } from "../../core/units.ts";
-import { renderBudgetChart } from "../../render/budget-chart.ts";
-import { escapeHtml } from "../../render/escape.ts";
-import { renderVerdict } from "../../render/verdict.ts";
+import type { DesignResult } from "../core/engine/result.ts";
+import { formatQuantity } from "../core/units.ts";
+import { renderBudgetChart } from "./budget-chart.ts";
+import { escapeHtml } from "./escape.ts";
+import { renderVerdict } from "./verdict.ts";
 
 const small = (v: number) => escapeHtml(formatQuantity(v, "V-prefixed"));
 const cell = (tag: "th" | "td", text: string) => `<${tag}${tag === "th" ? ' scope="row"' : ""}>${text}</${tag}>`;

@@ -3,7 +3,7 @@
 // two ends), worked by hand below for ±5 V rails and a ±2.5 V window.
 import { describe, expect, it } from "vitest";
 import type { Finding, OpAmpStage, Rails, SignStage, Verdict } from "../../src/core/engine/types.ts";
-import { layoutRailDiagram, RAIL_LEGEND, renderRailDiagram } from "../../src/render/rail-diagram.ts";
+import { layoutRailDiagram, RAIL_LEGEND, renderRailDiagram } from "../../src/view/rail-diagram.ts";
 import { comparator, diode, opAmp } from "../helpers/parts.ts";
 
 const rails: Rails = { positive_v: 5, negative_v: -5 };

@@ -5,9 +5,9 @@
 import { describe, expect, it } from "vitest";
 import { catalogueFromParts, type Part } from "../../src/core/catalogue.ts";
 import { evaluateDesign } from "../../src/engine.ts";
-import { renderDesignPlaces } from "../../src/render/part-places.ts";
-import type { DesignEntry } from "../../src/site/design-entry.ts";
-import { placesOf } from "../../src/site/part-uses.ts";
+import { renderDesignPlaces } from "../../src/view/part-places.ts";
+import type { DesignEntry } from "../../src/view/design-entry.ts";
+import { placesOf } from "../../src/view/part-uses.ts";
 import { design } from "../helpers/designs.ts";
 import { comparator, diode, opAmp } from "../helpers/parts.ts";
 

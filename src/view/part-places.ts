@@ -8,9 +8,9 @@
 // rejection is written as what decides it rather than every passing sentence.
 import type { Part } from "../core/catalogue.ts";
 import { isRailedKind } from "../core/kinds.ts";
-import { placeAnchor, resultAnchor, type SiteLinks } from "../site/links.ts";
-import type { PartPlace } from "../site/part-uses.ts";
-import { roleName } from "../site/roles.ts";
+import { placeAnchor, resultAnchor, type SiteLinks } from "./links.ts";
+import type { PartPlace } from "./part-uses.ts";
+import { roleName } from "./roles.ts";
 import { escapeHtml } from "./escape.ts";
 import { renderArithmetic, renderFindingsTable, renderPassedRules } from "./findings.ts";
 import { DRAWN_RULES, renderRailDiagram } from "./rail-diagram.ts";

@@ -2,8 +2,8 @@
 import { describe, expect, it } from "vitest";
 import { catalogueFromParts } from "../../src/core/catalogue.ts";
 import { evaluateDesign } from "../../src/engine.ts";
-import type { DesignEntry } from "../../src/site/design-entry.ts";
-import { summarizeDesign } from "../../src/site/design-summary.ts";
+import type { DesignEntry } from "../../src/view/design-entry.ts";
+import { summarizeDesign } from "../../src/view/design-summary.ts";
 import { design } from "../helpers/designs.ts";
 import { comparator, diode, opAmp } from "../helpers/parts.ts";
 

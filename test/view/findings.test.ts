@@ -7,7 +7,7 @@ import {
   renderFindingsTable,
   renderPassedRules,
   renderRejectionReasons,
-} from "../../src/render/findings.ts";
+} from "../../src/view/findings.ts";
 
 const finding = (rule: string, verdict: Verdict, reason: string, steps: Finding["steps"] = []): Finding => ({
   rule,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { renderSimulationFigure, type SimulationPicture } from "../../src/render/simulation-chart.ts";
+import { renderSimulationFigure, type SimulationPicture } from "../../src/view/simulation-chart.ts";
 
 function picture(over: Partial<SimulationPicture> = {}): SimulationPicture {
   const n = 1000;

@@ -1,6 +1,6 @@
 // Every link goes through the base path, so the site works from a subfolder (SPEC §9).
 import { describe, expect, it } from "vitest";
-import { joinBase, linksFor, resultAnchor, roleAnchor } from "../../src/site/links.ts";
+import { joinBase, linksFor, resultAnchor, roleAnchor } from "../../src/view/links.ts";
 
 describe("joinBase", () => {
   it.each([

@@ -1,18 +1,18 @@
 import { describe, expect, it } from "vitest";
-import { catalogueFromParts, type Part } from "../../../src/core/catalogue.ts";
-import { evaluateDesign } from "../../../src/engine.ts";
-import type { DesignResult } from "../../../src/core/engine/result.ts";
-import { loadCatalogue } from "../../../src/node/load-data.ts";
-import { DEFAULT_DRAFT } from "../../../src/client/try/defaults.ts";
-import { checkDraft } from "../../../src/client/try/draft.ts";
-import { pieceHtml, type Piece } from "../../../src/client/try/pieces.ts";
+import { catalogueFromParts, type Part } from "../../src/core/catalogue.ts";
+import { evaluateDesign } from "../../src/engine.ts";
+import type { DesignResult } from "../../src/core/engine/result.ts";
+import { loadCatalogue } from "../../src/node/load-data.ts";
+import { DEFAULT_DRAFT } from "../../src/client/try/defaults.ts";
+import { checkDraft } from "../../src/client/try/draft.ts";
+import { pieceHtml, type Piece } from "../../src/view/pieces.ts";
 import {
   FIRST_ROWS,
   holdsLine,
   renderResults,
   renderRole,
   resultPieces,
-} from "../../../src/client/try/render-results.ts";
+} from "../../src/view/render-results.ts";
 
 const { catalogue } = loadCatalogue("data");
 
@@ -103,7 +103,7 @@ describe("renderResults with hostile catalogue text", () => {
 });
 
 describe("holdsLine", () => {
-  // Worded by the design pages' summary (src/site/design-summary.ts); here, that the page states the right case.
+  // Worded by the design pages' summary (src/view/design-summary.ts); here, that the page states the right case.
   it.each([
     [
       "the default design",

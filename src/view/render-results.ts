@@ -3,18 +3,18 @@
 // diagram. Pure (no DOM), so the unit tests read exactly what the page shows.
 // Every piece of catalogue or design text goes through escapeHtml: names are a
 // team's free text.
-import type { PartResult } from "../../core/engine/evaluate-part.ts";
-import type { DesignResult, RoleResult } from "../../core/engine/result.ts";
-import type { Finding } from "../../core/engine/types.ts";
-import { isRailedKind, kindWords } from "../../core/kinds.ts";
-import { escapeHtml } from "../../render/escape.ts";
-import { renderRailDiagram } from "../../render/rail-diagram.ts";
-import { renderVerdict } from "../../render/verdict.ts";
-import { closestFinding } from "../../site/deciding.ts";
-import { partUrl } from "../../site/links.ts";
-import { summarizeDesign } from "../../site/design-summary.ts";
-import { derivedGroups } from "../../site/design-view.ts";
-import { roleName } from "../../site/roles.ts";
+import type { PartResult } from "../core/engine/evaluate-part.ts";
+import type { DesignResult, RoleResult } from "../core/engine/result.ts";
+import type { Finding } from "../core/engine/types.ts";
+import { isRailedKind, kindWords } from "../core/kinds.ts";
+import { escapeHtml } from "./escape.ts";
+import { renderRailDiagram } from "./rail-diagram.ts";
+import { renderVerdict } from "./verdict.ts";
+import { closestFinding } from "./deciding.ts";
+import { partUrl } from "./links.ts";
+import { summarizeDesign } from "./design-summary.ts";
+import { derivedGroups } from "./design-view.ts";
+import { roleName } from "./roles.ts";
 import { pieceHtml, type Container, type Piece } from "./pieces.ts";
 import { renderBudget, renderComparison } from "./render-budget.ts";
 

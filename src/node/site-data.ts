@@ -4,8 +4,8 @@
 import { resolve } from "node:path";
 import type { Catalogue } from "../core/catalogue.ts";
 import { formatProblem } from "../core/problems.ts";
-import { loadDataSet } from "../node/load-data.ts";
-import type { DesignEntry } from "./design-entry.ts";
+import { loadDataSet } from "./load-data.ts";
+import type { DesignEntry } from "../view/design-entry.ts";
 
 export type SiteData = {
   dataDir: string;

@@ -4,7 +4,7 @@ import { describe, expect, it } from "vitest";
 import { catalogueFromParts } from "../../src/core/catalogue.ts";
 import { evaluateDesign } from "../../src/engine.ts";
 import type { RoleResult } from "../../src/core/engine/result.ts";
-import { renderFitsTable, renderRejectedTable, type RoleListInput } from "../../src/render/role-lists.ts";
+import { renderFitsTable, renderRejectedTable, type RoleListInput } from "../../src/view/role-lists.ts";
 import { design } from "../helpers/designs.ts";
 import { comparator, diode, opAmp } from "../helpers/parts.ts";
 

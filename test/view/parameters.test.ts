@@ -13,7 +13,7 @@ import {
   sortKey,
   trimZeros,
   type Column,
-} from "../../src/render/parameters.ts";
+} from "../../src/view/parameters.ts";
 
 const column = (key: string) => {
   const c = columnsOf(

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { compareKeys, orderRows, parseSortKey } from "../../src/site/catalogue-order.ts";
+import { compareKeys, orderRows, parseSortKey } from "../../src/view/catalogue-order.ts";
 
 describe("parseSortKey", () => {
   it.each<[string | undefined, number | string | null]>([

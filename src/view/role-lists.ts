@@ -6,8 +6,8 @@
 // opens without effort.
 import type { PartResult } from "../core/engine/evaluate-part.ts";
 import type { RoleResult } from "../core/engine/result.ts";
-import { closestFinding } from "../site/deciding.ts";
-import { placeAnchor, resultAnchor, type SiteLinks } from "../site/links.ts";
+import { closestFinding } from "./deciding.ts";
+import { placeAnchor, resultAnchor, type SiteLinks } from "./links.ts";
 import { escapeHtml } from "./escape.ts";
 import { renderRejectionReasons } from "./findings.ts";
 import { renderVerdict } from "./verdict.ts";

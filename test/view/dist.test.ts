@@ -10,8 +10,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { evaluateDesign } from "../../src/engine.ts";
 import type { RoleResult } from "../../src/core/engine/result.ts";
 import { loadDataSet } from "../../src/node/load-data.ts";
-import { escapeHtml } from "../../src/render/escape.ts";
-import { CAUTION_TEXT, FITS_IN_FULL } from "../../src/site/design-view.ts";
+import { escapeHtml } from "../../src/view/escape.ts";
+import { CAUTION_TEXT, FITS_IN_FULL } from "../../src/view/design-view.ts";
 import { RULES } from "../../rules/index.ts";
 import { buildSite } from "../e2e/harness/build-site.ts";
 

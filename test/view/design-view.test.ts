@@ -12,7 +12,7 @@ import {
   needsCaution,
   roleView,
   type ValueGroup,
-} from "../../src/site/design-view.ts";
+} from "../../src/view/design-view.ts";
 import { design } from "../helpers/designs.ts";
 import { comparator, diode, opAmp } from "../helpers/parts.ts";
 

@@ -2,7 +2,7 @@
 // class, and a query must not drag in unrelated ones.
 import { describe, expect, it } from "vitest";
 import { loadCatalogue } from "../../src/node/load-data.ts";
-import { buildSearchIndex, normalize, type SearchDoc } from "../../src/site/search-index.ts";
+import { buildSearchIndex, normalize, type SearchDoc } from "../../src/view/search-index.ts";
 
 const NOTE = "Values typical of the class; check the datasheet of the part you buy.";
 const doc = (id: string, name: string, tags: string[], notes = NOTE, kind = "op-amp"): SearchDoc => ({
