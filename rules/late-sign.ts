@@ -2,13 +2,7 @@
 // the level shift makes at the logic pin and an op amp's overload recovery, all
 // after a true crossing. While the sign is wrong the reading is −x for +x, off
 // by 2·2π·f·peak·t: this rule's error is the budget's late-sign term.
-import {
-  defineRule,
-  record,
-  shareVerdict,
-  spareOrShortSmall,
-  type RoleContext,
-} from "../src/core/rule-kit/index.ts";
+import { defineRule, record, shareVerdict, spareOrShortSmall, type RoleContext } from "../src/core/rule-kit/index.ts";
 import { crossingError } from "../src/core/math/dead-time.ts";
 import { sumDelay, type DelayComponent, type SignDelay } from "../src/core/math/late-sign.ts";
 import { formatSI } from "../src/core/units.ts";
@@ -33,7 +27,8 @@ function late(ctx: RoleContext, part: Driver): Late {
   let never = false;
   if (edge.case === "no-pull-up") unknown.push("the edge at the logic pin (no logic.pull_up_ohm)");
   else if (!Number.isFinite(edge.seconds)) never = true;
-  else if (edge.seconds > 0) parts.push({ name: "edge", seconds: edge.seconds, formula: `level shift's edge (${edge.case})` });
+  else if (edge.seconds > 0)
+    parts.push({ name: "edge", seconds: edge.seconds, formula: `level shift's edge (${edge.case})` });
   const recovery = overloadRecovery(part);
   if (recovery === undefined) unknown.push("the op amp's overload recovery (overload_recovery_us is empty)");
   else if (recovery > 0) parts.push({ name: "overload-recovery", seconds: recovery, formula: "overload_recovery_us" });
@@ -66,7 +61,8 @@ export const lateSign = defineRule({
     const l = late(ctx, part);
     if (l.never) {
       return {
-        reason: "the logic pin never reaches its threshold through the level shift's edge, so the sign never arrives: fail",
+        reason:
+          "the logic pin never reaches its threshold through the level shift's edge, so the sign never arrives: fail",
         steps: [{ label: "limit", value: limit, unit: "V" }],
       };
     }

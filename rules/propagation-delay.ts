@@ -46,7 +46,9 @@ export const propagationDelay = defineRule({
     const od = part.tpd_overdrive_mv === undefined ? ASSUMED_OVERDRIVE_V : part.tpd_overdrive_mv * 1e-3;
     const hyst = byName("hysteresis");
     const hystText =
-      hyst > 0 ? ` + ${formatSI(hyst, "s")} to pass half its ${formatSI((part.hysteresis_mv ?? 0) * 1e-3, "V")} hysteresis` : "";
+      hyst > 0
+        ? ` + ${formatSI(hyst, "s")} to pass half its ${formatSI((part.hysteresis_mv ?? 0) * 1e-3, "V")} hysteresis`
+        : "";
     const odText = d.overdrive_assumed
       ? `${formatSI(od, "V")} (assumed, common practice: tpd_overdrive_mv is empty, so at best marginal)`
       : formatSI(od, "V");

@@ -1,4 +1,11 @@
-import { defineRule, record, shareVerdict, spareOrShortSmall, type PartOf, type Stage } from "../src/core/rule-kit/index.ts";
+import {
+  defineRule,
+  record,
+  shareVerdict,
+  spareOrShortSmall,
+  type PartOf,
+  type Stage,
+} from "../src/core/rule-kit/index.ts";
 import { formatSI } from "../src/core/units.ts";
 
 export const signDeadBand = defineRule({
@@ -6,7 +13,8 @@ export const signDeadBand = defineRule({
   unit: "V",
   checks:
     "The band around zero where the sign may be wrong (the offset either way, widened by the hysteresis) stays inside its share of the accuracy.",
-  formula: "dead band = (2 · Vos + Vh) / k (input-referred; Vh = hysteresis_mv, 0 when empty); limit = sign_share · required_v",
+  formula:
+    "dead band = (2 · Vos + Vh) / k (input-referred; Vh = hysteresis_mv, 0 when empty); limit = sign_share · required_v",
   source:
     "Comparator input offset referred through the divider (common practice); hysteresis moves each threshold by Vh/2 (SPEC §11.4).",
   policy: "sign_share",

@@ -80,5 +80,9 @@ export function overloadRecovery(part: PartOf<"op-amp" | "comparator">): number 
  */
 export function signTimeLimit(ctx: Pick<RoleContext, "design" | "policy">): number {
   const { design, policy } = ctx;
-  return timeForError(design.signal.max_frequency_hz, design.signal.peak_v, policy.timing_share * design.accuracy.required_v);
+  return timeForError(
+    design.signal.max_frequency_hz,
+    design.signal.peak_v,
+    policy.timing_share * design.accuracy.required_v,
+  );
 }

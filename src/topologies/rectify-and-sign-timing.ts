@@ -6,6 +6,11 @@ import { zeroCrossing } from "../../rules/zero-crossing.ts";
 import type { RoleTerm } from "../core/engine/budget.ts";
 
 export const TIMING_ROLE_TERMS: readonly RoleTerm[] = [
-  { name: "rectifier-dead-time", label: "rectifier dead time at the crossings", role: "rectifier", rule: zeroCrossing.id },
+  {
+    name: "rectifier-dead-time",
+    label: "rectifier dead time at the crossings",
+    role: "rectifier",
+    rule: zeroCrossing.id,
+  },
   { name: "late-sign", label: "late sign decision at the crossings", role: "sign", rule: lateSign.id },
 ];

@@ -17,7 +17,8 @@ const err = (t: number) => 2 * 2 * Math.PI * f * 2.5 * t;
 // Diode clamp (no clamp diode given: no drop) from 5 V through 10 kΩ into the default 10 pF pin:
 // the fall to V_IL 1.5 V takes max(ln 9·RC, RC·ln(5/1.5)) = ln 9·RC = 220 ns (10–90 % of a first-order step).
 const edge = Math.log(9) * 10e3 * 10e-12;
-const at = (required: number, logic = {}) => design({ accuracy: { required_v: required }, logic });
+const at = (required: number, logic = {}) =>
+  design({ signal: { max_frequency_hz: f }, accuracy: { required_v: required }, logic });
 const cmp = (tpd: string, od: string, vh = "") => comparator({ tpd_ns: tpd, tpd_overdrive_mv: od, hysteresis_mv: vh });
 const own = (tpd: number, od: number) => tpd + od / S;
 const tOk = own(450e-9, 5e-3) + edge; // 2.26 µs: 14.2 mV
@@ -41,16 +42,31 @@ const cases: RuleCase[] = [
   {
     label: "an open-drain output with no pull-up given: edge unknown, would pass, so marginal",
     run: {
-      part: comparator({ tpd_ns: "450", tpd_overdrive_mv: "5", output: "open-drain", out_pos_headroom_v: "", out_neg_headroom_v: "" }),
+      part: comparator({
+        tpd_ns: "450",
+        tpd_overdrive_mv: "5",
+        output: "open-drain",
+        out_pos_headroom_v: "",
+        out_neg_headroom_v: "",
+      }),
       stage: signStage(),
       rails: SPLIT_5V,
       design: at(1, { level_shift: "pull-up" }),
     },
-    expected: { verdict: "marginal", needed: 0.25, available: err(own(450e-9, 5e-3)), margin: 0.25 - err(own(450e-9, 5e-3)) },
+    expected: {
+      verdict: "marginal",
+      needed: 0.25,
+      available: err(own(450e-9, 5e-3)),
+      margin: 0.25 - err(own(450e-9, 5e-3)),
+    },
   },
   {
     label: "delay empty",
-    run: { part: { ...cmp("450", "5"), tpd_ns: undefined } as unknown as Comparator, stage: signStage(), design: at(1) },
+    run: {
+      part: { ...cmp("450", "5"), tpd_ns: undefined } as unknown as Comparator,
+      stage: signStage(),
+      design: at(1),
+    },
     expected: { verdict: "unrated", needed: null, available: null, margin: null },
   },
 ];

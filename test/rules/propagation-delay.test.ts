@@ -14,7 +14,7 @@ import { check, expectFinding, reasons, signStage, SPLIT_5V, type RuleCase } fro
 
 // 200 Hz, W = peak = 2.5 V: S_in = 3141.6 V/s.
 const S = 2 * Math.PI * 200 * 2.5;
-const at = (required: number) => design({ accuracy: { required_v: required } });
+const at = (required: number) => design({ signal: { max_frequency_hz: 200 }, accuracy: { required_v: required } });
 const limit = (required: number) => (0.25 * required) / (2 * S); // 3.979 µs at 100 mV
 const t = (tpd: number, od: number, vh = 0) => tpd + od / S + vh / 2 / S;
 // Ground-sensing bipolar op amp on ±5 V: swing −4.98 … +3.50 V = 8.48 V, GBW 1 MHz, 0.5 V/µs.
@@ -32,7 +32,12 @@ const cases: RuleCase[] = [
   {
     label: "1.8 µs at 5 mV: 3.39 µs against 3.98 µs",
     run: { part: cmp("1.8k", "5"), stage: signStage(), design: at(0.1) },
-    expected: { verdict: "marginal", needed: limit(0.1), available: t(1.8e-6, 5e-3), margin: limit(0.1) - t(1.8e-6, 5e-3) },
+    expected: {
+      verdict: "marginal",
+      needed: limit(0.1),
+      available: t(1.8e-6, 5e-3),
+      margin: limit(0.1) - t(1.8e-6, 5e-3),
+    },
   },
   {
     label: "1.3 µs at 10 mV with 10 mV hysteresis: 6.07 µs against 3.98 µs",
@@ -46,7 +51,7 @@ const cases: RuleCase[] = [
   },
   {
     label: "overdrive not stated: 100 mV assumed, would pass, so marginal",
-    run: { part: comparator({ tpd_ns: "100" }), stage: signStage(), design: at(2) },
+    run: { part: comparator({ tpd_ns: "100", tpd_overdrive_mv: "" }), stage: signStage(), design: at(2) },
     expected: { verdict: "marginal", needed: limit(2), available: t(100e-9, 0.1), margin: limit(2) - t(100e-9, 0.1) },
   },
   {
@@ -61,7 +66,11 @@ const cases: RuleCase[] = [
   },
   {
     label: "delay empty",
-    run: { part: { ...cmp("450", "5"), tpd_ns: undefined } as unknown as Comparator, stage: signStage(), design: at(0.1) },
+    run: {
+      part: { ...cmp("450", "5"), tpd_ns: undefined } as unknown as Comparator,
+      stage: signStage(),
+      design: at(0.1),
+    },
     expected: { verdict: "unrated", needed: null, available: null, margin: null },
   },
 ];

@@ -19,8 +19,11 @@ const pullUp = (ohm: number | undefined, cap?: number) =>
     logic: { level_shift: "pull-up", pull_up_ohm: ohm, ...(cap === undefined ? {} : { pin_cap_f: cap }) },
   });
 const npn = (logic: Record<string, number | boolean | undefined>) =>
-  design({ signal: { max_frequency_hz: 200 },
-    accuracy: { required_v: REQUIRED }, logic: { level_shift: "npn-inverter", ...logic } });
+  design({
+    signal: { max_frequency_hz: 200 },
+    accuracy: { required_v: REQUIRED },
+    logic: { level_shift: "npn-inverter", ...logic },
+  });
 
 const cases: RuleCase[] = [
   {

@@ -12,7 +12,8 @@ import { opAmp } from "../helpers/parts.ts";
 import { check, expectFinding, reasons, rectifierStage, type RuleCase } from "../helpers/rules.ts";
 
 // 1 kHz, W = peak = 2.5 V (k = 1), 2·Vf = 1.2 V, β = ½ (the rule's default).
-const at = (required: number, f = 1000) => design({ signal: { max_frequency_hz: f }, accuracy: { required_v: required } });
+const at = (required: number, f = 1000) =>
+  design({ signal: { max_frequency_hz: f }, accuracy: { required_v: required } });
 const gbwLimited = opAmp({ gbw_mhz: 1, slew_v_per_us: 0.5 }); // 6.97 µs
 const slewing = opAmp({ gbw_mhz: 1, slew_v_per_us: 0.2 }); // 4.05 µs to the slew limit, 8.03 µs in all
 const rect = rectifierStage({ vf: 0.6 });
@@ -46,6 +47,15 @@ const cases: RuleCase[] = [
     expected: { verdict: "fail", needed: 0.025, available: err(tSlew), margin: 0.025 - err(tSlew) },
   },
   {
+    label: "the same where the output clips at 0 V (off by x, not 2x), drops named at the cold end",
+    run: {
+      part: gbwLimited,
+      stage: { ...rect, zero_crossing_error: "clips", zero_crossing_at: "at −20 °C (the cold end)" },
+      design: at(0.1),
+    },
+    expected: { verdict: "fail", needed: 0.025, available: err(tGbw) / 2, margin: 0.025 - err(tGbw) / 2 },
+  },
+  {
     label: "gain-bandwidth empty",
     run: { part: { ...gbwLimited, gbw_mhz: undefined } as unknown as OpAmp, stage: rect, design: at(0.1) },
     expected: { verdict: "unrated", needed: null, available: null, margin: null },
@@ -57,7 +67,9 @@ describe("zero-crossing", () => {
 
   it("issue 16's worked numbers come out of the rule to 3 significant figures", () => {
     const steps = (part: OpAmp) =>
-      Object.fromEntries(check("zero-crossing", { part, stage: rect, design: at(0.1) }).steps.map((s) => [s.label, s.value]));
+      Object.fromEntries(
+        check("zero-crossing", { part, stage: rect, design: at(0.1) }).steps.map((s) => [s.label, s.value]),
+      );
     const g = steps(gbwLimited);
     expect(Number(((g["dead time"] as number) * 1e6).toPrecision(3))).toBe(6.97);
     expect(Number(((g["slew only jump / SR"] as number) * 1e6).toPrecision(3))).toBe(2.4);
@@ -74,11 +86,12 @@ describe("zero-crossing", () => {
   it("says why, naming both regimes, with the numbers", () => {
     expect(reasons("zero-crossing", cases)).toMatchInlineSnapshot(`
       {
-        "6.97 µs (0.219 V) against 25 % of 1 V": "marginal: dead 6.97 µs at each crossing, gain-bandwidth limited: the open-loop output ramps as an integrator and crosses 1.20 V (two diode drops) in 6.97 µs, before its rate reaches the 0.500 V/µs slew rate (slew alone would take 2.40 µs); the reading is off by up to 219 mV (2·2π·f·peak·t); the limit is 250 mV (timing share 25 % of the required accuracy): 30.9 mV to spare",
-        "6.97 µs (0.219 V) against 25 % of 2 V": "pass: dead 6.97 µs at each crossing, gain-bandwidth limited: the open-loop output ramps as an integrator and crosses 1.20 V (two diode drops) in 6.97 µs, before its rate reaches the 0.500 V/µs slew rate (slew alone would take 2.40 µs); the reading is off by up to 219 mV (2·2π·f·peak·t); the limit is 500 mV (timing share 25 % of the required accuracy): 281 mV to spare",
+        "6.97 µs (0.219 V) against 25 % of 1 V": "marginal: dead 6.97 µs at each crossing, gain-bandwidth limited: the open-loop output ramps as an integrator and crosses 1.20 V (two diode drops) in 6.97 µs, before its rate reaches the 0.500 V/µs slew rate (slew alone would take 2.40 µs); the reading is off by up to 219 mV (2·2π·f·peak·t: −x for +x); the limit is 250 mV (timing share 25 % of the required accuracy): 30.9 mV to spare",
+        "6.97 µs (0.219 V) against 25 % of 2 V": "pass: dead 6.97 µs at each crossing, gain-bandwidth limited: the open-loop output ramps as an integrator and crosses 1.20 V (two diode drops) in 6.97 µs, before its rate reaches the 0.500 V/µs slew rate (slew alone would take 2.40 µs); the reading is off by up to 219 mV (2·2π·f·peak·t: −x for +x); the limit is 500 mV (timing share 25 % of the required accuracy): 281 mV to spare",
         "gain-bandwidth empty": "unrated: not rated: needs 'gbw_mhz', which is empty for this part",
-        "gain-bandwidth limited 6.97 µs (0.219 V) against 25 % of 100 mV": "fail: dead 6.97 µs at each crossing, gain-bandwidth limited: the open-loop output ramps as an integrator and crosses 1.20 V (two diode drops) in 6.97 µs, before its rate reaches the 0.500 V/µs slew rate (slew alone would take 2.40 µs); the reading is off by up to 219 mV (2·2π·f·peak·t); the limit is 25.0 mV (timing share 25 % of the required accuracy): 194 mV short",
-        "gain-bandwidth then slew, 8.03 µs (0.252 V) against 25 % of 100 mV": "fail: dead 8.03 µs at each crossing, gain-bandwidth, then slew: the open-loop output ramps as an integrator for 4.05 µs (405 mV) until its rate reaches the 0.200 V/µs slew rate, then slews the rest of the 1.20 V (two diode drops): 8.03 µs in all; the reading is off by up to 252 mV (2·2π·f·peak·t); the limit is 25.0 mV (timing share 25 % of the required accuracy): 227 mV short",
+        "gain-bandwidth limited 6.97 µs (0.219 V) against 25 % of 100 mV": "fail: dead 6.97 µs at each crossing, gain-bandwidth limited: the open-loop output ramps as an integrator and crosses 1.20 V (two diode drops) in 6.97 µs, before its rate reaches the 0.500 V/µs slew rate (slew alone would take 2.40 µs); the reading is off by up to 219 mV (2·2π·f·peak·t: −x for +x); the limit is 25.0 mV (timing share 25 % of the required accuracy): 194 mV short",
+        "gain-bandwidth then slew, 8.03 µs (0.252 V) against 25 % of 100 mV": "fail: dead 8.03 µs at each crossing, gain-bandwidth, then slew: the open-loop output ramps as an integrator for 4.05 µs (405 mV) until its rate reaches the 0.200 V/µs slew rate, then slews the rest of the 1.20 V (two diode drops): 8.03 µs in all; the reading is off by up to 252 mV (2·2π·f·peak·t: −x for +x); the limit is 25.0 mV (timing share 25 % of the required accuracy): 227 mV short",
+        "the same where the output clips at 0 V (off by x, not 2x), drops named at the cold end": "fail: dead 6.97 µs at each crossing, gain-bandwidth limited: the open-loop output ramps as an integrator and crosses 1.20 V (two diode drops at −20 °C (the cold end)) in 6.97 µs, before its rate reaches the 0.500 V/µs slew rate (slew alone would take 2.40 µs); the reading is off by up to 110 mV (2π·f·peak·t: the output would go below 0 V, where the converter reads 0); the limit is 25.0 mV (timing share 25 % of the required accuracy): 84.5 mV short",
       }
     `);
   });
