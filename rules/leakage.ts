@@ -63,10 +63,11 @@ export const leakage = defineRule({
 
 type LeakageStage = DiodeStage & { leakage_ohm: number; leakage_limit_v: number };
 
+const hasLeakagePath = (s: DiodeStage): s is LeakageStage =>
+  s.leakage_ohm !== undefined && s.leakage_limit_v !== undefined;
+
 function leakageStage(stage: Stage): LeakageStage {
   const s = stageAs(stage, "diode", "leakage");
-  if (s.leakage_ohm === undefined || s.leakage_limit_v === undefined) {
-    throw new Error("leakage needs a diode stage with a resistance and a limit");
-  }
-  return s as LeakageStage;
+  if (!hasLeakagePath(s)) throw new Error("leakage needs a diode stage with a resistance and a limit");
+  return s;
 }

@@ -8,7 +8,6 @@ import {
   shareVerdict,
   spareOrShortSmall,
   stageAs,
-  type OpAmpStage,
   type RoleContext,
 } from "../src/core/rule-kit/index.ts";
 import type { PartOf } from "../src/core/kind-rows.ts";
@@ -43,7 +42,7 @@ function work(ctx: RoleContext, part: PartOf<"op-amp">): Worked {
     slope,
     jump,
     beta,
-    error: crossingError(f, (s as OpAmpStage).bandwidth_peak_v, t.seconds, s.zero_crossing_error ?? "inverts"),
+    error: crossingError(f, s.bandwidth_peak_v, t.seconds, s.zero_crossing_error ?? "inverts"),
     limit: ctx.policy.timing_share * ctx.design.accuracy.required_v,
   };
 }

@@ -4,7 +4,7 @@
 import type { Catalogue } from "./core/catalogue-index.ts";
 import type { DesignResult } from "./core/engine/result.ts";
 import type { SimulationOutcome } from "./core/sim/report.ts";
-import { simulateResult, type DesignSimulation } from "./core/sim/run-design.ts";
+import { simulateResult, type DesignSimulation } from "./core/engine/simulate-result.ts";
 import { engine } from "./engine.ts";
 
 /** Simulates a result (and each topology of a comparison) and keeps the report on it; returns the same result. */

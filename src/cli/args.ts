@@ -69,7 +69,7 @@ Usage:
   --format F       output of check: text (default), json, csv, markdown or junit;
                    of diff: text, json or markdown; of simulate: text, json or csv
   --guide-url URL  markdown links into the published guide at URL
-  --strict         junit and diff: a marginal budget or design counts as failing
+  --strict         check, junit and diff: a marginal design counts as failing (check exits 1)
   --topology NAME  evaluate as ${TOPOLOGY_CHOICES}
   --role ROLE      explain one role only
   --part ROLE=ID   simulate with this part in this role (as if the design's bom named it)

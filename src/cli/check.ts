@@ -1,5 +1,6 @@
 // `railsieve check DESIGN.json…`: evaluate, print, and exit 0 / 1 / 2.
-import { designHolds, type DesignResult } from "../core/engine/result.ts";
+import { exitCodeFor } from "../core/engine/design-verdict.ts";
+import type { DesignResult } from "../core/engine/result.ts";
 import { InputError, type Problem } from "../core/problems.ts";
 import { evaluateDesign, TOPOLOGY_IDS } from "../engine.ts";
 import { withSimulation } from "../simulation.ts";
@@ -48,5 +49,9 @@ export function runCheck(args: ParsedArgs, data: string, io: Io): number {
   else if (format === "markdown") io.out(renderCheckMarkdown(results, links));
   else if (format === "junit") io.out(renderJunit(results, args.flags.has("strict")));
   else io.out(results.map((r) => renderDesignText(r, io)).join("\n"));
-  return results.every((r) => designHolds(r)) ? 0 : 1;
+  // SPEC §11.11: 1 when a design fails (its roles, its BOM or its budget); --strict: marginal too.
+  return exitCodeFor(
+    results.map((r) => r.verdict),
+    args.flags.has("strict"),
+  );
 }

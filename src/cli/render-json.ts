@@ -35,10 +35,18 @@ export function designJson(result: DesignResult): Record<string, unknown> {
     id: result.design.id,
     title: result.design.title,
     topology: result.topology,
+    // The design's verdict (SPEC §11.11): roles, BOM parts and the budget together.
+    verdict: result.verdict,
+    // Roles and BOM parts only (every role has a fit, every BOM part fits); the budget is in `verdict`.
     holds: designHolds(result),
     rails: { positive_v: x.rails.positive_v, negative_v: x.rails.negative_v },
     divider: x.divider
-      ? { top_ohm: x.divider.top_ohm, bottom_ohm: x.divider.bottom_ohm, ratio: x.divider.ratio }
+      ? {
+          top_ohm: x.divider.top_ohm,
+          bottom_ohm: x.divider.bottom_ohm,
+          source_ohm: x.divider.source_ohm,
+          ratio: x.divider.ratio,
+        }
       : null,
     window_v: x.window_v,
     roles: result.roles.map((r) => ({
@@ -59,14 +67,24 @@ export function designJson(result: DesignResult): Record<string, unknown> {
 function budgetJson(result: DesignResult) {
   const b = result.budget;
   return {
-    terms: b.terms.map((t) => ({ name: t.name, label: t.label, v: t.v, calibrates_out: t.calibrates_out })),
+    terms: b.terms.map((t) => ({
+      name: t.name,
+      label: t.label,
+      v: t.v,
+      formula: t.formula,
+      removed_by: t.removed_by,
+      calibrates_out: t.calibrates_out,
+      ...(t.from ? { from: t.from } : {}),
+    })),
     worst_case_v: b.worst_case_v,
     rss_v: b.rss_v,
     required_v: b.required_v,
     verdict: b.verdict,
     dominant: b.dominant,
     calibrated: b.calibrated,
-    effective_bits: b.effective_bits,
+    calibrated_two_point: b.calibrated_two_point,
+    codes_spanned_bits: b.codes_spanned_bits,
+    ...(b.noise ? { noise: b.noise } : {}),
     missing: b.missing,
   };
 }

@@ -33,7 +33,7 @@ function renderComparison(result: DesignResult, io: Pick<Io, "color">): string {
     );
     out.push(
       wrap(
-        `budget ${row.budget_verdict} (worst case ${formatSI(row.budget_worst_case_v, "V")}, largest term ${row.dominant ?? "none"}); ${row.effective_bits.toFixed(1)} effective bits; ${row.part_count} parts, cost bands ${row.cost_total}`,
+        `budget ${row.budget_verdict} (worst case ${formatSI(row.budget_worst_case_v, "V")}, largest term ${row.dominant ?? "none"}); design ${row.state}; codes spanned ${row.codes_spanned_bits.toFixed(1)} bits; ${row.part_count} parts, cost bands ${row.cost_total}`,
         WIDTH,
         "      ",
         "    ",
@@ -93,7 +93,12 @@ function renderBudget(result: DesignResult): string[] {
     ),
   );
   if (b.missing.length > 0) out.push(`    incomplete: no part for ${b.missing.join(", ")}, so its errors are unknown`);
-  out.push(`    effective ADC bits used: ${b.effective_bits.toFixed(2)}`);
+  if (b.noise) {
+    out.push(
+      `    noise ${formatSI(b.noise.rms_v, "V")} rms at the input; SINAD ${b.noise.sinad_db.toFixed(2)} dB, ENOB ${b.noise.enob.toFixed(2)} bits (IEEE 1241)`,
+    );
+  }
+  out.push(`    codes spanned by the signal: ${b.codes_spanned_bits.toFixed(2)} bits`);
   const c = result.conversion;
   out.push(
     "",

@@ -19,7 +19,9 @@ export function frontEnd(
 ): FrontEnd | { ok: false; problems: DesignProblem[] } {
   const { peak_v, source_ohm } = design.signal;
   const target = Math.min(1, windowV / peak_v);
-  const divider = chooseDivider(target, design.front_end.divider_total_ohm, design.front_end.series);
+  // The source resistance is in series with R1: the ratio the search, the window,
+  // the budget and the firmware constant use is the loaded one (SPEC §11.1).
+  const divider = chooseDivider(target, design.front_end.divider_total_ohm, design.front_end.series, source_ohm);
   if (divider === undefined) {
     return {
       ok: false,

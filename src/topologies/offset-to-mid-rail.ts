@@ -8,13 +8,14 @@ import { offset } from "../../rules/offset.ts";
 import { outputSwing } from "../../rules/output-swing.ts";
 import { supplyRange } from "../../rules/supply-range.ts";
 import { unityGainStable } from "../../rules/unity-gain-stable.ts";
-import type { BudgetTerm, Conversion, RoleTerm } from "../core/engine/budget.ts";
+import { budgetTerm, type BudgetTerm, type Conversion, type RoleTerm } from "../core/engine/budget.ts";
 import type { Derived, DisplayGroup } from "../core/engine/result.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import { chooseLevelShift, networkToleranceError, type LevelShiftNetwork } from "../core/math/level-shift.ts";
 import type { OpAmpStage, Rails } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
-import { formatVolts } from "../core/units.ts";
+import { formatSI, formatVolts } from "../core/units.ts";
+import { converterTerms } from "./converter-terms.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { offsetToMidRailChain } from "./offset-to-mid-rail-sim.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
@@ -87,21 +88,17 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     adc_step_at_input_v: vref / 2 ** design.adc.bits / a,
     level_shift: { ...network, output_low_v: low, output_high_v: high },
   };
-  const { bits, reference_tolerance } = design.adc;
+  const tol = design.front_end.resistor_tolerance;
+  const netErr = networkToleranceError(network, tol, peak, vref);
   const fixed: BudgetTerm[] = [
-    {
-      name: "quantization",
-      label: "quantization, half a step",
-      v: (0.5 * (vref / 2 ** bits)) / a,
-      calibrates_out: false,
-    },
-    { name: "reference", label: "ADC reference tolerance", v: reference_tolerance * peak, calibrates_out: true },
-    {
-      name: "network-ratio",
-      label: "level-shift network, worst case of the three tolerances",
-      v: networkToleranceError(network, design.front_end.resistor_tolerance, peak, vref),
-      calibrates_out: true,
-    },
+    ...converterTerms(design, a, peak),
+    budgetTerm(
+      "network-ratio",
+      "level-shift network, worst case of the three tolerances",
+      netErr,
+      `R1, R2, R3 ± ${Number((tol * 100).toPrecision(4))} % at the worst corner, the reading's error at ±${formatVolts(peak)}: ${formatSI(netErr, "V")}`,
+      "one-point",
+    ),
   ];
   return {
     ok: true,
@@ -109,7 +106,7 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
       derived,
       notes,
       terms: fixed,
-      effectiveBits: bits + Math.log2((high - low) / vref),
+      codesSpannedBits: design.adc.bits + Math.log2((high - low) / vref),
       conversion: conversion(design, a, b),
       display: display(derived, network, low, high),
     },

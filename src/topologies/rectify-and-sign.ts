@@ -21,14 +21,14 @@ import { reverseVoltage } from "../../rules/reverse-voltage.ts";
 import { signDeadBand } from "../../rules/sign-dead-band.ts";
 import { supplyRange } from "../../rules/supply-range.ts";
 import { zeroCrossing } from "../../rules/zero-crossing.ts";
-import type { BudgetTerm, Conversion, RoleTerm } from "../core/engine/budget.ts";
+import { budgetTerm, type BudgetTerm, type Conversion, type RoleTerm } from "../core/engine/budget.ts";
 import { isFitResult } from "../core/engine/evaluate-part.ts";
 import type { Derived, DiodeUse, DisplayGroup, DisplayRow, RoleResult } from "../core/engine/result.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import { pumpRail } from "../core/math/charge-pump.ts";
 import { forwardVoltage } from "../core/math/diode.ts";
 import { endPhrase, forwardVoltageAt } from "../core/math/temperature.ts";
-import { ratioDeviation } from "../core/math/divider.ts";
+import { loadedRatioDeviation, sourceRatioDeviation, type Divider } from "../core/math/divider.ts";
 import { NPN_VBE_ON_V } from "../core/math/npn-inverter.ts";
 import type { DiodeStage, OpAmpStage, Rails, SignStage } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
@@ -36,6 +36,7 @@ import type { Diode } from "../core/schemas/diode.ts";
 import { formatSI, formatVolts } from "../core/units.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { rectifyAndSignChain } from "./rectify-and-sign-sim.ts";
+import { converterTerms } from "./converter-terms.ts";
 import { frontEnd } from "./front-end.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
 import { TIMING_ROLE_TERMS } from "./rectify-and-sign-timing.ts";
@@ -282,8 +283,8 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     outcome: {
       derived,
       notes,
-      terms: fixedTerms(design, k),
-      effectiveBits: design.adc.bits + Math.log2(W / design.adc.reference_v) + 1,
+      terms: fixedTerms(design, k, divider),
+      codesSpannedBits: design.adc.bits + Math.log2(W / design.adc.reference_v) + 1,
       conversion: conversion(design, k),
       display: display(design, derived),
     },
@@ -291,7 +292,16 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
 }
 
 const ROLE_TERMS: readonly RoleTerm[] = [
-  { name: "buffer-offset", label: "buffer offset and bias current", role: "buffer", rule: offset.id },
+  // The buffer's offset shifts the reading like a true offset (the sign follows the shifted signal): a
+  // two-point calibration removes it. The rectifier's adds to the magnitude of both halves alike, which
+  // no linear calibration of a signed reading removes.
+  {
+    name: "buffer-offset",
+    label: "buffer offset and bias current",
+    role: "buffer",
+    rule: offset.id,
+    removed_by: "two-point",
+  },
   { name: "rectifier-offset", label: "rectifier offset and bias current", role: "rectifier", rule: offset.id },
   { name: "buffer-bandwidth", label: "buffer gain error at f max", role: "buffer", rule: bandwidth.id },
   { name: "rectifier-bandwidth", label: "rectifier gain error at f max", role: "rectifier", rule: bandwidth.id },
@@ -300,30 +310,48 @@ const ROLE_TERMS: readonly RoleTerm[] = [
   ...TIMING_ROLE_TERMS,
 ];
 
-/** Terms that do not depend on the parts: the ADC, its reference, the divider. */
-export function fixedTerms(design: Design, k: number): BudgetTerm[] {
-  const { bits, reference_v, reference_tolerance } = design.adc;
+/** Terms that do not depend on the parts: the ADC, its reference, the divider and the source. */
+export function fixedTerms(design: Design, k: number, divider: Divider | null): BudgetTerm[] {
   const peak = design.signal.peak_v;
+  const terms = converterTerms(design, k, peak);
+  if (divider) terms.push(...dividerTerms(design, divider));
+  return terms;
+}
+
+/** The divider's ratio over its resistors' tolerance, and over the source's when the design gives one (SPEC §11.1). */
+export function dividerTerms(design: Design, d: Divider): BudgetTerm[] {
+  const peak = design.signal.peak_v;
+  const t = design.front_end.resistor_tolerance;
+  const dev = loadedRatioDeviation(d, t);
+  const worst = Math.max(Math.abs(dev.high), Math.abs(dev.low));
+  const kText = `k = ${si(d.bottom_ohm, "Ω")} / (${si(d.source_ohm, "Ω")} + ${si(d.top_ohm, "Ω")} + ${si(d.bottom_ohm, "Ω")}) = ${ratio(d.ratio)}`;
   const terms: BudgetTerm[] = [
-    {
-      name: "quantization",
-      label: "quantization, half a step",
-      v: (0.5 * (reference_v / 2 ** bits)) / k,
-      calibrates_out: false,
-    },
-    { name: "reference", label: "ADC reference tolerance", v: reference_tolerance * peak, calibrates_out: true },
+    budgetTerm(
+      "divider-ratio",
+      "divider ratio, worst case of both tolerances",
+      worst * peak,
+      `${kText}; R1, R2 ± ${pct(t)} at the worst corners: k changes by +${pct(dev.high)} / −${pct(-dev.low)}; ${pct(worst)} × ${formatSI(peak, "V")} = ${formatSI(worst * peak, "V")}`,
+      "one-point",
+    ),
   ];
-  if (k < 1) {
-    const dev = ratioDeviation(k, design.front_end.resistor_tolerance);
-    terms.push({
-      name: "divider-ratio",
-      label: "divider ratio, worst case of both tolerances",
-      v: Math.max(Math.abs(dev.high), Math.abs(dev.low)) * peak,
-      calibrates_out: true,
-    });
+  const ts = design.signal.source_tolerance;
+  if (ts !== undefined && d.source_ohm > 0) {
+    const sdev = sourceRatioDeviation(d, ts);
+    const sworst = Math.max(Math.abs(sdev.high), Math.abs(sdev.low));
+    terms.push(
+      budgetTerm(
+        "source-resistance",
+        "source resistance tolerance, through the divider",
+        sworst * peak,
+        `${kText}; Rs ± ${pct(ts)}: k changes by +${pct(sdev.high)} / −${pct(-sdev.low)}; ${pct(sworst)} × ${formatSI(peak, "V")} = ${formatSI(sworst * peak, "V")}`,
+        "one-point",
+      ),
+    );
   }
   return terms;
 }
+
+const pct = (x: number) => `${Number((x * 100).toPrecision(4))} %`;
 
 function conversion(design: Design, k: number): Conversion {
   const perCode = design.adc.reference_v / 2 ** design.adc.bits / k;
@@ -346,7 +374,8 @@ function display(design: Design, d: Derived): DisplayGroup[] {
         { label: "Target ratio = window ÷ peak", value: ratio(d.target_ratio) },
         { label: `Top resistor R1 (${series})`, value: si(d.divider.top_ohm, "Ω") },
         { label: `Bottom resistor R2 (${series})`, value: si(d.divider.bottom_ohm, "Ω") },
-        { label: "Ratio k = R2 / (R1 + R2)", value: ratio(d.divider.ratio) },
+        { label: "Source resistance Rs, in series with R1", value: si(d.divider.source_ohm, "Ω") },
+        { label: "Ratio k = R2 / (Rs + R1 + R2)", value: ratio(d.divider.ratio) },
         { label: "Total R1 + R2", value: si(d.divider.total_ohm, "Ω") },
       ]
     : [{ label: "Divider", value: "none: the peak already fits the window (k = 1)" }];
@@ -385,7 +414,7 @@ export const rectifyAndSign = defineTopology({
   id: "rectify-and-sign",
   title: "Rectify and sign",
   description:
-    "A divider (top R1, bottom R2 from the named E-series, ratio k = R2/(R1 + R2) as large as possible but not above window/peak) feeds a follower buffer; a comparator decides the sign; a two-op-amp precision rectifier folds the negative half up; an optional diode/capacitor charge pump makes V− = −(V_d − 2V_F) + I/(f·C_fly) + ripple/2, ripple = I/(f·C_res) (switched-capacitor resistance 1/(f·C)). Buffer in = out = ±W; rectifier out −Vf … W + Vf at noise gain 2; W = k · peak.",
+    "A divider (top R1, bottom R2 from the named E-series, ratio k = R2/(Rs + R1 + R2), loaded by the source resistance Rs, as large as possible but not above window/peak) feeds a follower buffer; a comparator decides the sign; a two-op-amp precision rectifier folds the negative half up; an optional diode/capacitor charge pump makes V− = −(V_d − 2V_F) + I/(f·C_fly) + ripple/2, ripple = I/(f·C_res) (switched-capacitor resistance 1/(f·C)). Buffer in = out = ±W; rectifier out −Vf … W + Vf at noise gain 2; W = k · peak.",
   reading: "volts = sign · (code + 0.5) · (V_ref/2^N)/k",
   fields: [
     "supply.positive_v",

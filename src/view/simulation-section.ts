@@ -2,7 +2,7 @@
 // the try page alike: what was simulated, how the largest error compares with the
 // static worst case (and which model to distrust when they disagree), and the
 // two pictures with their tables. Pure: a string of HTML, every text escaped.
-import type { DesignSimulation } from "../core/sim/run-design.ts";
+import type { DesignSimulation } from "../core/engine/simulate-result.ts";
 import { describeConditions, whyBeyond, type RunSummary } from "../core/sim/report.ts";
 import type { Trace } from "../core/sim/simulate.ts";
 import { formatSI } from "../core/units.ts";

@@ -71,14 +71,19 @@ describe("check --format json", () => {
 });
 
 describe("issue 3 acceptance", () => {
-  it("chooses 39 kΩ over 13 kΩ for 10 V into 2.5 V from E24 at 100 kΩ", async () => {
+  it("chooses 47 kΩ over 16 kΩ for 10 V into 2.5 V from E24 at 100 kΩ behind 1 kΩ: k = 16/64, loaded (SPEC §11.1)", async () => {
     const { out } = await run(
       "check",
       tempDesign(() => undefined),
       "--format",
       "json",
     );
-    expect(JSON.parse(out).designs[0].divider).toEqual({ top_ohm: 39000, bottom_ohm: 13000, ratio: 0.25 });
+    expect(JSON.parse(out).designs[0].divider).toEqual({
+      top_ohm: 47000,
+      bottom_ohm: 16000,
+      source_ohm: 1000,
+      ratio: 0.25,
+    });
   });
 
   it("with only a ground rail the buffer has no fit; exit 1 names the missing negative swing", async () => {

@@ -211,11 +211,11 @@ describe("parseCatalogueText", () => {
     const text = `${[...renamed.filter((c) => c !== "gbw_mhz"), "tags", "colour"].join(",")}\n`;
     expect(textProblems("op-amp", text)).toMatchInlineSnapshot(`
       [
-        "op-amps.csv:1: column 'remarks': unknown column (got 'remarks', expected one of id, name, status, cost_band, tags, notes, channels, supply_min_v, supply_max_v, icm_neg_headroom_v, icm_pos_headroom_v, out_neg_headroom_v, out_pos_headroom_v, out_load_ohm, vos_max_mv, vos_drift_uv_per_c, ib_max_na, gbw_mhz, slew_v_per_us, iq_ma, noise_nv_rthz, unity_gain_stable, phase_reversal, input_fet, vdiff_max_v, overload_recovery_us, iout_max_ma)",
+        "op-amps.csv:1: column 'remarks': unknown column (got 'remarks', expected one of id, name, status, cost_band, tags, notes, channels, supply_min_v, supply_max_v, icm_neg_headroom_v, icm_pos_headroom_v, out_neg_headroom_v, out_pos_headroom_v, out_load_ohm, vos_max_mv, vos_drift_uv_per_c, ib_max_na, gbw_mhz, slew_v_per_us, iq_ma, noise_nv_rthz, unity_gain_stable, phase_reversal, input_fet, vdiff_max_v, overload_recovery_us, iout_max_ma, in_pa_rthz)",
         "op-amps.csv:1: column 'Supply_Max_V': unknown column (got 'Supply_Max_V', expected 'supply_max_v')",
         "op-amps.csv:1: column 'slew_v_us': unknown column (got 'slew_v_us', expected 'slew_v_per_us')",
         "op-amps.csv:1: column 'tags': column appears twice (expected each column once)",
-        "op-amps.csv:1: column 'colour': unknown column (got 'colour', expected one of id, name, status, cost_band, tags, notes, channels, supply_min_v, supply_max_v, icm_neg_headroom_v, icm_pos_headroom_v, out_neg_headroom_v, out_pos_headroom_v, out_load_ohm, vos_max_mv, vos_drift_uv_per_c, ib_max_na, gbw_mhz, slew_v_per_us, iq_ma, noise_nv_rthz, unity_gain_stable, phase_reversal, input_fet, vdiff_max_v, overload_recovery_us, iout_max_ma)",
+        "op-amps.csv:1: column 'colour': unknown column (got 'colour', expected one of id, name, status, cost_band, tags, notes, channels, supply_min_v, supply_max_v, icm_neg_headroom_v, icm_pos_headroom_v, out_neg_headroom_v, out_pos_headroom_v, out_load_ohm, vos_max_mv, vos_drift_uv_per_c, ib_max_na, gbw_mhz, slew_v_per_us, iq_ma, noise_nv_rthz, unity_gain_stable, phase_reversal, input_fet, vdiff_max_v, overload_recovery_us, iout_max_ma, in_pa_rthz)",
         "op-amps.csv:1: column 'supply_max_v': required column is missing (expected it in the header)",
         "op-amps.csv:1: column 'gbw_mhz': required column is missing (expected it in the header)",
         "op-amps.csv:1: column 'slew_v_per_us': required column is missing (expected it in the header)",

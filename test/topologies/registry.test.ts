@@ -111,7 +111,7 @@ describe("topology registry", () => {
             },
             notes: [],
             terms: [],
-            effectiveBits: d.adc.bits,
+            codesSpannedBits: d.adc.bits,
             conversion: { volts_per_code: 1, offset_v: 0, formula: "", sign: "" },
             display: [],
           },

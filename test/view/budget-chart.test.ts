@@ -1,12 +1,12 @@
 // The budget bar chart: escaped text, bars to scale, the requirement marked.
 import { describe, expect, it } from "vitest";
-import type { Budget } from "../../src/core/engine/budget.ts";
+import { budgetTerm, type Budget } from "../../src/core/engine/budget.ts";
 import { renderBudgetChart } from "../../src/view/budget-chart.ts";
 
 const budget: Budget = {
   terms: [
-    { name: "quantization", label: "quantization <b>&", v: 0.01, calibrates_out: false },
-    { name: "reference", label: "reference", v: 0.04, calibrates_out: true },
+    budgetTerm("quantization", "quantization <b>&", 0.01, "0.5 × Q / k", "none"),
+    budgetTerm("reference", "reference", 0.04, "tolerance × peak", "one-point"),
   ],
   worst_case_v: 0.05,
   rss_v: Math.hypot(0.01, 0.04),
@@ -14,7 +14,8 @@ const budget: Budget = {
   verdict: "pass",
   dominant: "reference",
   calibrated: { worst_case_v: 0.01, rss_v: 0.01, verdict: "pass", dominant: "quantization" },
-  effective_bits: 10,
+  calibrated_two_point: { worst_case_v: 0.01, rss_v: 0.01, verdict: "pass", dominant: "quantization" },
+  codes_spanned_bits: 10,
   missing: [],
 };
 
@@ -38,7 +39,7 @@ describe("renderBudgetChart", () => {
   it("keeps the largest term's value and mark inside the picture when it nearly fills the scale", () => {
     const crowded: Budget = {
       ...budget,
-      terms: [{ name: "reference", label: "reference", v: 0.0999, calibrates_out: true }],
+      terms: [budgetTerm("reference", "reference", 0.0999, "tolerance × peak", "one-point")],
       worst_case_v: 0.0999,
       rss_v: 0.0999,
       required_v: 0.05,

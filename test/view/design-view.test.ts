@@ -40,7 +40,8 @@ describe("derivedGroups", () => {
       "Target ratio = window ÷ peak": "0.25",
       "Top resistor R1 (E24)": "30 kΩ",
       "Bottom resistor R2 (E24)": "10 kΩ",
-      "Ratio k = R2 / (R1 + R2)": "0.25",
+      "Source resistance Rs, in series with R1": "0 Ω",
+      "Ratio k = R2 / (Rs + R1 + R2)": "0.25",
       "Total R1 + R2": "40 kΩ",
     });
     // IEEE Std 1241-2010: Q = 5 V / 2^10 = 4.8828 mV, ÷ k 0.25 = 19.53 mV at the input.

@@ -252,7 +252,7 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
     );
     expect(role("buffer").rejected.length).toBeGreaterThan(0);
     const fitIds = new Set(fits.map((p) => p.part.id));
-    expect(listedIn(buffer, /<tr id="buffer--([a-z0-9-]+)"/g).filter((id) => !fitIds.has(id))).toEqual(
+    expect(listedIn(buffer, /<tr id="buffer--([a-z0-9-]+)"/g).filter((id) => !fitIds.has(id ?? ""))).toEqual(
       role("buffer").rejected.map((p) => p.part.id),
     );
   });
@@ -311,14 +311,16 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
 
   it("shows the derived values: pumped rail with droop and ripple, divider, window, ADC step", () => {
     const html = page(`${BASE}designs/bridge-10v-5v-adc/`);
-    // Droop 0.5 mA/(980 Hz · 1 µF) = 510 mV, ripple 0.5 mA/(980 Hz · 10 µF) = 51.0 mV; E24 39k/13k = 0.25;
+    // Droop 0.5 mA/(980 Hz · 1 µF) = 510 mV, ripple 0.5 mA/(980 Hz · 10 µF) = 51.0 mV; E24 47k/16k behind the
+    // 1 kΩ source: 16/(1 + 47 + 16) = 0.25 (SPEC §11.1, loaded ratio);
     // ADC step (5 V / 1024) / 0.25 = 19.5 mV (IEEE Std 1241-2010, Q = V_FS / 2^N).
     for (const text of [
       "<dd>510 mV</dd>",
       "<dd>51 mV</dd>",
       "<dd>−3.16 V</dd>",
-      "<dd>39 kΩ</dd>",
-      "<dd>13 kΩ</dd>",
+      "<dd>47 kΩ</dd>",
+      "<dd>16 kΩ</dd>",
+      "<dd>1 kΩ</dd>",
       "<dd>0.25</dd>",
       "<dd>±2.50 V</dd>",
       "<dd>19.5 mV</dd>",

@@ -134,7 +134,9 @@ describe("layoutRailDiagram", () => {
   });
 
   it("refuses a diode", () => {
-    expect(() => layoutRailDiagram({ part: diode(), stage: buffer, rails })).toThrow(/parts that run from the rails only/);
+    expect(() => layoutRailDiagram({ part: diode(), stage: buffer, rails })).toThrow(
+      /parts that run from the rails only/,
+    );
   });
 });
 

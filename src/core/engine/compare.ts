@@ -18,12 +18,13 @@ export function compare(results: DesignResult[], catalogue: Catalogue): Comparis
     return {
       topology: r.topology,
       holds: designHolds(r),
+      state: r.verdict.state,
       roles: r.roles.map((role) => ({
         role: role.role,
         fits: role.fitCount,
         ...(role.chosen !== undefined ? { chosen: role.chosen } : {}),
       })),
-      effective_bits: r.budget.effective_bits,
+      codes_spanned_bits: r.budget.codes_spanned_bits,
       budget_verdict: r.budget.verdict,
       budget_worst_case_v: r.budget.worst_case_v,
       dominant: r.budget.dominant,
@@ -36,7 +37,7 @@ export function compare(results: DesignResult[], catalogue: Catalogue): Comparis
       Number(b.holds) - Number(a.holds) ||
       VERDICT_RANK[a.budget_verdict] - VERDICT_RANK[b.budget_verdict] ||
       a.cost_total - b.cost_total ||
-      b.effective_bits - a.effective_bits,
+      b.codes_spanned_bits - a.codes_spanned_bits,
   );
   const best = ranked[0];
   const other = ranked[1];
@@ -53,5 +54,5 @@ function reasonFor(best: ComparisonRow, other: ComparisonRow | undefined): strin
   if (best.cost_total !== other.cost_total) {
     return `both budgets ${best.budget_verdict === "pass" ? "pass" : best.budget_verdict === "marginal" ? "are marginal" : "fail"}, and it costs less (cost bands ${best.cost_total} against ${other.cost_total}, ${best.part_count} parts against ${other.part_count})`;
   }
-  return `as good on budget and cost, and it uses ${best.effective_bits.toFixed(1)} effective bits against ${other.effective_bits.toFixed(1)}`;
+  return `as good on budget and cost, and its signal spans ${best.codes_spanned_bits.toFixed(1)} bits of codes against ${other.codes_spanned_bits.toFixed(1)}`;
 }

@@ -7,6 +7,7 @@ import type { Rails, Stage } from "../rule-kit/types.ts";
 import type { Design, Role } from "../schemas/design.ts";
 import { buildBudget } from "./budget.ts";
 import { compare } from "./compare.ts";
+import { designVerdict } from "./design-verdict.ts";
 import type { DesignProblem, DesignResult, Evaluation, RoleResult } from "./result.ts";
 import { runRole, type RoleSpec } from "./run-role.ts";
 import type { RoleCondition, RoleDef, StagePlan, TopologyDef } from "./topology.ts";
@@ -155,7 +156,13 @@ export function createEngine(topologies: readonly TopologyDef[]): Engine {
     const o = evaluated.outcome;
     const order = t.roles.map((r) => r.id);
     ran.sort((a, b) => order.indexOf(a.role) - order.indexOf(b.role));
-    const budget = buildBudget(scoped, o.terms, t.roleTerms, ran, o.effectiveBits);
+    const budget = buildBudget(scoped, {
+      fixed: o.terms,
+      roleTerms: t.roleTerms,
+      roles: ran,
+      codesSpannedBits: o.codesSpannedBits,
+      ...(o.noise ? { noise: o.noise } : {}),
+    });
     const result: DesignResult = {
       design: scoped,
       topology: t.id,
@@ -164,6 +171,7 @@ export function createEngine(topologies: readonly TopologyDef[]): Engine {
       roles: ran,
       notes: o.notes,
       budget,
+      verdict: designVerdict(ran, budget),
       conversion: o.conversion,
     };
     return { ok: true, result };

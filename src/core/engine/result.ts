@@ -8,6 +8,7 @@ import { isFitResult, type PartResult } from "./evaluate-part.ts";
 import type { Rails, Stage } from "../rule-kit/types.ts";
 import type { SimulationOutcome } from "../sim/report.ts";
 import type { Budget, Conversion } from "./budget.ts";
+import type { DesignState, DesignVerdict } from "./design-verdict.ts";
 
 /** A derived value the pages, the try page and the CLI print as it is. */
 export type DisplayRow = { label: string; value: string; partId?: string; role?: string };
@@ -74,6 +75,8 @@ export type DesignResult = {
   /** Things the reader must know about how the numbers were obtained. */
   notes: string[];
   budget: Budget;
+  /** The design's verdict with its reasons (SPEC §11.11): roles, BOM parts and the budget together. */
+  verdict: DesignVerdict;
   conversion: Conversion;
   /** The behavioural simulation's report (SPEC §13), when the caller ran it (CLI, site build, try page on demand). */
   simulation?: SimulationOutcome;
@@ -84,8 +87,10 @@ export type DesignResult = {
 export type ComparisonRow = {
   topology: string;
   holds: boolean;
+  /** The topology's design verdict (SPEC §11.11). */
+  state: DesignState;
   roles: { role: Role; fits: number; chosen?: string }[];
-  effective_bits: number;
+  codes_spanned_bits: number;
   budget_verdict: Budget["verdict"];
   budget_worst_case_v: number;
   dominant: string | null;
@@ -106,7 +111,7 @@ export type DesignProblem = { path: string; message: string };
 
 export type Evaluation = { ok: true; result: DesignResult } | { ok: false; problems: DesignProblem[] };
 
-/** Exit-0 condition of SPEC §10: every BOM part fits and every required role has a fit. */
+/** Every BOM part fits and every required role has a fit (SPEC §10); the budget is not read: see `verdict`. */
 export function designHolds(result: DesignResult): boolean {
   return result.roles.every((r) => {
     if (r.optional && r.fitCount === 0 && !r.bom) return true;

@@ -5,8 +5,8 @@ import type { Catalogue } from "../catalogue-index.ts";
 import type { Capability } from "../kinds.ts";
 import type { AnyRule, Rails, Stage } from "../rule-kit/types.ts";
 import type { Design } from "../schemas/design.ts";
-import type { ChainBuilder } from "../sim/run-design.ts";
-import type { BudgetTerm, Conversion, RoleTerm } from "./budget.ts";
+import type { ChainBuilder } from "./simulate-result.ts";
+import type { BudgetTerm, Conversion, NoiseFigure, RoleTerm } from "./budget.ts";
 import type { Derived, DesignProblem, DisplayGroup, RoleResult } from "./result.ts";
 
 export type { DisplayGroup, DisplayRow } from "./result.ts";
@@ -56,10 +56,12 @@ export type StagePlan = {
 export type TopologyOutcome = {
   derived: Derived;
   notes: string[];
-  /** Budget terms that do not come from a role's finding (quantization, ratios, anything new). */
+  /** Budget terms that do not come from a role's finding (quantization, ratios, noise, anything new). */
   terms: BudgetTerm[];
-  /** Codes of the ADC the signal spans, in bits. */
-  effectiveBits: number;
+  /** Codes of the ADC the signal spans, in bits (not an ENOB). */
+  codesSpannedBits: number;
+  /** The chain's noise and the ENOB it leaves (SPEC §11.9), when the topology works it out. */
+  noise?: NoiseFigure;
   conversion: Conversion;
   /** Its derived values, worded, in the order the reader needs them. */
   display: DisplayGroup[];

@@ -1,37 +1,57 @@
-// The attenuating divider of SPEC §6: top R1, bottom R2 from a preferred series.
+// The attenuating divider of SPEC §6 and §11.1: top R1, bottom R2 from a
+// preferred series, loaded by the source resistance Rs in series with R1.
 import { seriesValues, type SeriesName } from "./e-series.ts";
 
-export type Divider = { top_ohm: number; bottom_ohm: number; ratio: number; total_ohm: number };
+export type Divider = {
+  top_ohm: number;
+  bottom_ohm: number;
+  /** The loaded ratio k = R2/(Rs + R1 + R2) (SPEC §11.1). */
+  ratio: number;
+  /** R1 + R2, the divider's own total. */
+  total_ohm: number;
+  /** Rs, the source resistance the ratio includes. */
+  source_ohm: number;
+};
+
+/** The loaded ratio R2/(Rs + R1 + R2). */
+export function loadedRatio(topOhm: number, bottomOhm: number, sourceOhm: number): number {
+  return bottomOhm / (sourceOhm + topOhm + bottomOhm);
+}
 
 // Ratios equal to within this are the same ratio (float noise from R2/(R1+R2)).
 const RATIO_EPSILON = 1e-12;
 
 /**
- * Largest ratio k = R2/(R1+R2) not above `target`, with the total within
- * 0.5…2 × `total`; ties go to the total closest to `total` (by log distance).
- * Returns null when no divider is needed (target ≥ 1) and undefined when no
- * pair of the series fits.
+ * Largest loaded ratio k = R2/(Rs+R1+R2) not above `target`, with R1 + R2
+ * within 0.5…2 × `total`; ties go to the total closest to `total` (by log
+ * distance). Returns null when no divider is needed (target ≥ 1) and
+ * undefined when no pair of the series fits.
  */
-export function chooseDivider(target: number, total: number, series: SeriesName): Divider | null | undefined {
+export function chooseDivider(
+  target: number,
+  total: number,
+  series: SeriesName,
+  sourceOhm = 0,
+): Divider | null | undefined {
   if (target >= 1) return null;
-  const key = `${target}|${total}|${series}`;
+  const key = `${target}|${total}|${series}|${sourceOhm}`;
   if (memo.has(key)) return memo.get(key);
   const values = seriesValues(series);
   let best: Divider | undefined;
   for (const r2 of values) {
-    // k ≤ target ⇔ R1 ≥ R2·(1/target − 1); larger R1 only lowers k, so the first
-    // R1 from there whose total is in range is this R2's best.
-    const r1Min = r2 * (1 / target - 1) * (1 - RATIO_EPSILON);
+    // k ≤ target ⇔ R1 ≥ R2·(1/target − 1) − Rs; larger R1 only lowers k, so the
+    // first R1 from there whose total is in range is this R2's best.
+    const r1Min = (r2 * (1 / target - 1) - sourceOhm) * (1 - RATIO_EPSILON);
     for (let i = lowerBound(values, r1Min); i < values.length; i++) {
       const r1 = values[i] ?? 0;
       const sum = r1 + r2;
       if (sum > 2 * total) break;
       if (sum < 0.5 * total) continue;
-      const k = r2 / sum;
+      const k = loadedRatio(r1, r2, sourceOhm);
       if (k > target * (1 + RATIO_EPSILON)) continue;
       const sameRatio = best !== undefined && Math.abs(k - best.ratio) <= best.ratio * RATIO_EPSILON;
       if (!best || (!sameRatio && k > best.ratio) || (sameRatio && closer(sum, best.total_ohm, total))) {
-        best = { top_ohm: r1, bottom_ohm: r2, ratio: k, total_ohm: sum };
+        best = { top_ohm: r1, bottom_ohm: r2, ratio: k, total_ohm: sum, source_ohm: sourceOhm };
       }
       break;
     }
@@ -72,4 +92,26 @@ export function theveninOhm(sourceOhm: number, divider: Divider | null): number 
 export function ratioDeviation(k: number, t: number): { high: number; low: number } {
   if (k >= 1) return { high: 0, low: 0 };
   return { high: (2 * t * (1 - k)) / (1 - t + 2 * k * t), low: (-2 * t * (1 - k)) / (1 + t - 2 * k * t) };
+}
+
+/**
+ * Exact worst-case change of the loaded ratio R2/(Rs+R1+R2) with R1 and R2
+ * each off by ±t in the worst directions and Rs at its nominal value (k rises
+ * with R2 and falls with R1, so the corners are the extremes). With Rs = 0 it
+ * is `ratioDeviation`.
+ */
+export function loadedRatioDeviation(d: Divider, t: number): { high: number; low: number } {
+  const k = d.ratio;
+  const high = loadedRatio(d.top_ohm * (1 - t), d.bottom_ohm * (1 + t), d.source_ohm) / k - 1;
+  const low = loadedRatio(d.top_ohm * (1 + t), d.bottom_ohm * (1 - t), d.source_ohm) / k - 1;
+  return { high, low };
+}
+
+/** Worst-case change of the loaded ratio over Rs ± t with R1 and R2 nominal (SPEC §11.1's source term). */
+export function sourceRatioDeviation(d: Divider, t: number): { high: number; low: number } {
+  const k = d.ratio;
+  return {
+    high: loadedRatio(d.top_ohm, d.bottom_ohm, d.source_ohm * (1 - t)) / k - 1,
+    low: loadedRatio(d.top_ohm, d.bottom_ohm, d.source_ohm * (1 + t)) / k - 1,
+  };
 }

@@ -210,6 +210,8 @@ function designObject(names: DesignNames) {
       peak_v: si({ above: 0, max: 100000 }),
       max_frequency_hz: si({ above: 0 }),
       source_ohm: si({ min: 0 }),
+      /** Optional (SPEC §11.1): the source resistance's tolerance, a budget term of its own. */
+      source_tolerance: si({ min: 0, max: 1 }).optional(),
     }),
     front_end: z.strictObject({
       window_v: si({ above: 0 }),
@@ -217,6 +219,8 @@ function designObject(names: DesignNames) {
       resistor_tolerance: si({ min: 0, max: 0.2 }),
       series: oneOf(SERIES),
       rectifier_load_ohm: si({ above: 0 }),
+      /** Optional (SPEC §11.2): the rectifier's resistors' tolerance; resistor_tolerance when absent. */
+      rectifier_tolerance: si({ min: 0, max: 0.2 }).optional(),
       /** Series resistor into the sign input: limits the current when its input clamps conduct (issue 21). */
       sign_series_ohm: si({ above: 0 }).optional(),
     }),
@@ -224,6 +228,11 @@ function designObject(names: DesignNames) {
       bits: si({ integer: true, min: 1, max: 32 }),
       reference_v: si({ above: 0, max: 100 }),
       reference_tolerance: si({ min: 0, max: 0.2 }),
+      // Optional (SPEC §11.10): the reference's tempco and the converter's own errors.
+      reference_tempco_ppm_per_c: si({ min: 0, max: 10000 }).optional(),
+      offset_lsb: si({ min: 0, max: 1e6 }).optional(),
+      gain_error: si({ min: 0, max: 0.5 }).optional(),
+      inl_lsb: si({ min: 0, max: 1e6 }).optional(),
     }),
     logic: z.strictObject({
       vdd_v: si({ above: 0, max: 100 }),

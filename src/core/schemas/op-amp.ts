@@ -27,6 +27,8 @@ export const opAmpColumns = {
   vdiff_max_v: optionalNumber({ unit: "V", label: "Differential input max" }, { min: 0 }),
   overload_recovery_us: optionalNumber({ unit: "µs", label: "Overload recovery" }, { min: 0 }),
   iout_max_ma: optionalNumber({ unit: "mA", label: "Output current max" }, { above: 0 }),
+  // Optional (SPEC §11.9): input current noise; where empty, the budget leaves it out and says so.
+  in_pa_rthz: optionalNumber({ unit: "pA/√Hz", label: "Current noise" }, { min: 0 }),
 };
 
 export const opAmpRow = partRow("op-amp", opAmpColumns, checkSupplyAndHeadroom);

@@ -1,15 +1,13 @@
 // Accuracy budget (SPEC §8): terms, sums, verdicts and calibration.
 import { describe, expect, it } from "vitest";
-import { buildBudget, sumTerms, type BudgetTerm } from "../../../src/core/engine/budget.ts";
+import { budgetTerm, buildBudget, sumTerms, type BudgetTerm } from "../../../src/core/engine/budget.ts";
 import { fixedTerms } from "../../../src/topologies/rectify-and-sign.ts";
 import { design as designFor } from "../../helpers/designs.ts";
 
-const term = (name: string, v: number, calibrates_out = false): BudgetTerm => ({
-  name,
-  label: name,
-  v,
-  calibrates_out,
-});
+const term = (name: string, v: number, calibrates_out = false): BudgetTerm =>
+  budgetTerm(name, name, v, `${name} = ${v} V`, calibrates_out ? "one-point" : "none");
+
+const divider = { top_ohm: 30000, bottom_ohm: 10000, ratio: 0.25, total_ohm: 40000, source_ohm: 0 };
 
 const design = () => designFor({ id: "budget-case", signal: { peak_v: 10 } });
 
@@ -42,7 +40,7 @@ describe("sumTerms", () => {
 
 describe("fixedTerms for rectify-and-sign", () => {
   const d = design();
-  const terms = Object.fromEntries(fixedTerms(d, 0.25).map((t) => [t.name, t]));
+  const terms = Object.fromEntries(fixedTerms(d, 0.25, divider).map((t) => [t.name, t]));
 
   it("quantization is half a step referred through k (IEEE 1241: 10 bit at 5 V, Q = 4.8828 mV)", () => {
     expect(terms.quantization?.v).toBeCloseTo((0.5 * 4.8828125e-3) / 0.25, 12);
@@ -61,7 +59,7 @@ describe("fixedTerms for rectify-and-sign", () => {
   });
 
   it("has no divider term when no divider is needed (k = 1)", () => {
-    expect(fixedTerms(d, 1).map((t) => t.name)).toEqual(["quantization", "reference"]);
+    expect(fixedTerms(d, 1, null).map((t) => t.name)).toEqual(["quantization", "reference"]);
   });
 });
 
@@ -69,26 +67,24 @@ describe("buildBudget", () => {
   it("marks a budget with a role lacking a part as failed and names the role", () => {
     const d = design();
     const roles = [{ role: "buffer", fits: [], rejected: [], optional: false }] as never;
-    const b = buildBudget(
-      d,
-      [term("quantization", 0.001)],
-      [{ name: "buffer-offset", label: "buffer", role: "buffer", rule: "offset" }],
+    const b = buildBudget(d, {
+      fixed: [term("quantization", 0.001)],
+      roleTerms: [{ name: "buffer-offset", label: "buffer", role: "buffer", rule: "offset" }],
       roles,
-      10,
-    );
+      codesSpannedBits: 10,
+    });
     expect(b.missing).toEqual(["buffer"]);
     expect(b.verdict).toBe("fail");
   });
 
   it("after calibration keeps only the terms a gain calibration cannot remove", () => {
     const d = design();
-    const b = buildBudget(
-      d,
-      [term("quantization", 0.01), term("reference", 0.1, true), term("divider-ratio", 0.05, true)],
-      [],
-      [],
-      10,
-    );
+    const b = buildBudget(d, {
+      fixed: [term("quantization", 0.01), term("reference", 0.1, true), term("divider-ratio", 0.05, true)],
+      roleTerms: [],
+      roles: [],
+      codesSpannedBits: 10,
+    });
     expect(b.verdict).toBe("fail");
     expect(b.calibrated.worst_case_v).toBeCloseTo(0.01, 12);
     expect(b.calibrated.verdict).toBe("pass");

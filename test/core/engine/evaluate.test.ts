@@ -182,14 +182,35 @@ describe("evaluateDesign: issue 3 acceptance", () => {
     expect(designHolds(r)).toBe(false);
   });
 
-  it("10 V peak into a 2.5 V window from E24 with a 100 kΩ target: 39 kΩ over 13 kΩ, k = 0.25", () => {
+  it("10 V peak into a 2.5 V window from E24 with a 100 kΩ target and a 1 kΩ source: 47 kΩ over 16 kΩ, k = 0.25 loaded", () => {
+    // SPEC §11.1: k = R2/(Rs + R1 + R2). 39k/13k (issue 3's pick, unloaded) gives 13/53 = 0.24528 behind
+    // 1 kΩ; the loaded search finds 16k/(1k + 47k + 16k) = 0.25 exactly.
     const r = evaluate({ signal: { peak_v: 10, source_ohm: 1000 } });
-    expect(r.derived.divider).toEqual({ top_ohm: 39000, bottom_ohm: 13000, ratio: 0.25, total_ohm: 52000 });
+    expect(r.derived.divider).toEqual({
+      top_ohm: 47000,
+      bottom_ohm: 16000,
+      ratio: 0.25,
+      total_ohm: 63000,
+      source_ohm: 1000,
+    });
     expect(r.derived.ratio).toBe(0.25);
     expect(r.derived.window_v).toBe(2.5);
     expect(r.derived.target_ratio).toBe(0.25);
-    // (Rs + R1) ‖ R2 = 40 kΩ ‖ 13 kΩ
-    expect(r.derived.thevenin_ohm).toBeCloseTo((40e3 * 13e3) / 53e3, 9);
+    // (Rs + R1) ‖ R2 = 48 kΩ ‖ 16 kΩ = 12 kΩ
+    expect(r.derived.thevenin_ohm).toBeCloseTo(12e3, 9);
+    // The firmware constant uses the loaded k: (5 V / 2^10) / 0.25 = 19.531 mV per code (IEEE 1241 Q = V_ref/2^N).
+    expect(r.conversion.volts_per_code).toBeCloseTo(0.019531, 6);
+  });
+
+  it("with no source resistance, 39 kΩ over 13 kΩ: k = 0.25 (issue 3)", () => {
+    const r = evaluate({ signal: { peak_v: 10, source_ohm: 0 } });
+    expect(r.derived.divider).toEqual({
+      top_ohm: 39000,
+      bottom_ohm: 13000,
+      ratio: 0.25,
+      total_ohm: 52000,
+      source_ohm: 0,
+    });
   });
 
   it("needs no divider when the peak fits the window", () => {

@@ -2,10 +2,10 @@
 // `simulation` hook) makes the chain, both frequencies run, and the report
 // compares the larger error with the static budget's worst case.
 import type { Catalogue } from "../catalogue-index.ts";
-import type { DesignResult } from "../engine/result.ts";
-import type { Chain, ChainBuild } from "./chain.ts";
-import { reportOf, type SimulationReport } from "./report.ts";
-import { simulateChain, type ChainRun } from "./simulate.ts";
+import type { DesignResult } from "./result.ts";
+import type { Chain, ChainBuild } from "../sim/chain.ts";
+import { reportOf, type SimulationReport } from "../sim/report.ts";
+import { simulateChain, type ChainRun } from "../sim/simulate.ts";
 
 export type ChainBuilder = (result: DesignResult, catalogue: Catalogue) => ChainBuild;
 
