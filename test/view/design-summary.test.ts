@@ -39,7 +39,7 @@ describe("summarizeDesign", () => {
 
   it("names a BOM part that does not fit", () => {
     expect(summarizeDesign(entry({ bom: { buffer: "oa-low", rectifier: "oa-low" } })).line).toMatchInlineSnapshot(
-      `"BOM parts oa-low (buffer) and oa-low (rectifier) do not fit. Accuracy budget passes (worst case 61.2 mV against 100 mV)."`,
+      `"BOM parts oa-low (buffer) and oa-low (rectifier) do not fit. Accuracy budget passes (worst case 87.5 mV against 100 mV)."`,
     );
   });
 
@@ -48,7 +48,7 @@ describe("summarizeDesign", () => {
     const s = summarizeDesign(entry({ signal: { peak_v: 10 }, front_end: { divider_total_ohm: 40000 } }));
     expect(s).toEqual(expect.objectContaining({ ok: true, holds: false, verdict: "fails" }));
     expect(s.line).toMatchInlineSnapshot(
-      `"No part fits the buffer and rectifier. Accuracy budget incomplete: no part for the buffer and rectifier."`,
+      `"No part fits the buffer, rectifier and sign comparator. Accuracy budget incomplete: no part for the buffer, rectifier and sign comparator."`,
     );
   });
 
