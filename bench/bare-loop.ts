@@ -68,6 +68,8 @@ const COLUMNS = [
   "gbw_mhz",
   "slew_v_per_us",
   "tpd_ns",
+  "tpd_overdrive_mv",
+  "hysteresis_mv",
   "vf_1ma_v",
   "vf_10ma_v",
   "ir_na",
@@ -82,7 +84,15 @@ const COLUMNS = [
 export function tableOf(parts: readonly Part[]): Table {
   const n = parts.length;
   const col: Record<string, Float64Array> = {};
-  for (const c of [...COLUMNS, "is_op_amp", "open_drain", "unity_gain_stable", "phase_reversal", "schottky"]) {
+  for (const c of [
+    ...COLUMNS,
+    "is_op_amp",
+    "open_drain",
+    "unity_gain_stable",
+    "phase_reversal",
+    "schottky",
+    "status_cost",
+  ]) {
     col[c] = new Float64Array(n).fill(NaN);
   }
   parts.forEach((p, i) => {
@@ -95,6 +105,9 @@ export function tableOf(parts: readonly Part[]): Table {
       if (p.phase_reversal !== undefined) (col.phase_reversal as Float64Array)[i] = p.phase_reversal ? 1 : 0;
     }
     if (p.kind === "diode") (col.schottky as Float64Array)[i] = p.type === "schottky" ? 1 : 0;
+    // The ranking's middle keys (SPEC §7) folded as the engine folds them: status, then cost band (none last).
+    const status = p.status === "stocked" ? 0 : p.status === "approved" ? 1 : p.status === "listed" ? 2 : 3;
+    (col.status_cost as Float64Array)[i] = status * 8 + (p.cost_band ?? 6);
   });
   return { ids: parts.map((p) => p.id), n, col };
 }
@@ -161,6 +174,24 @@ export function bareLoop(plans: readonly RolePlan[], out: readonly RoleOutput[])
   }
 }
 
+/**
+ * The bare loop, then each role's fits ranked as SPEC §7 ranks them (verdict,
+ * status, cost band, least relative margin, then list order) and its
+ * rejections kept in list order: the least work that gives what a page reads.
+ */
+export function bareLoopSorted(plans: readonly RolePlan[], out: readonly RoleOutput[]): Uint32Array[] {
+  bareLoop(plans, out);
+  return plans.map((plan, r) => {
+    const o = out[r] as RoleOutput;
+    const key = plan.table.col.status_cost as Float64Array;
+    const fits: number[] = [];
+    for (let i = 0; i < plan.table.n; i++) if ((o.severity[i] as number) <= MARGINAL) fits.push(i);
+    const major = (i: number) => (o.severity[i] as number) * 64 + (key[i] as number);
+    fits.sort((a, b) => major(a) - major(b) || (o.relative[b] as number) - (o.relative[a] as number) || a - b);
+    return Uint32Array.from(fits);
+  });
+}
+
 function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: Uint8Array, rel: Float64Array): void {
   const { design, stage, rails, table } = plan;
   const c = table.col as Record<(typeof COLUMNS)[number] | "is_op_amp" | "open_drain", Float64Array> &
@@ -197,6 +228,48 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
     if ((sev[i] as number) < UNRATED) sev[i] = UNRATED;
   };
   const range = stage.stage === "diode" ? { low: 0, high: 0 } : stage.input;
+  // The sign stage's own delay (rules/sign-delay.ts): tpd + V_od/S + (Vh/2)/S, or an op amp's integrator-then-slew transition.
+  const slope = 2 * Math.PI * f * Math.max(Math.abs(range.low), Math.abs(range.high));
+  const stageDelayAt = (i: number): { seconds: number; budget: number; assumed: boolean } => {
+    if (c.is_op_amp[i] === 1) {
+      const swing = Math.max(0, P - (c.out_pos_headroom_v[i] as number) - (N + (c.out_neg_headroom_v[i] as number)));
+      const accel = 2 * Math.PI * (c.gbw_mhz[i] as number) * 1e6 * slope;
+      const sr = (c.slew_v_per_us[i] as number) * 1e6;
+      const onset = sr / accel;
+      const onsetV = (sr * onset) / 2;
+      const t = swing <= onsetV ? Math.sqrt((2 * swing) / accel) : onset + (swing - onsetV) / sr;
+      return { seconds: t, budget: t, assumed: false };
+    }
+    const od = c.tpd_overdrive_mv[i] as number;
+    const vh = c.hysteresis_mv[i] as number;
+    const own = (c.tpd_ns[i] as number) * 1e-9 + (od === od ? od * 1e-3 : 0.1) / slope;
+    const hyst = vh === vh && vh > 0 ? (vh * 1e-3) / 2 / slope : 0;
+    return { seconds: own + hyst, budget: own, assumed: od !== od };
+  };
+  // The edge the level shift makes at the logic pin (rules/sign-path.ts signEdge); NaN when no pull-up is given.
+  const edgeAt = (i: number): number => {
+    const { logic } = design;
+    const cap = logic.pin_cap_f ?? DEFAULT_PIN_CAP_F;
+    const clamp = stage.stage === "sign" ? stage.clamp : undefined;
+    const outPos = c.out_pos_headroom_v[i] as number;
+    const outNeg = c.out_neg_headroom_v[i] as number;
+    const high = c.open_drain[i] === 1 ? null : P - (outPos === outPos ? outPos : 0);
+    if (logic.level_shift === "diode-clamp") {
+      if (high === null || !(high > 0)) return 0;
+      const vf = clamp ? forwardVoltage(clamp, clampSourceCurrent(high, logic.pull_down_ohm, clamp)) : 0;
+      return pullUpEdge(logic.pull_down_ohm, cap, Math.max(0, high - vf), 0, logic.vil_v).seconds;
+    }
+    if (logic.level_shift === "pull-up" && high !== null) return 0;
+    if (logic.pull_up_ohm === undefined) return NaN;
+    if (logic.level_shift === "npn-inverter") {
+      return (
+        (logic.npn_storage_s ?? NPN_STORAGE_DEFAULT_S) +
+        pullUpEdge(logic.pull_up_ohm, cap, 0.2, logic.vdd_v, logic.vih_v).seconds
+      );
+    }
+    const low = N + (outNeg === outNeg ? outNeg : 0);
+    return pullUpEdge(logic.pull_up_ohm, cap, low, logic.vdd_v, logic.vih_v).seconds;
+  };
 
   switch (rule) {
     case "supply-range": {
@@ -307,8 +380,18 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
     case "zero-crossing": {
       if (stage.stage !== "op-amp") return;
       const jump = stage.zero_crossing_v ?? 0;
-      const limit = policy.timing_fraction / f;
-      for (let i = 0; i < n; i++) share(i, limit - jump / ((c.slew_v_per_us[i] as number) * 1e6), limit);
+      const beta = stage.zero_crossing_beta ?? 0.5;
+      const slope = 2 * Math.PI * f * Math.max(Math.abs(stage.input.low), Math.abs(stage.input.high));
+      const perSecond = (stage.zero_crossing_error === "clips" ? 1 : 2) * 2 * Math.PI * f * stage.bandwidth_peak_v;
+      const limit = policy.timing_share * A;
+      for (let i = 0; i < n; i++) {
+        const accel = 2 * Math.PI * (c.gbw_mhz[i] as number) * 1e6 * beta * slope;
+        const sr = (c.slew_v_per_us[i] as number) * 1e6;
+        const onset = sr / accel;
+        const onsetV = (sr * onset) / 2;
+        const t = jump <= onsetV ? Math.sqrt((2 * jump) / accel) : onset + (jump - onsetV) / sr;
+        share(i, limit - perSecond * t, limit);
+      }
       return;
     }
     case "logic-high": {
@@ -354,20 +437,22 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
       return;
     }
     case "propagation-delay": {
-      const limit = policy.timing_fraction / f;
+      const limit = signTimeLimit({ design, policy });
       for (let i = 0; i < n; i++) {
-        if (c.is_op_amp[i] === 1) {
-          const swing = P - (c.out_pos_headroom_v[i] as number) - (N + (c.out_neg_headroom_v[i] as number));
-          share(i, limit - swing / ((c.slew_v_per_us[i] as number) * 1e6), limit);
-          if (sev[i] === PASS) sev[i] = MARGINAL; // an op amp as comparator is at best marginal
-        } else share(i, limit - (c.tpd_ns[i] as number) * 1e-9, limit);
+        const d = stageDelayAt(i);
+        share(i, limit - d.seconds, limit);
+        // An op amp's saturated transition and an assumed overdrive are estimates: at best marginal.
+        if ((c.is_op_amp[i] === 1 || d.assumed) && sev[i] === PASS) sev[i] = MARGINAL;
       }
       return;
     }
     case "sign-dead-band": {
       const k = stage.stage === "sign" ? stage.output_per_input : 1;
       const limit = policy.sign_share * A;
-      for (let i = 0; i < n; i++) share(i, limit - (2 * (c.vos_max_mv[i] as number) * 1e-3) / k, limit);
+      for (let i = 0; i < n; i++) {
+        const vh = c.is_op_amp[i] === 1 ? 0 : (c.hysteresis_mv[i] as number);
+        share(i, limit - (2 * (c.vos_max_mv[i] as number) * 1e-3 + (vh === vh ? vh * 1e-3 : 0)) / k, limit);
+      }
       return;
     }
     case "reverse-voltage": {
@@ -415,7 +500,7 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
       return;
     }
     case "overload-recovery": {
-      const limit = signTimeLimit({ design, policy } as Parameters<typeof signTimeLimit>[0]);
+      const limit = signTimeLimit({ design, policy });
       for (let i = 0; i < n; i++) {
         const t = c.is_op_amp[i] === 1 ? (c.overload_recovery_us[i] as number) * 1e-6 : 0;
         if (t !== t) unrated(i);
@@ -424,34 +509,30 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
       return;
     }
     case "rise-time": {
-      const limit = signTimeLimit({ design, policy } as Parameters<typeof signTimeLimit>[0]);
-      const { logic } = design;
-      const cap = logic.pin_cap_f ?? DEFAULT_PIN_CAP_F;
-      const clamp = stage.stage === "sign" ? stage.clamp : undefined;
+      const limit = signTimeLimit({ design, policy });
       for (let i = 0; i < n; i++) {
-        const outPos = c.out_pos_headroom_v[i] as number;
-        const outNeg = c.out_neg_headroom_v[i] as number;
-        const high = c.open_drain[i] === 1 ? null : P - (outPos === outPos ? outPos : 0);
-        let t = 0;
-        if (logic.level_shift === "diode-clamp") {
-          if (high !== null && high > 0) {
-            const vf = clamp ? forwardVoltage(clamp, clampSourceCurrent(high, logic.pull_down_ohm, clamp)) : 0;
-            t = pullUpEdge(logic.pull_down_ohm, cap, Math.max(0, high - vf), 0, logic.vil_v).seconds;
-          }
-        } else if (logic.pull_up_ohm === undefined) {
-          if (logic.level_shift === "npn-inverter" || high === null) {
-            put(i, limit, limit, UNRATED);
-            continue;
-          }
-        } else if (logic.level_shift === "npn-inverter") {
-          t =
-            (logic.npn_storage_s ?? NPN_STORAGE_DEFAULT_S) +
-            pullUpEdge(logic.pull_up_ohm, cap, 0.2, logic.vdd_v, logic.vih_v).seconds;
-        } else if (high === null) {
-          const low = N + (outNeg === outNeg ? outNeg : 0);
-          t = pullUpEdge(logic.pull_up_ohm, cap, low, logic.vdd_v, logic.vih_v).seconds;
+        const t = edgeAt(i);
+        if (t !== t) put(i, limit, limit, UNRATED);
+        else if (t === Infinity) put(i, -limit, limit, FAIL);
+        else share(i, limit - t, limit);
+      }
+      return;
+    }
+    case "late-sign": {
+      const limit = policy.timing_share * A;
+      const perSecond = 2 * 2 * Math.PI * f * design.signal.peak_v;
+      for (let i = 0; i < n; i++) {
+        const own = stageDelayAt(i);
+        const edge = edgeAt(i);
+        const rec = c.is_op_amp[i] === 1 ? (c.overload_recovery_us[i] as number) * 1e-6 : 0;
+        const unknown = own.assumed || edge !== edge || rec !== rec;
+        if (edge === Infinity) {
+          put(i, -limit, limit, FAIL);
+          continue;
         }
-        share(i, limit - t, limit);
+        const t = own.budget + (edge === edge ? edge : 0) + (rec === rec ? rec : 0);
+        share(i, limit - perSecond * t, limit);
+        if (unknown && sev[i] === PASS) sev[i] = MARGINAL;
       }
       return;
     }
@@ -550,6 +631,7 @@ const CASES: Record<Benchmarked, true> = {
   "logic-high": true,
   "logic-low": true,
   "propagation-delay": true,
+  "late-sign": true,
   "sign-dead-band": true,
   "reverse-voltage": true,
   recovery: true,

@@ -9,6 +9,7 @@ import { differentialInput } from "./differential-input.ts";
 import { forwardCurrent } from "./forward-current.ts";
 import { inputCommonMode } from "./input-common-mode.ts";
 import { inputFault } from "./input-fault.ts";
+import { lateSign } from "./late-sign.ts";
 import { leakage } from "./leakage.ts";
 import { logicHigh } from "./logic-high.ts";
 import { logicLow } from "./logic-low.ts";
@@ -44,6 +45,7 @@ export const RULES = [
   differentialInput,
   overloadRecoveryRule,
   riseTime,
+  lateSign,
   outputCurrent,
   baseEmitterReverse,
   reverseVoltage,

@@ -4,6 +4,7 @@
 // the diode drops it will really get.
 import { forwardCurrent } from "../../rules/forward-current.ts";
 import { inputCommonMode } from "../../rules/input-common-mode.ts";
+import { lateSign } from "../../rules/late-sign.ts";
 import { leakage } from "../../rules/leakage.ts";
 import { logicHigh } from "../../rules/logic-high.ts";
 import { logicLow } from "../../rules/logic-low.ts";
@@ -28,6 +29,7 @@ import type { Derived, DiodeUse, DisplayGroup, DisplayRow, RoleResult } from "..
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import { pumpRail } from "../core/math/charge-pump.ts";
 import { forwardVoltage } from "../core/math/diode.ts";
+import { endPhrase, forwardVoltageAt } from "../core/math/temperature.ts";
 import { loadedRatioDeviation, sourceRatioDeviation, type Divider } from "../core/math/divider.ts";
 import { NPN_VBE_ON_V } from "../core/math/npn-inverter.ts";
 import type { DiodeStage, OpAmpStage, Rails, SignStage } from "../core/rule-kit/index.ts";
@@ -49,6 +51,7 @@ import { rectifyAndSignChain } from "./rectify-and-sign-sim.ts";
 import { converterTerms } from "./converter-terms.ts";
 import { frontEnd } from "./front-end.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
+import { TIMING_ROLE_TERMS } from "./rectify-and-sign-timing.ts";
 
 /** Used only when the catalogue has no diode at all, so rails can still be computed. */
 const NOMINAL_SILICON: Diode = {
@@ -189,8 +192,12 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     },
     rails,
   );
-  const rectDiode = use(settleDiode(rectDiodeRole, "rectifier diode"), rectCurrent, rectDiodeRole);
+  const rectDiodePart = settleDiode(rectDiodeRole, "rectifier diode");
+  const rectDiode = use(rectDiodePart, rectCurrent, rectDiodeRole);
   const vf = rectDiode.vf_v;
+  // The dead time's jump is largest where the drops are: at the cold end (−2 mV/°C, SPEC §11.7).
+  const cold = design.temperature.min_c;
+  const vfCold = forwardVoltageAt(rectDiodePart, rectCurrent, cold);
 
   // 3. The clamp diode, when the level shift uses one.
   let clamp: SignStage["clamp"];
@@ -261,7 +268,10 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     output_per_input: k,
     bandwidth_peak_v: design.signal.peak_v,
     slew_amplitude_v: W + vf,
-    zero_crossing_v: 2 * vf,
+    zero_crossing_v: 2 * vfCold,
+    zero_crossing_at: endPhrase("cold", cold),
+    // While stage 1 is dead the summer's output is −x, below 0 V, and the single-supply converter reads 0: off by x.
+    zero_crossing_error: "clips",
   };
   const sign: SignStage = {
     stage: "sign",
@@ -327,6 +337,7 @@ const ROLE_TERMS: readonly RoleTerm[] = [
   { name: "rectifier-bandwidth", label: "rectifier gain error at f max", role: "rectifier", rule: bandwidth.id },
   { name: "sign-dead-band", label: "comparator dead band", role: "sign", rule: signDeadBand.id },
   { name: "rectifier-diode-leakage", label: "rectifier diode leakage", role: "rectifier-diode", rule: leakage.id },
+  ...TIMING_ROLE_TERMS,
 ];
 
 /** Terms that do not depend on the parts: the ADC, its reference, the divider and the source. */
@@ -385,6 +396,13 @@ function conversion(design: Design, k: number): Conversion {
   };
 }
 
+/** The chosen total beside the one asked for, and how far apart they are. */
+function totalAgainstAsk(got: number, asked: number): string {
+  const times = got / asked;
+  if (Math.abs(times - 1) < 0.005) return `${si(got, "Ω")}, as asked`;
+  return `${si(got, "Ω")}, asked ${si(asked, "Ω")} (${Number(times.toPrecision(2))} × the ask)`;
+}
+
 /** Derived values as the design page, the try page and the CLI print them. */
 function display(design: Design, d: Derived): DisplayGroup[] {
   const series = design.front_end.series;
@@ -395,7 +413,11 @@ function display(design: Design, d: Derived): DisplayGroup[] {
         { label: `Bottom resistor R2 (${series})`, value: si(d.divider.bottom_ohm, "Ω") },
         { label: "Source resistance Rs, in series with R1", value: si(d.divider.source_ohm, "Ω") },
         { label: "Ratio k = R2 / (Rs + R1 + R2)", value: ratio(d.divider.ratio) },
-        { label: "Total R1 + R2", value: si(d.divider.total_ohm, "Ω") },
+        { label: "Total R1 + R2", value: totalAgainstAsk(d.divider.total_ohm, design.front_end.divider_total_ohm) },
+        {
+          label: "Why this total",
+          value: `the ${series} pair with the largest ratio not above the target, among totals from half to twice the ${si(design.front_end.divider_total_ohm, "Ω")} asked for (a larger ratio uses more of the ADC, so it wins over a total nearer the ask; ties go to the nearer total)`,
+        },
       ]
     : [{ label: "Divider", value: "none: the peak already fits the window (k = 1)" }];
   const signal: DisplayRow[] = [
@@ -500,6 +522,7 @@ export const rectifyAndSign = defineTopology({
         differentialInput,
         overloadRecoveryRule,
         riseTime,
+        lateSign,
         outputCurrent,
         baseEmitterReverse,
       ],

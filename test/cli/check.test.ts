@@ -129,7 +129,7 @@ describe("explain", () => {
   it("shows every rule's arithmetic step by step", async () => {
     const { code, out } = await run(
       "explain",
-      "oa-bip-gs-lowoffset",
+      "oa-cmos-rrio-150m-12v",
       "data/designs/bridge-10v-5v-adc.json",
       "--role",
       "rectifier",

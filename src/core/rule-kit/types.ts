@@ -53,6 +53,15 @@ export type OpAmpStage = {
   zero_crossing_v?: number;
   /** What a fault on the signal input puts at this stage's input pins (input-fault rule, SPEC §12.4). */
   fault?: FaultPath;
+  /** Feedback factor β while the diodes are off (SPEC §11.3); ½ (the inverting half-wave stage) when absent. */
+  zero_crossing_beta?: number;
+  /**
+   * What the reading does while the stage is dead: "inverts" (−x for +x, off by 2x) or "clips" (the
+   * output would go below 0 V and the single-supply converter reads 0, off by x). "inverts" when absent.
+   */
+  zero_crossing_error?: "inverts" | "clips";
+  /** Where the jump's diode drops are taken, for the reason ("at −20 °C (the cold end)"). */
+  zero_crossing_at?: string;
 };
 
 /**
