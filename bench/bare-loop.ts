@@ -92,6 +92,7 @@ export function tableOf(parts: readonly Part[]): Table {
     "phase_reversal",
     "schottky",
     "input_fet",
+    "status_cost",
   ]) {
     col[c] = new Float64Array(n).fill(NaN);
   }
@@ -106,6 +107,9 @@ export function tableOf(parts: readonly Part[]): Table {
       (col.input_fet as Float64Array)[i] = p.input_fet === true ? 1 : 0;
     }
     if (p.kind === "diode") (col.schottky as Float64Array)[i] = p.type === "schottky" ? 1 : 0;
+    // The ranking's middle keys (SPEC §7) folded as the engine folds them: status, then cost band (none last).
+    const status = p.status === "stocked" ? 0 : p.status === "approved" ? 1 : p.status === "listed" ? 2 : 3;
+    (col.status_cost as Float64Array)[i] = status * 8 + (p.cost_band ?? 6);
   });
   return { ids: parts.map((p) => p.id), n, col };
 }
@@ -170,6 +174,24 @@ export function bareLoop(plans: readonly RolePlan[], out: readonly RoleOutput[])
       if (o.relative[i] === Infinity) o.relative[i] = 0;
     }
   }
+}
+
+/**
+ * The bare loop, then each role's fits ranked as SPEC §7 ranks them (verdict,
+ * status, cost band, least relative margin, then list order) and its
+ * rejections kept in list order: the least work that gives what a page reads.
+ */
+export function bareLoopSorted(plans: readonly RolePlan[], out: readonly RoleOutput[]): Uint32Array[] {
+  bareLoop(plans, out);
+  return plans.map((plan, r) => {
+    const o = out[r] as RoleOutput;
+    const key = plan.table.col.status_cost as Float64Array;
+    const fits: number[] = [];
+    for (let i = 0; i < plan.table.n; i++) if ((o.severity[i] as number) <= MARGINAL) fits.push(i);
+    const major = (i: number) => (o.severity[i] as number) * 64 + (key[i] as number);
+    fits.sort((a, b) => major(a) - major(b) || (o.relative[b] as number) - (o.relative[a] as number) || a - b);
+    return Uint32Array.from(fits);
+  });
 }
 
 function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: Uint8Array, rel: Float64Array): void {

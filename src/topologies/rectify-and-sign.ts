@@ -381,6 +381,13 @@ function conversion(design: Design, k: number): Conversion {
   };
 }
 
+/** The chosen total beside the one asked for, and how far apart they are. */
+function totalAgainstAsk(got: number, asked: number): string {
+  const times = got / asked;
+  if (Math.abs(times - 1) < 0.005) return `${si(got, "Ω")}, as asked`;
+  return `${si(got, "Ω")}, asked ${si(asked, "Ω")} (${Number(times.toPrecision(2))} × the ask)`;
+}
+
 /** Derived values as the design page, the try page and the CLI print them. */
 function display(design: Design, d: Derived): DisplayGroup[] {
   const series = design.front_end.series;
@@ -391,7 +398,11 @@ function display(design: Design, d: Derived): DisplayGroup[] {
         { label: `Bottom resistor R2 (${series})`, value: si(d.divider.bottom_ohm, "Ω") },
         { label: "Source resistance Rs, in series with R1", value: si(d.divider.source_ohm, "Ω") },
         { label: "Ratio k = R2 / (Rs + R1 + R2)", value: ratio(d.divider.ratio) },
-        { label: "Total R1 + R2", value: si(d.divider.total_ohm, "Ω") },
+        { label: "Total R1 + R2", value: totalAgainstAsk(d.divider.total_ohm, design.front_end.divider_total_ohm) },
+        {
+          label: "Why this total",
+          value: `the ${series} pair with the largest ratio not above the target, among totals from half to twice the ${si(design.front_end.divider_total_ohm, "Ω")} asked for (a larger ratio uses more of the ADC, so it wins over a total nearer the ask; ties go to the nearer total)`,
+        },
       ]
     : [{ label: "Divider", value: "none: the peak already fits the window (k = 1)" }];
   const signal: DisplayRow[] = [

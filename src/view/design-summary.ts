@@ -1,5 +1,6 @@
 // The one-line state of a design for the home page and the design page head.
 import { designHolds } from "../core/engine/result.ts";
+import type { DesignState } from "../core/engine/design-verdict.ts";
 import { formatSI } from "../core/units.ts";
 import type { Role } from "../core/schemas/design.ts";
 import type { DesignEntry } from "./design-entry.ts";
@@ -15,13 +16,21 @@ export type RoleState = {
   optional: boolean;
 };
 
+/** SPEC §11.11's design state, as the engine gives it (core/engine/design-verdict.ts). */
+export type DesignVerdict = DesignState;
+
 export type DesignSummary =
-  { ok: false; line: string } | { ok: true; holds: boolean; line: string; roles: RoleState[] };
+  | { ok: false; line: string; verdict: "fails" }
+  | { ok: true; holds: boolean; verdict: DesignVerdict; line: string; roles: RoleState[] };
 
 export function summarizeDesign(entry: DesignEntry): DesignSummary {
   if (!entry.evaluation.ok) {
     const n = entry.evaluation.problems.length;
-    return { ok: false, line: `Could not be evaluated: ${n} problem${n === 1 ? "" : "s"} in the design file.` };
+    return {
+      ok: false,
+      verdict: "fails",
+      line: `Could not be evaluated: ${n} problem${n === 1 ? "" : "s"} in the design file.`,
+    };
   }
   const result = entry.evaluation.result;
   const roles: RoleState[] = result.roles.map((r) => ({
@@ -51,7 +60,7 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
       ? "Every role has a fit and every BOM part fits."
       : `${capitalize(problems.join("; ") || "the design does not hold")}.`
   } ${budget}${compared}`;
-  return { ok: true, holds, line, roles };
+  return { ok: true, holds, verdict: result.verdict.state, line, roles };
 }
 
 function list(items: string[]): string {

@@ -22,6 +22,7 @@ describe("summarizeDesign", () => {
       expect.objectContaining({
         ok: true,
         holds: true,
+        verdict: expect.stringMatching(/^(holds|marginal|fails)$/),
         line: expect.stringMatching(
           /^Every role has a fit and every BOM part fits\. Accuracy budget (passes|is marginal|fails) \(worst case /,
         ),
@@ -45,7 +46,7 @@ describe("summarizeDesign", () => {
   it("names the roles with no fit", () => {
     // A ±10 V signal through a 0.25 divider makes both op amps' offset too large (SPEC §7 offset rule).
     const s = summarizeDesign(entry({ signal: { peak_v: 10 }, front_end: { divider_total_ohm: 40000 } }));
-    expect(s).toEqual(expect.objectContaining({ ok: true, holds: false }));
+    expect(s).toEqual(expect.objectContaining({ ok: true, holds: false, verdict: "fails" }));
     expect(s.line).toMatchInlineSnapshot(
       `"No part fits the buffer, rectifier and sign comparator. Accuracy budget incomplete: no part for the buffer, rectifier and sign comparator."`,
     );
@@ -54,6 +55,7 @@ describe("summarizeDesign", () => {
   it("says when the design cannot be evaluated", () => {
     expect(summarizeDesign(entry({ bom: { buffer: "nope" } }))).toEqual({
       ok: false,
+      verdict: "fails",
       line: "Could not be evaluated: 1 problem in the design file.",
     });
   });
