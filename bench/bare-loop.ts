@@ -91,6 +91,7 @@ export function tableOf(parts: readonly Part[]): Table {
     "unity_gain_stable",
     "phase_reversal",
     "schottky",
+    "input_fet",
     "status_cost",
   ]) {
     col[c] = new Float64Array(n).fill(NaN);
@@ -103,6 +104,7 @@ export function tableOf(parts: readonly Part[]): Table {
     if (p.kind === "op-amp") {
       (col.unity_gain_stable as Float64Array)[i] = p.unity_gain_stable ? 1 : 0;
       if (p.phase_reversal !== undefined) (col.phase_reversal as Float64Array)[i] = p.phase_reversal ? 1 : 0;
+      (col.input_fet as Float64Array)[i] = p.input_fet === true ? 1 : 0;
     }
     if (p.kind === "diode") (col.schottky as Float64Array)[i] = p.type === "schottky" ? 1 : 0;
     // The ranking's middle keys (SPEC §7) folded as the engine folds them: status, then cost band (none last).
@@ -195,7 +197,7 @@ export function bareLoopSorted(plans: readonly RolePlan[], out: readonly RoleOut
 function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: Uint8Array, rel: Float64Array): void {
   const { design, stage, rails, table } = plan;
   const c = table.col as Record<(typeof COLUMNS)[number] | "is_op_amp" | "open_drain", Float64Array> &
-    Record<"unity_gain_stable" | "phase_reversal" | "schottky", Float64Array>;
+    Record<"unity_gain_stable" | "phase_reversal" | "schottky" | "input_fet", Float64Array>;
   const n = table.n;
   const policy = design.policy;
   const headroom = policy.headroom_margin_v;
@@ -319,12 +321,13 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
     case "offset": {
       if (stage.stage !== "op-amp") return;
       const span = Math.max(Math.abs(design.temperature.min_c - 25), Math.abs(design.temperature.max_c - 25));
+      const fetScale = 2 ** (Math.max(0, design.temperature.max_c - 25) / 10);
       const limit = policy.offset_share * A;
       for (let i = 0; i < n; i++) {
         const drift = c.vos_drift_uv_per_c[i] as number;
         const vos = (c.vos_max_mv[i] as number) * 1e-3 + (drift === drift ? drift * 1e-6 * span : 0);
-        const error =
-          (stage.vos_multiplier * vos + (c.ib_max_na[i] as number) * 1e-9 * stage.bias_ohm) / stage.output_per_input;
+        const ib = (c.ib_max_na[i] as number) * 1e-9 * (c.input_fet[i] === 1 ? fetScale : 1);
+        const error = (stage.vos_multiplier * vos + ib * stage.bias_ohm) / stage.output_per_input;
         share(i, limit - error, limit);
       }
       return;
@@ -457,7 +460,17 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
     }
     case "reverse-voltage": {
       if (stage.stage !== "diode") return;
-      for (let i = 0; i < n; i++) voltage(i, (c.vr_max_v[i] as number) - stage.reverse_v, stage.reverse_v);
+      const rv = stage.reverse_vf;
+      for (let i = 0; i < n; i++) {
+        let needed = stage.reverse_v;
+        if (rv !== undefined) {
+          const d = { vf_1ma_v: c.vf_1ma_v[i] as number, vf_10ma_v: c.vf_10ma_v[i] as number };
+          const at25 = forwardVoltage(d, rv.current_a);
+          const vf = at25 === 0 ? 0 : Math.max(0, at25 - 2e-3 * (rv.temp_c - 25));
+          needed = Math.max(0, stage.reverse_v + rv.sign * vf);
+        }
+        voltage(i, (c.vr_max_v[i] as number) - needed, needed);
+      }
       return;
     }
     case "recovery": {
@@ -480,6 +493,19 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
       for (let i = 0; i < n; i++) {
         const ir = (c.ir_na[i] as number) * 1e-9 * (c.schottky[i] === 1 ? schottkyScale : junctionScale);
         share(i, limit - ir * ohmPerInput, limit);
+      }
+      return;
+    }
+    case "clamp-leakage": {
+      if (stage.stage !== "diode") return;
+      const rise = Math.max(0, design.temperature.max_c - 25);
+      const schottkyScale = 10 ** (rise / 25);
+      const junctionScale = 2 ** (rise / 10);
+      const limit = -(design.logic.pin_min_v ?? -0.3);
+      const blocks = -stage.reverse_v < 0;
+      for (let i = 0; i < n; i++) {
+        const ir = (c.ir_na[i] as number) * 1e-9 * (c.schottky[i] === 1 ? schottkyScale : junctionScale);
+        share(i, limit - (blocks ? ir * design.logic.pull_down_ohm : 0), limit);
       }
       return;
     }
@@ -636,6 +662,7 @@ const CASES: Record<Benchmarked, true> = {
   "reverse-voltage": true,
   recovery: true,
   leakage: true,
+  "clamp-leakage": true,
   "forward-current": true,
   "differential-input": true,
   "overload-recovery": true,

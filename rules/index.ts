@@ -4,6 +4,7 @@
 import type { AnyRule } from "../src/core/rule-kit/index.ts";
 import { adcSettling } from "./adc-settling.ts";
 import { bandwidth } from "./bandwidth.ts";
+import { clampLeakage } from "./clamp-leakage.ts";
 import { baseEmitterReverse } from "./base-emitter-reverse.ts";
 import { differentialInput } from "./differential-input.ts";
 import { forwardCurrent } from "./forward-current.ts";
@@ -51,6 +52,7 @@ export const RULES = [
   reverseVoltage,
   recovery,
   leakage,
+  clampLeakage,
   forwardCurrent,
   adcSettling,
   inputFault,

@@ -6,6 +6,7 @@ import { forwardCurrent } from "../../rules/forward-current.ts";
 import { inputCommonMode } from "../../rules/input-common-mode.ts";
 import { lateSign } from "../../rules/late-sign.ts";
 import { leakage } from "../../rules/leakage.ts";
+import { clampLeakage } from "../../rules/clamp-leakage.ts";
 import { logicHigh } from "../../rules/logic-high.ts";
 import { logicLow } from "../../rules/logic-low.ts";
 import { offset } from "../../rules/offset.ts";
@@ -120,8 +121,15 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     const stage: DiodeStage = {
       stage: "diode",
       label: "the pump diode",
-      reverse_v: 2 * neg.drive_v,
-      reverse_what: `2 × the ${formatVolts(neg.drive_v)} drive`,
+      // Each diode of the two-diode inverter blocks drive − Vf (SPEC §11.12); the smallest drop, at the hot end, is the worst.
+      reverse_v: neg.drive_v,
+      reverse_what: `the ${formatVolts(neg.drive_v)} drive`,
+      reverse_vf: {
+        sign: -1,
+        current_a: 2 * neg.load_a,
+        temp_c: design.temperature.max_c,
+        at: endPhrase("hot", design.temperature.max_c),
+      },
       recovery_limit_s: policy.timing_fraction / (2 * neg.frequency_hz),
       recovery_what: `${policy.timing_fraction * 100} % of the pump's ${formatSI(1 / (2 * neg.frequency_hz), "s")} half period`,
       forward_a: 2 * neg.load_a,
@@ -181,8 +189,15 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     {
       stage: "diode",
       label: "the rectifier diode",
-      reverse_v: 2 * W,
-      reverse_what: `2 × the ${formatVolts(W)} window`,
+      // The off diode sits between the stage output (W + Vf) and the virtual ground (SPEC §11.12); largest drop at the cold end.
+      reverse_v: W,
+      reverse_what: `the ${formatVolts(W)} window`,
+      reverse_vf: {
+        sign: 1,
+        current_a: rectCurrent,
+        temp_c: design.temperature.min_c,
+        at: endPhrase("cold", design.temperature.min_c),
+      },
       recovery_limit_s: policy.timing_fraction / design.signal.max_frequency_hz,
       recovery_what: `${policy.timing_fraction * 100} % of the signal period`,
       leakage_ohm: design.front_end.rectifier_load_ohm,
@@ -552,7 +567,7 @@ export const rectifyAndSign = defineTopology({
       field: "Clamp diode",
       label: "series diode from the comparator to the logic input",
       wants: "clamp",
-      rules: [reverseVoltage, leakage],
+      rules: [reverseVoltage, clampLeakage],
       when: [{ path: "logic.level_shift", is: ["diode-clamp"] }],
     },
     {
