@@ -41,8 +41,10 @@ export function hasBareLoop(id: string): boolean {
 export type RolePlan = {
   topology: string;
   role: string;
+  /** Every stage's rules in turn (the engine's finding order). */
   rules: readonly Benchmarked[];
-  stage: Stage;
+  /** Each stage of the role with its rules (the two-stage rectifier has two). */
+  checks: readonly { stage: Stage; rules: readonly Benchmarked[] }[];
   rails: Rails;
   design: Design;
   table: Table;
@@ -114,8 +116,8 @@ export function planOf(design: Design, catalogue: Catalogue): RolePlan[] {
     return e.result.roles.map((r) => ({
       topology,
       role: r.role,
-      rules: r.rules as Benchmarked[],
-      stage: r.stage,
+      rules: r.stages.flatMap((s) => s.rules) as Benchmarked[],
+      checks: r.stages.map((s) => ({ stage: s.stage, rules: s.rules as Benchmarked[] })),
       rails: e.result.derived.rails,
       design,
       // The engine's candidates for the role: the kinds that can fill it, in file order.
@@ -150,8 +152,12 @@ export function bareLoop(plans: readonly RolePlan[], out: readonly RoleOutput[])
     const o = out[r] as RoleOutput;
     o.severity.fill(PASS);
     o.relative.fill(Infinity);
-    for (let k = 0; k < plan.rules.length; k++) {
-      runRule(plan, plan.rules[k] as Benchmarked, o.margins[k] as Float64Array, o.severity, o.relative);
+    let k = 0;
+    for (const check of plan.checks) {
+      for (const rule of check.rules) {
+        runRule(plan, check.stage, rule, o.margins[k] as Float64Array, o.severity, o.relative);
+        k++;
+      }
     }
     const allowUnrated = plan.design.policy.allow_unrated;
     for (let i = 0; i < plan.table.n; i++) {
@@ -161,8 +167,15 @@ export function bareLoop(plans: readonly RolePlan[], out: readonly RoleOutput[])
   }
 }
 
-function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: Uint8Array, rel: Float64Array): void {
-  const { design, stage, rails, table } = plan;
+function runRule(
+  plan: RolePlan,
+  stage: Stage,
+  rule: Benchmarked,
+  margin: Float64Array,
+  sev: Uint8Array,
+  rel: Float64Array,
+): void {
+  const { design, rails, table } = plan;
   const c = table.col as Record<(typeof COLUMNS)[number] | "is_op_amp" | "open_drain", Float64Array> &
     Record<"unity_gain_stable" | "phase_reversal" | "schottky", Float64Array>;
   const n = table.n;

@@ -1,5 +1,7 @@
-// The one-line state of a design for the home page and the design page head.
-import { designHolds } from "../core/engine/result.ts";
+// The one-line state of a design for the home page, the design page head and
+// the try page: the engine's verdict (SPEC §11.11: holds, marginal or fails,
+// the budget included) and a sentence on its roles and budget.
+import type { DesignState } from "../core/engine/design-verdict.ts";
 import { formatSI } from "../core/units.ts";
 import type { Role } from "../core/schemas/design.ts";
 import type { DesignEntry } from "./design-entry.ts";
@@ -16,7 +18,16 @@ export type RoleState = {
 };
 
 export type DesignSummary =
-  { ok: false; line: string } | { ok: true; holds: boolean; line: string; roles: RoleState[] };
+  | { ok: false; line: string }
+  | {
+      ok: true;
+      /** The design's verdict: roles, BOM parts and the budget together. */
+      state: DesignState;
+      /** state is "holds". */
+      holds: boolean;
+      line: string;
+      roles: RoleState[];
+    };
 
 export function summarizeDesign(entry: DesignEntry): DesignSummary {
   if (!entry.evaluation.ok) {
@@ -35,7 +46,8 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
   }));
   const empty = roles.filter((r) => r.fits === 0 && !r.optional).map((r) => r.name.toLowerCase());
   const bad = roles.filter((r) => r.bomFails).map((r) => `${r.chosen ?? "?"} (${r.name.toLowerCase()})`);
-  const holds = designHolds(result);
+  const state = result.verdict.state;
+  const rolesHold = empty.length === 0 && bad.length === 0;
   const problems: string[] = [];
   if (empty.length > 0) problems.push(`no part fits the ${list(empty)}`);
   if (bad.length > 0)
@@ -47,11 +59,13 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
       : `Accuracy budget ${b.verdict === "pass" ? "passes" : b.verdict === "marginal" ? "is marginal" : "fails"} (worst case ${formatSI(b.worst_case_v, "V")} against ${formatSI(b.required_v, "V")}).`;
   const compared = result.comparison ? ` Both topologies compared: ${result.comparison.recommended} recommended.` : "";
   const line = `${
-    holds
+    rolesHold
       ? "Every role has a fit and every BOM part fits."
       : `${capitalize(problems.join("; ") || "the design does not hold")}.`
   } ${budget}${compared}`;
-  return { ok: true, holds, line, roles };
+  const unrated = result.verdict.reasons.find((r) => r.kind === "budget-unrated");
+  const tail = unrated ? ` ${capitalize(unrated.text)}.` : "";
+  return { ok: true, state, holds: state === "holds", line: `${line}${tail}`, roles };
 }
 
 function list(items: string[]): string {

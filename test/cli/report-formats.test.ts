@@ -145,8 +145,8 @@ describe("check --format markdown", () => {
       "# railsieve check
       ## bridge-10v-5v-adc: marginal
       | Role | Part | Verdict | Fits | Deciding finding |
-      | \`buffer\` | \`oa-cmos-rro-limited\` | pass | 9 of 33 | closest: \`output-swing\` (pass): needs the output to reach −2.50 V; with V− = −3.16 V it reaches −3.15 V (0.01 V headroom): 0.65 V to spare |
-      Accuracy budget: worst case 114 mV, root-sum-square 47.8 mV, required 100 mV: marginal (largest term: comparator dead band (cmp-cmos-pp-16v))."
+      | \`buffer\` | \`oa-cmos-rro-limited\` | pass | 9 of 33 | closest: \`output-swing\` (pass): needs the output to reach −2.50 V; with V− = −3.44 V it reaches −3.42 V (0.01 V headroom): 0.92 V to spare |
+      Accuracy budget: worst case 115 mV, root-sum-square 45.1 mV, required 100 mV: marginal (largest term: comparator dead band (cmp-cmos-pp-16v))."
     `);
   });
 });

@@ -395,7 +395,7 @@ describe("messages, pinned", () => {
       check: exit 1
       result: sign: no part fits; the closest, cmp-cmos-pp-16v, is unrated on differential-input: not rated: its inputs (one at the signal, one at ground) differ by up to 1.00 V and 'vdiff_max_v' is empty for this part; many op amps clamp their inputs at about 0.7 V
       result: buffer: no part fits; every candidate fails output-swing, e.g. oa-bip-gs-dual: needs the output to reach −4.98 V; with V− = −3.16 V it reaches only −3.14 V (0.02 V headroom): 1.83 V short
-      result: rectifier: no part fits; every candidate fails output-swing, e.g. oa-bip-gs-dual: needs the output to reach +5.63 V; at V+ = 5.00 V it reaches only +3.50 V (1.50 V headroom): 2.13 V short
+      result: rectifier: no part fits; every candidate fails output-swing, e.g. oa-bip-gs-dual: needs the output to reach −5.70 V; with V− = −3.16 V it reaches only −3.14 V (0.02 V headroom): 2.56 V short
       result: sign: no part fits; every candidate fails input-common-mode, e.g. cmp-cmos-pp-rr: needs inputs from −4.98 V to +4.98 V; with V− = −3.16 V and V+ = +5.00 V it accepts −3.36 V to +5.20 V: 1.61 V short"
     `);
   });

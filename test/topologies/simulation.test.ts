@@ -50,15 +50,15 @@ describe("every demo design and topology, simulated", () => {
     });
     expect(table).toMatchInlineSnapshot(`
       [
-        "audio-1v5-20k rectify-and-sign: BEYOND 201 / 32",
-        "audio-1v5-20k offset-to-mid-rail: BEYOND 167 / 59",
-        "bridge-10v-5v-adc rectify-and-sign: BEYOND 283 / 114",
-        "bus-48v rectify-and-sign: BEYOND 878 / 457",
-        "hub-generator-15v rectify-and-sign: BEYOND 1286 / 171",
-        "probe-0v5-10meg rectify-and-sign: within 2 / 2",
-        "thermoelectric-3v-on-3v3 rectify-and-sign: BEYOND 38 / 31",
-        "vibration-2v-split-2v5 rectify-and-sign: BEYOND 77 / 53",
-        "wave-flume-6v-npn rectify-and-sign: within 30 / 41",
+        "audio-1v5-20k rectify-and-sign: BEYOND 201 / 36",
+        "audio-1v5-20k offset-to-mid-rail: BEYOND 167 / 55",
+        "bridge-10v-5v-adc rectify-and-sign: BEYOND 135 / 115",
+        "bus-48v rectify-and-sign: BEYOND 887 / 441",
+        "hub-generator-15v rectify-and-sign: BEYOND 347 / 193",
+        "probe-0v5-10meg rectify-and-sign: within 2 / 6",
+        "thermoelectric-3v-on-3v3 rectify-and-sign: within 37 / 45",
+        "vibration-2v-split-2v5 rectify-and-sign: within 53 / 292",
+        "wave-flume-6v-npn rectify-and-sign: within 30 / 50",
       ]
     `);
   });

@@ -293,27 +293,27 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
     expect(drawn).toBeGreaterThan(0);
   });
 
-  it("makes a headroom failure obvious: the split-supply class falls 1.34 V short of −2.50 V", () => {
+  it("makes a headroom failure obvious: the split-supply class falls 1.06 V short of −2.50 V", () => {
     // SPEC §6: Vf(0.5 mA) of d-si-switch = 0.70 + 0.16·log10(0.5) = 0.652 V; V− = −(5 − 1.304)
-    // + 0.5 mA/(980 Hz · 1 µF) + ½ · 0.5 mA/(980 Hz · 10 µF) = −3.161 V. With 2 V input and
-    // output headroom the part reaches −1.16 V against the −2.50 V window: 1.34 V short.
-    expect(elementWithId(section("buffer"), "tr", "buffer--oa-bip-split-gp")).toMatch(/: 1\.34 V short(<\/li>|<\/td>)/);
+    // + 0.5 mA/(980 Hz · 2.2 µF) + ½ · 0.5 mA/(980 Hz · 10 µF) = −3.439 V. With 2 V output
+    // headroom the part reaches −1.44 V against the −2.50 V window: 1.06 V short.
+    expect(elementWithId(section("buffer"), "tr", "buffer--oa-bip-split-gp")).toMatch(/: 1\.06 V short(<\/li>|<\/td>)/);
     const html = partEntry("oa-bip-split-gp");
     expect(html).toContain('class="result result-fail"');
-    expect(html).toContain(">1.34 V short</text>");
-    expect(html).toContain("V− −3.16 V</text>");
-    expect(html).toContain("1.34 V short</td>");
+    expect(html).toContain(">1.06 V short</text>");
+    expect(html).toContain("V− −3.44 V</text>");
+    expect(html).toContain("1.06 V short</td>");
   });
 
   it("shows the derived values: pumped rail with droop and ripple, divider, window, ADC step", () => {
     const html = page(`${BASE}designs/bridge-10v-5v-adc/`);
-    // Droop 0.5 mA/(980 Hz · 1 µF) = 510 mV, ripple 0.5 mA/(980 Hz · 10 µF) = 51.0 mV; E24 47k/16k behind the
+    // Droop 0.5 mA/(980 Hz · 2.2 µF) = 232 mV, ripple 0.5 mA/(980 Hz · 10 µF) = 51.0 mV; E24 47k/16k behind the
     // 1 kΩ source: 16/(1 + 47 + 16) = 0.25 (SPEC §11.1, loaded ratio);
     // ADC step (5 V / 1024) / 0.25 = 19.5 mV (IEEE Std 1241-2010, Q = V_FS / 2^N).
     for (const text of [
-      "<dd>510 mV</dd>",
+      "<dd>232 mV</dd>",
       "<dd>51 mV</dd>",
-      "<dd>−3.16 V</dd>",
+      "<dd>−3.44 V</dd>",
       "<dd>47 kΩ</dd>",
       "<dd>16 kΩ</dd>",
       "<dd>1 kΩ</dd>",

@@ -81,7 +81,7 @@ describe("designFileFromDraft", () => {
             "kind": "charge-pump",
             "drive_v": 5,
             "frequency_hz": 980,
-            "flying_cap_f": 0.000001,
+            "flying_cap_f": 0.0000022,
             "reservoir_cap_f": 0.00001,
             "load_a": 0.0005
           }
@@ -96,7 +96,8 @@ describe("designFileFromDraft", () => {
           "divider_total_ohm": 100000,
           "resistor_tolerance": 0.001,
           "series": "E24",
-          "rectifier_load_ohm": 10000
+          "rectifier_load_ohm": 10000,
+          "rectifier_tolerance": 0.0001
         },
         "adc": {
           "bits": 10,

@@ -110,6 +110,12 @@ describe("draftFromInput / rawFromDraft", () => {
       "supply.negative.v",
       "supply.negative.drive_ohm", // optional (issue 16)
       "logic.pin_min_v", // optional (issue 16)
+      // The optional budget fields of issue 15 (SPEC §11.1, §11.2, §11.10).
+      "signal.source_tolerance",
+      "adc.reference_tempco_ppm_per_c",
+      "adc.offset_lsb",
+      "adc.gain_error",
+      "adc.inl_lsb",
       "policy.headroom_margin_v",
       "policy.marginal_fraction",
       "policy.offset_share",

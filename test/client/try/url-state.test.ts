@@ -48,7 +48,7 @@ describe("encodeDraft → stateFromUrl round trip", () => {
   it("writes fields in file order and leaves out the ones the design does not use", () => {
     const query = encodeDraft(DEFAULT_DRAFT);
     expect(query.startsWith("id=new-design&title=")).toBe(true);
-    expect(query).toContain("&supply.negative.flying_cap_f=1u&");
+    expect(query).toContain("&supply.negative.flying_cap_f=2.2u&");
     expect(query).not.toContain("supply.negative.v=");
     expect(query).not.toContain("policy.");
     expect(query).not.toContain("bom.");
