@@ -70,6 +70,8 @@ const COLUMNS = [
   "gbw_mhz",
   "slew_v_per_us",
   "tpd_ns",
+  "tpd_overdrive_mv",
+  "hysteresis_mv",
   "vf_1ma_v",
   "vf_10ma_v",
   "ir_na",
@@ -210,6 +212,48 @@ function runRule(
     if ((sev[i] as number) < UNRATED) sev[i] = UNRATED;
   };
   const range = stage.stage === "diode" ? { low: 0, high: 0 } : stage.input;
+  // The sign stage's own delay (rules/sign-delay.ts): tpd + V_od/S + (Vh/2)/S, or an op amp's integrator-then-slew transition.
+  const slope = 2 * Math.PI * f * Math.max(Math.abs(range.low), Math.abs(range.high));
+  const stageDelayAt = (i: number): { seconds: number; budget: number; assumed: boolean } => {
+    if (c.is_op_amp[i] === 1) {
+      const swing = Math.max(0, P - (c.out_pos_headroom_v[i] as number) - (N + (c.out_neg_headroom_v[i] as number)));
+      const accel = 2 * Math.PI * (c.gbw_mhz[i] as number) * 1e6 * slope;
+      const sr = (c.slew_v_per_us[i] as number) * 1e6;
+      const onset = sr / accel;
+      const onsetV = (sr * onset) / 2;
+      const t = swing <= onsetV ? Math.sqrt((2 * swing) / accel) : onset + (swing - onsetV) / sr;
+      return { seconds: t, budget: t, assumed: false };
+    }
+    const od = c.tpd_overdrive_mv[i] as number;
+    const vh = c.hysteresis_mv[i] as number;
+    const own = (c.tpd_ns[i] as number) * 1e-9 + (od === od ? od * 1e-3 : 0.1) / slope;
+    const hyst = vh === vh && vh > 0 ? (vh * 1e-3) / 2 / slope : 0;
+    return { seconds: own + hyst, budget: own, assumed: od !== od };
+  };
+  // The edge the level shift makes at the logic pin (rules/sign-path.ts signEdge); NaN when no pull-up is given.
+  const edgeAt = (i: number): number => {
+    const { logic } = design;
+    const cap = logic.pin_cap_f ?? DEFAULT_PIN_CAP_F;
+    const clamp = stage.stage === "sign" ? stage.clamp : undefined;
+    const outPos = c.out_pos_headroom_v[i] as number;
+    const outNeg = c.out_neg_headroom_v[i] as number;
+    const high = c.open_drain[i] === 1 ? null : P - (outPos === outPos ? outPos : 0);
+    if (logic.level_shift === "diode-clamp") {
+      if (high === null || !(high > 0)) return 0;
+      const vf = clamp ? forwardVoltage(clamp, clampSourceCurrent(high, logic.pull_down_ohm, clamp)) : 0;
+      return pullUpEdge(logic.pull_down_ohm, cap, Math.max(0, high - vf), 0, logic.vil_v).seconds;
+    }
+    if (logic.level_shift === "pull-up" && high !== null) return 0;
+    if (logic.pull_up_ohm === undefined) return NaN;
+    if (logic.level_shift === "npn-inverter") {
+      return (
+        (logic.npn_storage_s ?? NPN_STORAGE_DEFAULT_S) +
+        pullUpEdge(logic.pull_up_ohm, cap, 0.2, logic.vdd_v, logic.vih_v).seconds
+      );
+    }
+    const low = N + (outNeg === outNeg ? outNeg : 0);
+    return pullUpEdge(logic.pull_up_ohm, cap, low, logic.vdd_v, logic.vih_v).seconds;
+  };
 
   switch (rule) {
     case "supply-range": {
@@ -288,8 +332,27 @@ function runRule(
     case "zero-crossing": {
       if (stage.stage !== "op-amp") return;
       const jump = stage.zero_crossing_v ?? 0;
-      const limit = policy.timing_fraction / f;
-      for (let i = 0; i < n; i++) share(i, limit - jump / ((c.slew_v_per_us[i] as number) * 1e6), limit);
+      const beta = stage.zero_crossing_beta ?? 0.5;
+      const slope =
+        2 *
+        Math.PI *
+        f *
+        (stage.zero_crossing_signal_v ?? Math.max(Math.abs(stage.input.low), Math.abs(stage.input.high)));
+      const perSecond =
+        (stage.zero_crossing_error === "clips" ? 1 : 2) *
+        2 *
+        Math.PI *
+        f *
+        (stage.zero_crossing_peak_v ?? stage.bandwidth_peak_v);
+      const limit = policy.timing_share * A;
+      for (let i = 0; i < n; i++) {
+        const accel = 2 * Math.PI * (c.gbw_mhz[i] as number) * 1e6 * beta * slope;
+        const sr = (c.slew_v_per_us[i] as number) * 1e6;
+        const onset = sr / accel;
+        const onsetV = (sr * onset) / 2;
+        const t = jump <= onsetV ? Math.sqrt((2 * jump) / accel) : onset + (jump - onsetV) / sr;
+        share(i, limit - perSecond * t, limit);
+      }
       return;
     }
     case "logic-high": {
@@ -335,20 +398,22 @@ function runRule(
       return;
     }
     case "propagation-delay": {
-      const limit = policy.timing_fraction / f;
+      const limit = signTimeLimit({ design, policy });
       for (let i = 0; i < n; i++) {
-        if (c.is_op_amp[i] === 1) {
-          const swing = P - (c.out_pos_headroom_v[i] as number) - (N + (c.out_neg_headroom_v[i] as number));
-          share(i, limit - swing / ((c.slew_v_per_us[i] as number) * 1e6), limit);
-          if (sev[i] === PASS) sev[i] = MARGINAL; // an op amp as comparator is at best marginal
-        } else share(i, limit - (c.tpd_ns[i] as number) * 1e-9, limit);
+        const d = stageDelayAt(i);
+        share(i, limit - d.seconds, limit);
+        // An op amp's saturated transition and an assumed overdrive are estimates: at best marginal.
+        if ((c.is_op_amp[i] === 1 || d.assumed) && sev[i] === PASS) sev[i] = MARGINAL;
       }
       return;
     }
     case "sign-dead-band": {
       const k = stage.stage === "sign" ? stage.output_per_input : 1;
       const limit = policy.sign_share * A;
-      for (let i = 0; i < n; i++) share(i, limit - (2 * (c.vos_max_mv[i] as number) * 1e-3) / k, limit);
+      for (let i = 0; i < n; i++) {
+        const vh = c.is_op_amp[i] === 1 ? 0 : (c.hysteresis_mv[i] as number);
+        share(i, limit - (2 * (c.vos_max_mv[i] as number) * 1e-3 + (vh === vh ? vh * 1e-3 : 0)) / k, limit);
+      }
       return;
     }
     case "reverse-voltage": {
@@ -396,7 +461,7 @@ function runRule(
       return;
     }
     case "overload-recovery": {
-      const limit = signTimeLimit({ design, policy } as Parameters<typeof signTimeLimit>[0]);
+      const limit = signTimeLimit({ design, policy });
       for (let i = 0; i < n; i++) {
         const t = c.is_op_amp[i] === 1 ? (c.overload_recovery_us[i] as number) * 1e-6 : 0;
         if (t !== t) unrated(i);
@@ -405,34 +470,30 @@ function runRule(
       return;
     }
     case "rise-time": {
-      const limit = signTimeLimit({ design, policy } as Parameters<typeof signTimeLimit>[0]);
-      const { logic } = design;
-      const cap = logic.pin_cap_f ?? DEFAULT_PIN_CAP_F;
-      const clamp = stage.stage === "sign" ? stage.clamp : undefined;
+      const limit = signTimeLimit({ design, policy });
       for (let i = 0; i < n; i++) {
-        const outPos = c.out_pos_headroom_v[i] as number;
-        const outNeg = c.out_neg_headroom_v[i] as number;
-        const high = c.open_drain[i] === 1 ? null : P - (outPos === outPos ? outPos : 0);
-        let t = 0;
-        if (logic.level_shift === "diode-clamp") {
-          if (high !== null && high > 0) {
-            const vf = clamp ? forwardVoltage(clamp, clampSourceCurrent(high, logic.pull_down_ohm, clamp)) : 0;
-            t = pullUpEdge(logic.pull_down_ohm, cap, Math.max(0, high - vf), 0, logic.vil_v).seconds;
-          }
-        } else if (logic.pull_up_ohm === undefined) {
-          if (logic.level_shift === "npn-inverter" || high === null) {
-            put(i, limit, limit, UNRATED);
-            continue;
-          }
-        } else if (logic.level_shift === "npn-inverter") {
-          t =
-            (logic.npn_storage_s ?? NPN_STORAGE_DEFAULT_S) +
-            pullUpEdge(logic.pull_up_ohm, cap, 0.2, logic.vdd_v, logic.vih_v).seconds;
-        } else if (high === null) {
-          const low = N + (outNeg === outNeg ? outNeg : 0);
-          t = pullUpEdge(logic.pull_up_ohm, cap, low, logic.vdd_v, logic.vih_v).seconds;
+        const t = edgeAt(i);
+        if (t !== t) put(i, limit, limit, UNRATED);
+        else if (t === Infinity) put(i, -limit, limit, FAIL);
+        else share(i, limit - t, limit);
+      }
+      return;
+    }
+    case "late-sign": {
+      const limit = policy.timing_share * A;
+      const perSecond = 2 * 2 * Math.PI * f * design.signal.peak_v;
+      for (let i = 0; i < n; i++) {
+        const own = stageDelayAt(i);
+        const edge = edgeAt(i);
+        const rec = c.is_op_amp[i] === 1 ? (c.overload_recovery_us[i] as number) * 1e-6 : 0;
+        const unknown = own.assumed || edge !== edge || rec !== rec;
+        if (edge === Infinity) {
+          put(i, -limit, limit, FAIL);
+          continue;
         }
-        share(i, limit - t, limit);
+        const t = own.budget + (edge === edge ? edge : 0) + (rec === rec ? rec : 0);
+        share(i, limit - perSecond * t, limit);
+        if (unknown && sev[i] === PASS) sev[i] = MARGINAL;
       }
       return;
     }
@@ -529,6 +590,7 @@ const CASES: Record<Benchmarked, true> = {
   "logic-high": true,
   "logic-low": true,
   "propagation-delay": true,
+  "late-sign": true,
   "sign-dead-band": true,
   "reverse-voltage": true,
   recovery: true,

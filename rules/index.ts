@@ -7,6 +7,7 @@ import { baseEmitterReverse } from "./base-emitter-reverse.ts";
 import { differentialInput } from "./differential-input.ts";
 import { forwardCurrent } from "./forward-current.ts";
 import { inputCommonMode } from "./input-common-mode.ts";
+import { lateSign } from "./late-sign.ts";
 import { leakage } from "./leakage.ts";
 import { logicHigh } from "./logic-high.ts";
 import { logicLow } from "./logic-low.ts";
@@ -42,6 +43,7 @@ export const RULES = [
   differentialInput,
   overloadRecoveryRule,
   riseTime,
+  lateSign,
   outputCurrent,
   baseEmitterReverse,
   reverseVoltage,

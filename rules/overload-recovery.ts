@@ -11,7 +11,7 @@ export const overloadRecoveryRule = defineRule({
     "op amp: t_rec = overload_recovery_us, margin = limit − t_rec (an empty rating is unrated); comparator: built to saturate, nothing to add",
   source:
     "The op amp's rated overload (saturation) recovery; an op amp run open loop saturates at every crossing (common practice [M]).",
-  policy: "timing_fraction",
+  policy: "timing_share",
   kinds: ["op-amp", "comparator"],
   needs: { "op-amp": ["overload_recovery_us"] },
   measure(ctx, part, out) {

@@ -1,56 +1,60 @@
-import { defineRule, record, shareVerdict, spareOrShort, type Rails } from "../src/core/rule-kit/index.ts";
+import { defineRule, record, shareVerdict, spareOrShort, type Step } from "../src/core/rule-kit/index.ts";
+import { ASSUMED_OVERDRIVE_V } from "../src/core/math/late-sign.ts";
 import { formatQuantity, formatSI } from "../src/core/units.ts";
-import { outputHigh, outputLow, type Driver } from "./levels.ts";
+import { signInputSlope, stageDelay } from "./sign-delay.ts";
+import { signTimeLimit } from "./sign-path.ts";
 
 export const propagationDelay = defineRule({
   id: "propagation-delay",
   unit: "s",
-  checks: "The sign decision follows a zero crossing within a small share of the signal period.",
+  checks:
+    "The sign stage decides soon enough after a zero crossing: its rated delay, plus the time the input needs to reach the overdrive the delay is rated at and to pass its hysteresis.",
   formula:
-    "comparator: tpd ≤ timing_fraction / f; op amp as comparator: delay ≈ (V_OH − V_OL) / slew, and at best marginal because overload recovery is not rated",
-  source: "Comparator propagation delay (datasheet); the op-amp estimate is common practice.",
-  policy: "timing_fraction",
+    "S_in = 2π·f·W; comparator: t = tpd + V_od/S_in + (Vh/2)/S_in (V_od = tpd_overdrive_mv, 100 mV assumed and at best marginal when empty); op amp as comparator: integrator then slew through V_OH − V_OL, t = √(2·swing/(2π·GBW·S_in)) or t₁ + (swing − SR·t₁/2)/SR, at best marginal; limit = the time in which 2·2π·f·peak·t reaches timing_share · required_v",
+  source:
+    "Comparator delay rated at an overdrive (datasheet practice); the input's slope at a crossing (arithmetic); op amp as an integrator beyond its pole (textbook single-pole model, T. Fiore, Operational Amplifiers & Linear Integrated Circuits, ch. 5); 100 mV assumed overdrive is common practice [M].",
+  policy: "timing_share",
   kinds: ["comparator", "op-amp"],
-  needs: { comparator: ["tpd_ns"], "op-amp": ["slew_v_per_us"] },
-  measure({ design, rails, policy }, part, out) {
-    const limit = policy.timing_fraction / design.signal.max_frequency_hz;
-    const delay = switchingDelay(part, rails).delay;
-    const margin = limit - delay;
-    const computed = shareVerdict(margin, limit, policy);
-    // An op amp's overload recovery is not rated, so it is at best marginal here.
-    const verdict = part.kind === "op-amp" && computed === "pass" ? "marginal" : computed;
-    record(out, verdict, limit, delay, margin, limit);
+  needs: { comparator: ["tpd_ns"], "op-amp": ["gbw_mhz", "slew_v_per_us"] },
+  measure(ctx, part, out) {
+    const limit = signTimeLimit(ctx);
+    const d = stageDelay(ctx, part);
+    const margin = limit - d.seconds;
+    const computed = shareVerdict(margin, limit, ctx.policy);
+    // An op amp's saturated transition and an assumed overdrive are estimates: at best marginal.
+    const estimate = part.kind === "op-amp" || d.overdrive_assumed;
+    record(out, estimate && computed === "pass" ? "marginal" : computed, limit, d.seconds, margin, limit);
   },
-  describe({ available: delay, margin, needed: limit }, { design, rails, policy }, part) {
-    const period = `${policy.timing_fraction * 100} % of the ${formatSI(1 / design.signal.max_frequency_hz, "s")} period`;
+  describe({ available: delay, margin, needed: limit }, ctx, part) {
+    const d = stageDelay(ctx, part);
+    const slope = signInputSlope(ctx);
+    const tail = `the sign may be late by ${formatSI(limit, "s")} (timing share ${ctx.policy.timing_share * 100} % of the required accuracy at 2·2π·f·peak·t): ${spareOrShort(margin, "s")}`;
+    const total: Step[] = [
+      { label: "input slope at the crossing S_in = 2π·f·W", value: slope, unit: "V/s" },
+      ...d.components.map((c) => ({ label: `${c.name}: ${c.formula}`, value: c.seconds, unit: "s" })),
+      { label: "delay", value: delay, unit: "s" },
+      { label: "limit", value: limit, unit: "s" },
+      { label: "margin = limit − delay", value: margin, unit: "s" },
+    ];
     if (part.kind === "op-amp") {
-      const { swing, slew } = switchingDelay(part, rails);
       return {
-        reason: `an op amp used as a comparator: about ${formatSI(delay, "s")} to slew ${formatSI(swing, "V")} at ${formatQuantity(slew, "V/s")} against a limit of ${formatSI(limit, "s")} (${period}): ${spareOrShort(margin, "s")}; its overload recovery is not rated, so at best marginal`,
-        steps: [
-          { label: "output swing V_OH − V_OL", value: swing, unit: "V" },
-          { label: "slew rate", value: slew, unit: "V/s" },
-          { label: "delay ≈ swing / slew", value: delay, unit: "s" },
-          { label: "limit = timing_fraction / f", value: limit, unit: "s" },
-          { label: "margin = limit − delay", value: margin, unit: "s" },
-        ],
+        reason: `an op amp used as a comparator leaves its old level as an integrator driven by the input's ${formatSI(slope, "V/s")} ramp, then slews: ${formatSI(delay, "s")} to cross ${formatSI(d.swing_v ?? 0, "V")} at ${formatSI(part.gbw_mhz * 1e6, "Hz")} GBW and ${formatQuantity(part.slew_v_per_us * 1e6, "V/s")}; ${tail}; an estimate, so at best marginal`,
+        steps: total,
       };
     }
+    const byName = (n: string) => d.components.find((c) => c.name === n)?.seconds ?? 0;
+    const od = part.tpd_overdrive_mv === undefined ? ASSUMED_OVERDRIVE_V : part.tpd_overdrive_mv * 1e-3;
+    const hyst = byName("hysteresis");
+    const hystText =
+      hyst > 0
+        ? ` + ${formatSI(hyst, "s")} to pass half its ${formatSI((part.hysteresis_mv ?? 0) * 1e-3, "V")} hysteresis`
+        : "";
+    const odText = d.overdrive_assumed
+      ? `${formatSI(od, "V")} (assumed, common practice: tpd_overdrive_mv is empty, so at best marginal)`
+      : formatSI(od, "V");
     return {
-      reason: `switches in ${formatSI(delay, "s")}; the limit is ${formatSI(limit, "s")} (${period}): ${spareOrShort(margin, "s")}`,
-      steps: [
-        { label: "tpd", value: delay, unit: "s" },
-        { label: "limit = timing_fraction / f", value: limit, unit: "s" },
-        { label: "margin = limit − tpd", value: margin, unit: "s" },
-      ],
+      reason: `switches ${formatSI(byName("propagation"), "s")} after its input passes the threshold by ${odText}, which the ${formatSI(slope, "V/s")} ramp takes ${formatSI(byName("overdrive"), "s")} to reach${hystText}: ${formatSI(delay, "s")} in all; ${tail}`,
+      steps: total,
     };
   },
 });
-
-/** A comparator's rated delay, or the time an op amp takes to slew from one output level to the other. */
-function switchingDelay(part: Driver, rails: Rails): { delay: number; swing: number; slew: number } {
-  if (part.kind === "comparator") return { delay: part.tpd_ns * 1e-9, swing: 0, slew: 0 };
-  const swing = (outputHigh(part, rails) ?? rails.positive_v) - outputLow(part, rails);
-  const slew = part.slew_v_per_us * 1e6;
-  return { delay: swing / slew, swing, slew };
-}

@@ -21,7 +21,7 @@ export const riseTime = defineRule({
     "t_edge = max(2.2·R·C_pin, R·C_pin·ln((V_end − V_start)/(V_end − V_threshold))), R = logic.pull_up_ohm (pull-up on an open-drain output, NPN collector; to V_IH) or pull_down_ohm (diode clamp, falling to V_IL); C_pin = logic.pin_cap_f, 10 pF when not given; npn-inverter adds its storage time (logic.npn_storage_s, 300 ns when not given); margin = limit − t_edge",
   source:
     "First-order RC step response: 10–90 % rise = ln 9 · RC ≈ 2.2·RC (textbook, e.g. Sedra & Smith, Microelectronic Circuits [M for the section]); the 10 pF pin and 300 ns NPN storage time are common practice [M].",
-  policy: "timing_fraction",
+  policy: "timing_share",
   kinds: ["comparator", "op-amp"],
   needs: {},
   measure(ctx, part, out) {

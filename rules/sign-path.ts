@@ -6,6 +6,7 @@
 import type { PartOf, RoleContext } from "../src/core/rule-kit/index.ts";
 import { clampSourceCurrent } from "../src/core/math/output-current.ts";
 import { forwardVoltage } from "../src/core/math/diode.ts";
+import { timeForError } from "../src/core/math/dead-time.ts";
 import { NPN_STORAGE_DEFAULT_S, npnTurnOff, type NpnTurnOff } from "../src/core/math/npn-inverter.ts";
 import { DEFAULT_PIN_CAP_F, pullUpEdge, type PullUpEdge } from "../src/core/math/rc-edge.ts";
 import { NPN_VCE_SAT_V, outputHigh, outputLow } from "./levels.ts";
@@ -72,9 +73,16 @@ export function overloadRecovery(part: PartOf<"op-amp" | "comparator">): number 
 }
 
 /**
- * The longest the sign may be late. Until the late-sign physics lands this is
- * the share of the period the propagation-delay rule allows.
+ * The longest the sign may be late (SPEC §11.4): while it is wrong the reading
+ * is off by 2·2π·f·peak·t, and that may take the timing share of the required
+ * accuracy. The one place this limit is worked out; the budget's late-sign
+ * term is the same error.
  */
-export function signTimeLimit(ctx: RoleContext): number {
-  return ctx.policy.timing_fraction / ctx.design.signal.max_frequency_hz;
+export function signTimeLimit(ctx: Pick<RoleContext, "design" | "policy">): number {
+  const { design, policy } = ctx;
+  return timeForError(
+    design.signal.max_frequency_hz,
+    design.signal.peak_v,
+    policy.timing_share * design.accuracy.required_v,
+  );
 }

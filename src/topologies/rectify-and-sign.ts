@@ -4,6 +4,7 @@
 // the diode drops it will really get.
 import { forwardCurrent } from "../../rules/forward-current.ts";
 import { inputCommonMode } from "../../rules/input-common-mode.ts";
+import { lateSign } from "../../rules/late-sign.ts";
 import { leakage } from "../../rules/leakage.ts";
 import { logicHigh } from "../../rules/logic-high.ts";
 import { logicLow } from "../../rules/logic-low.ts";
@@ -36,6 +37,7 @@ import type { Derived, DiodeUse, DisplayGroup, DisplayRow, RoleResult } from "..
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import { pumpRail } from "../core/math/charge-pump.ts";
 import { forwardVoltage } from "../core/math/diode.ts";
+import { endPhrase, forwardVoltageAt } from "../core/math/temperature.ts";
 import { loadedRatioDeviation, sourceRatioDeviation, type Divider } from "../core/math/divider.ts";
 import { NPN_VBE_ON_V } from "../core/math/npn-inverter.ts";
 import type { DiodeStage, OpAmpStage, Rails, SignStage } from "../core/rule-kit/index.ts";
@@ -47,6 +49,7 @@ import { rectifyAndSignChain } from "./rectify-and-sign-sim.ts";
 import { converterTerms } from "./converter-terms.ts";
 import { frontEnd } from "./front-end.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
+import { TIMING_ROLE_TERMS } from "./rectify-and-sign-timing.ts";
 
 /** Used only when the catalogue has no diode at all, so rails can still be computed. */
 const NOMINAL_SILICON: Diode = {
@@ -181,8 +184,12 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     },
     rails,
   );
-  const rectDiode = use(settleDiode(rectDiodeRole, "rectifier diode"), rectCurrent, rectDiodeRole);
+  const rectDiodePart = settleDiode(rectDiodeRole, "rectifier diode");
+  const rectDiode = use(rectDiodePart, rectCurrent, rectDiodeRole);
   const vf = rectDiode.vf_v;
+  // The dead time's jump is largest where the drops are: at the cold end (−2 mV/°C, SPEC §11.7).
+  const cold = design.temperature.min_c;
+  const vfCold = forwardVoltageAt(rectDiodePart, rectCurrent, cold);
 
   // 3. The clamp diode, when the level shift uses one.
   let clamp: SignStage["clamp"];
@@ -260,7 +267,13 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     output_per_input: k / 2,
     bandwidth_peak_v: 2 * peak,
     slew_amplitude_v: W + vf,
-    zero_crossing_v: 2 * vf,
+    zero_crossing_v: 2 * vfCold,
+    zero_crossing_at: endPhrase("cold", cold),
+    // The buffer's ±W reaches stage 1 through its input resistor; the reading's error is input-referred at the peak.
+    zero_crossing_signal_v: W,
+    zero_crossing_peak_v: peak,
+    // While stage 1 is dead the summer's output is −x, below 0 V, and the single-supply converter reads 0: off by x.
+    zero_crossing_error: "clips",
   };
   const summer: OpAmpStage = {
     stage: "op-amp",
@@ -373,6 +386,7 @@ const ROLE_TERMS: readonly RoleTerm[] = [
   },
   { name: "sign-dead-band", label: "comparator dead band", role: "sign", rule: signDeadBand.id },
   { name: "rectifier-diode-leakage", label: "rectifier diode leakage", role: "rectifier-diode", rule: leakage.id },
+  ...TIMING_ROLE_TERMS,
 ];
 
 /** Terms that do not depend on the parts: the ADC, its reference, the divider and the source. */
@@ -643,6 +657,7 @@ export const rectifyAndSign = defineTopology({
         differentialInput,
         overloadRecoveryRule,
         riseTime,
+        lateSign,
         outputCurrent,
         baseEmitterReverse,
       ],

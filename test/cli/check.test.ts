@@ -130,8 +130,8 @@ describe("explain", () => {
   it("shows every rule's arithmetic step by step", async () => {
     const { code, out } = await run(
       "explain",
-      // The bridge's rectifier fit: stage 1 must swing to −(W + Vf) on the pumped rail (SPEC §11.2).
-      "oa-prec-bip-rro",
+      // The bridge's one rectifier fit: stage 1 swings to −(W + Vf) and is dead briefly at each crossing (SPEC §11.2–3).
+      "oa-cmos-rrio-150m-12v",
       "data/designs/bridge-10v-5v-adc.json",
       "--role",
       "rectifier",

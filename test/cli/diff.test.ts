@@ -77,7 +77,7 @@ describe("diff between two data folders", () => {
 
   it("says so in words, part by part", async () => {
     const after = copyDataFolder();
-    setCell(after, "op-amps.csv", "oa-cmos-rrio-3m", "out_pos_headroom_v", "1.6");
+    setCell(after, "op-amps.csv", "oa-cmos-rrio-1m", "out_pos_headroom_v", "1.6");
     const { code, out } = await run("diff", "data", after);
     expect(code).toBe(0);
     const text = out.replaceAll(after, "AFTER");
@@ -86,10 +86,7 @@ describe("diff between two data folders", () => {
       "railsieve diff: data → AFTER",
       `  1 design changes, ${designs - 1} designs unchanged`,
     ]);
-    // oa-cmos-rrio-3m is no longer vibration's best buffer since the rectifier's two stages (SPEC §11.2)
-    // changed which parts fit there; the diff still names it, rule by rule.
-    expect(text).toContain("x oa-cmos-rrio-3m: pass → fail, lost fit");
-    expect(text).toContain("output-swing: pass → fail");
+    expect(text).toContain("best part: oa-cmos-rrio-1m → oa-cmos-rrio-quad");
     expect(text).toContain("result: no design stops holding and no BOM part stops fitting");
   });
 

@@ -8,7 +8,7 @@ export const BASE_DESIGN = {
   title: "Test design",
   topology: "rectify-and-sign",
   supply: { positive_v: 5, negative: { kind: "fixed", v: -5 } },
-  signal: { peak_v: 2.5, max_frequency_hz: 200, source_ohm: 0 },
+  signal: { peak_v: 2.5, max_frequency_hz: 20, source_ohm: 0 },
   front_end: {
     window_v: 2.5,
     divider_total_ohm: 100000,

@@ -64,6 +64,7 @@ export const COMPARATOR_CELLS: Record<string, string> = {
   out_pos_headroom_v: "0",
   vos_max_mv: "5",
   tpd_ns: "1300",
+  tpd_overdrive_mv: "5",
   hysteresis_mv: "",
   iq_ma: "0.05",
   // Sign-path ratings (issue 21), typical of the class (common practice [M]).

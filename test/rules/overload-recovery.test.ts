@@ -6,8 +6,11 @@ import { design } from "../helpers/designs.ts";
 import { comparator, opAmp } from "../helpers/parts.ts";
 import { check, expectFinding, reasons, signStage, type RuleCase } from "../helpers/rules.ts";
 
-const LIMIT = 50e-6; // placeholder, replaced once the late-sign limit is wired
-const at200 = design({ signal: { max_frequency_hz: 200 } });
+// The late-sign limit (SPEC §11.4): the time in which 2·2π·f·peak·t reaches timing_share (25 %) ×
+// required_v. With required_v = 0.4π V at 200 Hz and 2.5 V peak it is 50 µs (arithmetic).
+const REQUIRED = 0.4 * Math.PI;
+const LIMIT = (0.25 * REQUIRED) / (2 * 2 * Math.PI * 200 * 2.5);
+const at200 = design({ signal: { max_frequency_hz: 200 }, accuracy: { required_v: REQUIRED } });
 
 const cases: RuleCase[] = [
   {

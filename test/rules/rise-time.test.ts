@@ -7,15 +7,23 @@ import { comparator } from "../helpers/parts.ts";
 import { check, expectFinding, reasons, signStage, GROUND_5V, type RuleCase } from "../helpers/rules.ts";
 
 const LN9 = Math.log(9);
-const LIMIT = 50e-6; // placeholder, replaced once the late-sign limit is wired
+// The late-sign limit (SPEC §11.4): the time in which 2·2π·f·peak·t reaches timing_share (25 %) ×
+// required_v. With required_v = 0.4π V at 200 Hz and 2.5 V peak it is 50 µs (arithmetic).
+const REQUIRED = 0.4 * Math.PI;
+const LIMIT = (0.25 * REQUIRED) / (2 * 2 * Math.PI * 200 * 2.5);
 const openDrain = comparator({ output: "open-drain", out_neg_headroom_v: undefined, out_pos_headroom_v: undefined });
 const pullUp = (ohm: number | undefined, cap?: number) =>
   design({
     signal: { max_frequency_hz: 200 },
+    accuracy: { required_v: REQUIRED },
     logic: { level_shift: "pull-up", pull_up_ohm: ohm, ...(cap === undefined ? {} : { pin_cap_f: cap }) },
   });
 const npn = (logic: Record<string, number | boolean | undefined>) =>
-  design({ signal: { max_frequency_hz: 200 }, logic: { level_shift: "npn-inverter", ...logic } });
+  design({
+    signal: { max_frequency_hz: 200 },
+    accuracy: { required_v: REQUIRED },
+    logic: { level_shift: "npn-inverter", ...logic },
+  });
 
 const cases: RuleCase[] = [
   {

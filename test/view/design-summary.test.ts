@@ -42,7 +42,7 @@ describe("summarizeDesign", () => {
 
   it("names a BOM part that does not fit", () => {
     expect(summarizeDesign(entry({ bom: { buffer: "oa-low", rectifier: "oa-low" } })).line).toMatchInlineSnapshot(
-      `"BOM parts oa-low (buffer) and oa-low (rectifier) do not fit. Accuracy budget fails (worst case 415 mV against 100 mV)."`,
+      `"BOM parts oa-low (buffer) and oa-low (rectifier) do not fit. Accuracy budget fails (worst case 442 mV against 100 mV)."`,
     );
   });
 
@@ -52,7 +52,7 @@ describe("summarizeDesign", () => {
     const s = summarizeDesign(entry({ signal: { peak_v: 10 }, front_end: { divider_total_ohm: 40000 } }));
     expect(s).toEqual(expect.objectContaining({ ok: true, holds: false }));
     expect(s.line).toMatchInlineSnapshot(
-      `"No part fits the rectifier. Accuracy budget incomplete: no part for the rectifier."`,
+      `"No part fits the rectifier and sign comparator. Accuracy budget incomplete: no part for the rectifier and sign comparator."`,
     );
   });
 

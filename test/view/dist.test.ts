@@ -244,13 +244,17 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
     const buffer = section("buffer");
     const fits = role("buffer").fits;
     expect(fits.length).toBeGreaterThan(0);
-    expect(fits.length).toBeLessThanOrEqual(FITS_IN_FULL);
-    expect(buffer.match(/<svg class="rail-diagram"/g)?.length).toBe(fits.length);
+    // The first FITS_IN_FULL in full (the rest one row each, see the long shortlist below).
+    const full = fits.slice(0, FITS_IN_FULL);
+    expect(buffer.match(/<svg class="rail-diagram"/g)?.length).toBe(full.length);
     expect(listedIn(buffer, /<li class="result result-[a-z]+" id="buffer--([a-z0-9-]+)"/g)).toEqual(
-      fits.map((p) => p.part.id),
+      full.map((p) => p.part.id),
     );
     expect(role("buffer").rejected.length).toBeGreaterThan(0);
-    expect(listedIn(buffer, /<tr id="buffer--([a-z0-9-]+)"/g)).toEqual(role("buffer").rejected.map((p) => p.part.id));
+    const fitIds = new Set(fits.map((p) => p.part.id));
+    expect(listedIn(buffer, /<tr id="buffer--([a-z0-9-]+)"/g).filter((id) => !fitIds.has(id ?? ""))).toEqual(
+      role("buffer").rejected.map((p) => p.part.id),
+    );
   });
 
   it("gives every rejection each reason that rejects it, with a number and a unit", () => {

@@ -104,7 +104,7 @@ describe("holdsLine", () => {
       "the default design",
       {},
       false,
-      /^Design marginal\. Every role has a fit and every BOM part fits\. Accuracy budget is marginal \(worst case 115 mV against 100 mV\)\.$/,
+      /^Design marginal\. Every role has a fit and every BOM part fits\. Accuracy budget is marginal \(worst case 164 mV against 100 mV\)\.$/,
     ],
     [
       "a BOM buffer that cannot reach the window",
@@ -113,10 +113,10 @@ describe("holdsLine", () => {
       /oa-bip-gs-dual \(buffer\) does not fit/,
     ],
     [
-      "a 12 V rail that lifts every comparator output above the logic supply",
+      "a 12 V rail that lifts every comparator output above the logic supply and puts the pumped supply beyond the fast rectifiers' 12 V",
       { "supply.positive_v": "12" },
       false,
-      /^Design fails\. No part fits the sign comparator\. Accuracy budget incomplete: no part for the sign comparator\.$/,
+      /^Design fails\. No part fits the rectifier and sign comparator\. Accuracy budget incomplete: no part for the rectifier and sign comparator\.$/,
     ],
   ] as const)("%s", (_label, change, holds, line) => {
     const result = holdsLine(evaluate({ ...DEFAULT_DRAFT, ...change }));

@@ -34,7 +34,8 @@ export const DEFAULT_INPUT = {
   logic: { vdd_v: 5, vih_v: 3.0, vil_v: 1.5, level_shift: "diode-clamp", pull_down_ohm: 10000 },
   accuracy: { required_v: 0.1 },
   temperature: { min_c: 0, max_c: 50 },
-  policy: {},
+  // Each rectifier stage's offset takes 30 % of the requirement: the summer carries 4·Vos (SPEC §11.2).
+  policy: { offset_share: 0.3 },
 } as const;
 
 /** Values for fields the default design does not use, shown when a visitor switches to them. */

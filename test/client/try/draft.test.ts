@@ -69,6 +69,7 @@ describe("draftFromInput / rawFromDraft", () => {
 
   it("turns the allow_unrated choice into a boolean and leaves other text for the schema to judge", () => {
     expect(rawFromDraft({ ...DEFAULT_DRAFT, "policy.allow_unrated": "true" })["policy"]).toEqual({
+      offset_share: "0.3",
       allow_unrated: true,
     });
     // The wording is the schema's (pinned in test/core); here only that it lands on the field.
@@ -92,11 +93,13 @@ describe("draftFromInput / rawFromDraft", () => {
   });
 
   it("lists only the policy keys the visitor set", () => {
+    // The default design sets offset_share itself (SPEC §11.2: the summer carries 4·Vos).
     expect(policyOverrides({ ...DEFAULT_DRAFT, "policy.sign_share": "0.3", "policy.allow_unrated": "false" })).toEqual([
+      "offset_share",
       "sign_share",
       "allow_unrated",
     ]);
-    expect(policyOverrides(DEFAULT_DRAFT)).toEqual([]);
+    expect(policyOverrides(DEFAULT_DRAFT)).toEqual(["offset_share"]);
   });
 
   it("has one field for every leaf of the SPEC §5 design (and no other)", () => {

@@ -7,20 +7,20 @@ const data = loadDataSet("data");
 const audio = data.designs.find((d) => d.design?.id === "audio-1v5-20k")?.design;
 
 describe("comparison of both topologies", () => {
-  it("the audio demo design passes with rectify-and-sign and fails with offset-to-mid-rail, decided by the network term", () => {
+  it("the audio demo design: at 20 kHz the rectifier's dead time rules out rectify-and-sign, and offset-to-mid-rail is recommended", () => {
     expect(audio).toBeDefined();
     if (!audio) return;
     const e = evaluateDesign(audio, data.catalogue);
     expect(e.ok).toBe(true);
     if (!e.ok) return;
     const c = e.result.comparison;
-    expect(c?.recommended).toBe("rectify-and-sign");
+    expect(c?.recommended).toBe("offset-to-mid-rail");
     const byTopology = Object.fromEntries((c?.rows ?? []).map((r) => [r.topology, r]));
-    expect(byTopology["rectify-and-sign"]?.budget_verdict).toBe("pass");
-    expect(byTopology["offset-to-mid-rail"]?.budget_verdict).toBe("fail");
-    expect(byTopology["offset-to-mid-rail"]?.dominant).toBe("network-ratio");
-    expect(c?.reason).toContain("network-ratio");
-    expect(e.result.topology).toBe("rectify-and-sign");
+    expect(byTopology["offset-to-mid-rail"]?.budget_verdict).toBe("pass");
+    // SPEC §11.3: the integrator-then-slew dead time at 20 kHz costs far more than the 40 mV required.
+    expect(byTopology["rectify-and-sign"]?.budget_verdict).toBe("fail");
+    expect(byTopology["rectify-and-sign"]?.dominant).toBe("rectifier-dead-time");
+    expect(e.result.topology).toBe("offset-to-mid-rail");
   });
 
   it("every design evaluates in either topology with a complete budget object", () => {

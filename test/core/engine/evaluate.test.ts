@@ -367,7 +367,8 @@ describe("evaluateDesign: the BOM", () => {
 
 describe("evaluateDesign: an op amp in the sign role", () => {
   it("is at best marginal, ranked after the comparators that pass, with a reason saying why", () => {
-    const sign = role(evaluate(), "sign");
+    // ±400 mV required: room for an op amp's slow transition at a 20 Hz crossing (SPEC §11.4, integrator then slew).
+    const sign = role(evaluate({ accuracy: { required_v: 0.4 } }), "sign");
     expect(ids(sign)).toMatchInlineSnapshot(`
       {
         "fits": [
@@ -389,9 +390,9 @@ describe("evaluateDesign: an op amp in the sign role", () => {
     expect(rrio?.verdict).toBe("marginal");
     expect(rrio?.findings.filter((f) => f.verdict !== "pass").map((f) => `${f.rule}: ${f.reason}`))
       .toMatchInlineSnapshot(`
-      [
-        "propagation-delay: an op amp used as a comparator: about 1.98 µs to slew 9.90 V at 5.00 V/µs against a limit of 50.0 µs (1 % of the 5.00 ms period): 48.0 µs to spare; its overload recovery is not rated, so at best marginal",
-      ]
-    `);
+        [
+          "propagation-delay: an op amp used as a comparator leaves its old level as an integrator driven by the input's 314 V/s ramp, then slews: 31.7 µs to cross 9.90 V at 10.0 MHz GBW and 5.00 V/µs; the sign may be late by 159 µs (timing share 25 % of the required accuracy at 2·2π·f·peak·t): 127 µs to spare; an estimate, so at best marginal",
+        ]
+      `);
   });
 });
