@@ -41,10 +41,8 @@ export function hasBareLoop(id: string): boolean {
 export type RolePlan = {
   topology: string;
   role: string;
-  /** Every stage's rules in turn (the engine's finding order). */
   rules: readonly Benchmarked[];
-  /** Each stage of the role with its rules (the two-stage rectifier has two). */
-  checks: readonly { stage: Stage; rules: readonly Benchmarked[] }[];
+  stage: Stage;
   rails: Rails;
   design: Design;
   table: Table;
@@ -86,7 +84,16 @@ const COLUMNS = [
 export function tableOf(parts: readonly Part[]): Table {
   const n = parts.length;
   const col: Record<string, Float64Array> = {};
-  for (const c of [...COLUMNS, "is_op_amp", "open_drain", "unity_gain_stable", "phase_reversal", "schottky"]) {
+  for (const c of [
+    ...COLUMNS,
+    "is_op_amp",
+    "open_drain",
+    "unity_gain_stable",
+    "phase_reversal",
+    "schottky",
+    "input_fet",
+    "status_cost",
+  ]) {
     col[c] = new Float64Array(n).fill(NaN);
   }
   parts.forEach((p, i) => {
@@ -97,8 +104,12 @@ export function tableOf(parts: readonly Part[]): Table {
     if (p.kind === "op-amp") {
       (col.unity_gain_stable as Float64Array)[i] = p.unity_gain_stable ? 1 : 0;
       if (p.phase_reversal !== undefined) (col.phase_reversal as Float64Array)[i] = p.phase_reversal ? 1 : 0;
+      (col.input_fet as Float64Array)[i] = p.input_fet === true ? 1 : 0;
     }
     if (p.kind === "diode") (col.schottky as Float64Array)[i] = p.type === "schottky" ? 1 : 0;
+    // The ranking's middle keys (SPEC §7) folded as the engine folds them: status, then cost band (none last).
+    const status = p.status === "stocked" ? 0 : p.status === "approved" ? 1 : p.status === "listed" ? 2 : 3;
+    (col.status_cost as Float64Array)[i] = status * 8 + (p.cost_band ?? 6);
   });
   return { ids: parts.map((p) => p.id), n, col };
 }
@@ -118,8 +129,8 @@ export function planOf(design: Design, catalogue: Catalogue): RolePlan[] {
     return e.result.roles.map((r) => ({
       topology,
       role: r.role,
-      rules: r.stages.flatMap((s) => s.rules) as Benchmarked[],
-      checks: r.stages.map((s) => ({ stage: s.stage, rules: s.rules as Benchmarked[] })),
+      rules: r.rules as Benchmarked[],
+      stage: r.stage,
       rails: e.result.derived.rails,
       design,
       // The engine's candidates for the role: the kinds that can fill it, in file order.
@@ -154,12 +165,8 @@ export function bareLoop(plans: readonly RolePlan[], out: readonly RoleOutput[])
     const o = out[r] as RoleOutput;
     o.severity.fill(PASS);
     o.relative.fill(Infinity);
-    let k = 0;
-    for (const check of plan.checks) {
-      for (const rule of check.rules) {
-        runRule(plan, check.stage, rule, o.margins[k] as Float64Array, o.severity, o.relative);
-        k++;
-      }
+    for (let k = 0; k < plan.rules.length; k++) {
+      runRule(plan, plan.rules[k] as Benchmarked, o.margins[k] as Float64Array, o.severity, o.relative);
     }
     const allowUnrated = plan.design.policy.allow_unrated;
     for (let i = 0; i < plan.table.n; i++) {
@@ -169,17 +176,28 @@ export function bareLoop(plans: readonly RolePlan[], out: readonly RoleOutput[])
   }
 }
 
-function runRule(
-  plan: RolePlan,
-  stage: Stage,
-  rule: Benchmarked,
-  margin: Float64Array,
-  sev: Uint8Array,
-  rel: Float64Array,
-): void {
-  const { design, rails, table } = plan;
+/**
+ * The bare loop, then each role's fits ranked as SPEC §7 ranks them (verdict,
+ * status, cost band, least relative margin, then list order) and its
+ * rejections kept in list order: the least work that gives what a page reads.
+ */
+export function bareLoopSorted(plans: readonly RolePlan[], out: readonly RoleOutput[]): Uint32Array[] {
+  bareLoop(plans, out);
+  return plans.map((plan, r) => {
+    const o = out[r] as RoleOutput;
+    const key = plan.table.col.status_cost as Float64Array;
+    const fits: number[] = [];
+    for (let i = 0; i < plan.table.n; i++) if ((o.severity[i] as number) <= MARGINAL) fits.push(i);
+    const major = (i: number) => (o.severity[i] as number) * 64 + (key[i] as number);
+    fits.sort((a, b) => major(a) - major(b) || (o.relative[b] as number) - (o.relative[a] as number) || a - b);
+    return Uint32Array.from(fits);
+  });
+}
+
+function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: Uint8Array, rel: Float64Array): void {
+  const { design, stage, rails, table } = plan;
   const c = table.col as Record<(typeof COLUMNS)[number] | "is_op_amp" | "open_drain", Float64Array> &
-    Record<"unity_gain_stable" | "phase_reversal" | "schottky", Float64Array>;
+    Record<"unity_gain_stable" | "phase_reversal" | "schottky" | "input_fet", Float64Array>;
   const n = table.n;
   const policy = design.policy;
   const headroom = policy.headroom_margin_v;
@@ -303,12 +321,13 @@ function runRule(
     case "offset": {
       if (stage.stage !== "op-amp") return;
       const span = Math.max(Math.abs(design.temperature.min_c - 25), Math.abs(design.temperature.max_c - 25));
+      const fetScale = 2 ** (Math.max(0, design.temperature.max_c - 25) / 10);
       const limit = policy.offset_share * A;
       for (let i = 0; i < n; i++) {
         const drift = c.vos_drift_uv_per_c[i] as number;
         const vos = (c.vos_max_mv[i] as number) * 1e-3 + (drift === drift ? drift * 1e-6 * span : 0);
-        const error =
-          (stage.vos_multiplier * vos + (c.ib_max_na[i] as number) * 1e-9 * stage.bias_ohm) / stage.output_per_input;
+        const ib = (c.ib_max_na[i] as number) * 1e-9 * (c.input_fet[i] === 1 ? fetScale : 1);
+        const error = (stage.vos_multiplier * vos + ib * stage.bias_ohm) / stage.output_per_input;
         share(i, limit - error, limit);
       }
       return;
@@ -333,17 +352,8 @@ function runRule(
       if (stage.stage !== "op-amp") return;
       const jump = stage.zero_crossing_v ?? 0;
       const beta = stage.zero_crossing_beta ?? 0.5;
-      const slope =
-        2 *
-        Math.PI *
-        f *
-        (stage.zero_crossing_signal_v ?? Math.max(Math.abs(stage.input.low), Math.abs(stage.input.high)));
-      const perSecond =
-        (stage.zero_crossing_error === "clips" ? 1 : 2) *
-        2 *
-        Math.PI *
-        f *
-        (stage.zero_crossing_peak_v ?? stage.bandwidth_peak_v);
+      const slope = 2 * Math.PI * f * Math.max(Math.abs(stage.input.low), Math.abs(stage.input.high));
+      const perSecond = (stage.zero_crossing_error === "clips" ? 1 : 2) * 2 * Math.PI * f * stage.bandwidth_peak_v;
       const limit = policy.timing_share * A;
       for (let i = 0; i < n; i++) {
         const accel = 2 * Math.PI * (c.gbw_mhz[i] as number) * 1e6 * beta * slope;
@@ -418,7 +428,17 @@ function runRule(
     }
     case "reverse-voltage": {
       if (stage.stage !== "diode") return;
-      for (let i = 0; i < n; i++) voltage(i, (c.vr_max_v[i] as number) - stage.reverse_v, stage.reverse_v);
+      const rv = stage.reverse_vf;
+      for (let i = 0; i < n; i++) {
+        let needed = stage.reverse_v;
+        if (rv !== undefined) {
+          const d = { vf_1ma_v: c.vf_1ma_v[i] as number, vf_10ma_v: c.vf_10ma_v[i] as number };
+          const at25 = forwardVoltage(d, rv.current_a);
+          const vf = at25 === 0 ? 0 : Math.max(0, at25 - 2e-3 * (rv.temp_c - 25));
+          needed = Math.max(0, stage.reverse_v + rv.sign * vf);
+        }
+        voltage(i, (c.vr_max_v[i] as number) - needed, needed);
+      }
       return;
     }
     case "recovery": {
@@ -441,6 +461,19 @@ function runRule(
       for (let i = 0; i < n; i++) {
         const ir = (c.ir_na[i] as number) * 1e-9 * (c.schottky[i] === 1 ? schottkyScale : junctionScale);
         share(i, limit - ir * ohmPerInput, limit);
+      }
+      return;
+    }
+    case "clamp-leakage": {
+      if (stage.stage !== "diode") return;
+      const rise = Math.max(0, design.temperature.max_c - 25);
+      const schottkyScale = 10 ** (rise / 25);
+      const junctionScale = 2 ** (rise / 10);
+      const limit = -(design.logic.pin_min_v ?? -0.3);
+      const blocks = -stage.reverse_v < 0;
+      for (let i = 0; i < n; i++) {
+        const ir = (c.ir_na[i] as number) * 1e-9 * (c.schottky[i] === 1 ? schottkyScale : junctionScale);
+        share(i, limit - (blocks ? ir * design.logic.pull_down_ohm : 0), limit);
       }
       return;
     }
@@ -595,6 +628,7 @@ const CASES: Record<Benchmarked, true> = {
   "reverse-voltage": true,
   recovery: true,
   leakage: true,
+  "clamp-leakage": true,
   "forward-current": true,
   "differential-input": true,
   "overload-recovery": true,

@@ -5,7 +5,7 @@
 import type { Catalogue } from "../src/core/catalogue.ts";
 import { evaluateDesign } from "../src/engine.ts";
 import type { Design } from "../src/core/schemas/design.ts";
-import { bareLoop, outputsFor, planOf } from "./bare-loop.ts";
+import { bareLoop, bareLoopSorted, outputsFor, planOf } from "./bare-loop.ts";
 import { syntheticCatalogue } from "./generate.ts";
 import { median, timePerCall } from "./stats.ts";
 
@@ -16,9 +16,20 @@ export type EngineRow = {
   ratio: number;
   /** Evaluation plus reading every role's ranked lists, as the CLI and the site do (the engine ranks on read). */
   ranked_ms_per_design: number;
+  /** The bare loop that also ranks each role's fits (bareLoopSorted): what the ranked figure is judged against. */
+  sorted_baseline_ms_per_design: number;
+  /** ranked ÷ sorted baseline, the median of the rounds' ratios. */
+  ranked_ratio: number;
 };
 
-type Subject = { parts: number; engine: () => void; bare: () => void; ranked: () => void; minMs: number };
+type Subject = {
+  parts: number;
+  engine: () => void;
+  bare: () => void;
+  ranked: () => void;
+  sorted: () => void;
+  minMs: number;
+};
 
 function subject(base: Catalogue, designs: readonly Design[], parts: number): Subject {
   const catalogue = syntheticCatalogue(base, parts, 1);
@@ -30,6 +41,7 @@ function subject(base: Catalogue, designs: readonly Design[], parts: number): Su
       for (const d of designs) evaluateDesign(d, catalogue);
     },
     bare: () => plans.forEach((p, i) => bareLoop(p, outputs[i] ?? [])),
+    sorted: () => plans.forEach((p, i) => void bareLoopSorted(p, outputs[i] ?? [])),
     ranked: () => {
       for (const d of designs) {
         const e = evaluateDesign(d, catalogue);
@@ -52,6 +64,8 @@ export function measureEngine(
     for (let i = 0; i < 3; i++) {
       s.engine();
       s.bare();
+      s.ranked();
+      s.sorted();
     }
   }
   const times = subjects.map(() => ({
@@ -59,6 +73,8 @@ export function measureEngine(
     bare: [] as number[],
     ratio: [] as number[],
     ranked: [] as number[],
+    sorted: [] as number[],
+    rankedRatio: [] as number[],
   }));
   for (let r = 0; r < rounds; r++) {
     subjects.forEach((s, k) => {
@@ -68,7 +84,11 @@ export function measureEngine(
       t.engine.push(x);
       t.bare.push(y);
       t.ratio.push(x / y);
-      if (r % 2 === 0) t.ranked.push(timePerCall(s.ranked, s.minMs) / designs.length);
+      const z = timePerCall(s.ranked, s.minMs) / designs.length;
+      const w = timePerCall(s.sorted, s.minMs) / designs.length;
+      t.ranked.push(z);
+      t.sorted.push(w);
+      t.rankedRatio.push(z / w);
     });
   }
   return subjects.map((s, k) => ({
@@ -77,5 +97,7 @@ export function measureEngine(
     baseline_ms_per_design: median(times[k]!.bare),
     ratio: median(times[k]!.ratio),
     ranked_ms_per_design: median(times[k]!.ranked),
+    sorted_baseline_ms_per_design: median(times[k]!.sorted),
+    ranked_ratio: median(times[k]!.rankedRatio),
   }));
 }

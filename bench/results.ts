@@ -11,6 +11,9 @@ export const benchResults = z.strictObject({
       ms_per_design: positive,
       baseline_ms_per_design: positive,
       ratio: positive,
+      /** Evaluation with every role's ranked lists read, and its ratio to the bare loop that also sorts (issue 18; optional so older results still read). */
+      ranked_ms_per_design: positive.optional(),
+      ranked_ratio: positive.optional(),
     }),
   ),
   validate_rows_per_s: positive,
@@ -18,6 +21,14 @@ export const benchResults = z.strictObject({
   simulation_ms: positive.optional(),
   build: z.strictObject({ demo_s: positive, large_s: positive, large_pages: z.number().int().positive() }),
   try_page: z.strictObject({ demo_p95_ms: positive, large_p95_ms: positive }),
+  /** The large site on disk (issue 18; optional so older results still read). */
+  site: z
+    .strictObject({
+      total_bytes: z.number().int().positive(),
+      largest_page_bytes: z.number().int().positive(),
+      largest_page: z.string(),
+    })
+    .optional(),
   weight: z.strictObject({
     try_js_gzip_bytes: z.number().int().positive(),
     catalogue_json_gzip_bytes: z.number().int().positive(),

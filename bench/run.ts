@@ -14,7 +14,7 @@ import { benchResults, type BenchResults } from "./results.ts";
 import { measureSimulation } from "./simulate.ts";
 import { median } from "./stats.ts";
 import { measureValidation } from "./validate.ts";
-import { tryPageWeight } from "./weight.ts";
+import { siteWeight, tryPageWeight } from "./weight.ts";
 
 const quick = process.argv.includes("--quick");
 // Checked first, so a missing browser costs a line, not a minute of benchmarks.
@@ -44,7 +44,7 @@ const started = performance.now();
 const engine: EngineRow[] = measureEngine(demo.catalogue, demoDesigns, SIZES, quick ? 3 : 7);
 for (const row of engine) {
   log(
-    `engine ${String(row.parts).padStart(7)} parts: ${row.ms_per_design.toFixed(3)} ms/design, bare loop ${row.baseline_ms_per_design.toFixed(3)} ms → ${row.ratio.toFixed(2)}×; with ranked lists read ${row.ranked_ms_per_design.toFixed(3)} ms`,
+    `engine ${String(row.parts).padStart(7)} parts: ${row.ms_per_design.toFixed(3)} ms/design, bare loop ${row.baseline_ms_per_design.toFixed(3)} ms → ${row.ratio.toFixed(2)}×; with ranked lists read ${row.ranked_ms_per_design.toFixed(3)} ms, bare loop that also sorts ${row.sorted_baseline_ms_per_design.toFixed(3)} ms → ${row.ranked_ratio.toFixed(2)}×`,
   );
 }
 
@@ -76,6 +76,10 @@ try {
   log(
     `build ${LARGE_PARTS} parts + ${large.designs.length} designs: ${largeBuild.seconds.toFixed(1)} s, ${largeBuild.pages} pages (${(largeBuild.pages / largeBuild.seconds).toFixed(0)} pages/s)`,
   );
+  const site = siteWeight(largeSite);
+  log(
+    `site ${LARGE_PARTS} parts + ${large.designs.length} designs: ${(site.total_bytes / 1e6).toFixed(1)} MB on disk, largest page ${(site.largest_page_bytes / 1e6).toFixed(2)} MB (${site.largest_page})`,
+  );
 
   const browser = await launchChromium(chromium);
   const tryDemo = await measureTryPage({ siteDir: demoSite, edits: EDITS, browser });
@@ -99,16 +103,21 @@ try {
   );
 
   results = benchResults.parse({
-    engine: engine.map(({ parts, ms_per_design, baseline_ms_per_design, ratio }) => ({
-      parts,
-      ms_per_design: round(ms_per_design),
-      baseline_ms_per_design: round(baseline_ms_per_design),
-      ratio: round(ratio),
-    })),
+    engine: engine.map(
+      ({ parts, ms_per_design, baseline_ms_per_design, ratio, ranked_ms_per_design, ranked_ratio }) => ({
+        parts,
+        ms_per_design: round(ms_per_design),
+        baseline_ms_per_design: round(baseline_ms_per_design),
+        ratio: round(ratio),
+        ranked_ms_per_design: round(ranked_ms_per_design),
+        ranked_ratio: round(ranked_ratio),
+      }),
+    ),
     validate_rows_per_s: Math.round(validation.rows_per_s),
     simulation_ms: round(slowestSim.ms),
     build: { demo_s: round(demoBuild.seconds), large_s: round(largeBuild.seconds), large_pages: largeBuild.pages },
     try_page: { demo_p95_ms: round(tryDemo.p95_ms), large_p95_ms: round(tryLarge.p95_ms) },
+    site,
     weight,
   });
 } finally {
@@ -140,7 +149,27 @@ const targets: [string, boolean | undefined, string][] = [
     (results.simulation_ms ?? Infinity) <= 10,
     `${results.simulation_ms} ms`,
   ],
-  ["2,000 parts + 10 designs build ≤ 60 s", results.build.large_s <= 60, `${results.build.large_s} s`],
+  [
+    "engine with ranked lists ≤ 3× a bare loop that sorts, 10k",
+    e10k && e10k.ranked_ratio <= 3,
+    e10k ? `${e10k.ranked_ratio.toFixed(2)}×` : "-",
+  ],
+  [
+    "ranked lists grow ≤ 12× from 10k to 100k parts",
+    e10k && e100k && e100k.ranked_ms_per_design <= 12 * e10k.ranked_ms_per_design,
+    e10k && e100k ? `${(e100k.ranked_ms_per_design / e10k.ranked_ms_per_design).toFixed(1)} × 10k` : "-",
+  ],
+  ["2,000 parts + 10 designs build ≤ 8 s", results.build.large_s <= 8, `${results.build.large_s} s`],
+  [
+    "2,000 parts + 10 designs: largest page ≤ 1 MB",
+    (results.site?.largest_page_bytes ?? Infinity) <= 1e6,
+    `${((results.site?.largest_page_bytes ?? 0) / 1e6).toFixed(2)} MB (${results.site?.largest_page ?? "-"})`,
+  ],
+  [
+    "2,000 parts + 10 designs: whole site ≤ 60 MB",
+    (results.site?.total_bytes ?? Infinity) <= 60e6,
+    `${((results.site?.total_bytes ?? 0) / 1e6).toFixed(1)} MB`,
+  ],
   ["try page p95 ≤ 16 ms, demo", results.try_page.demo_p95_ms <= 16, `${results.try_page.demo_p95_ms} ms`],
   ["try page p95 ≤ 50 ms, 2,000 parts", results.try_page.large_p95_ms <= 50, `${results.try_page.large_p95_ms} ms`],
   [

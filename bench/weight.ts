@@ -1,7 +1,7 @@
 // What the try page costs to download: its JavaScript (the module scripts the
 // page loads and every chunk they import) and the catalogue JSON, gzipped.
-import { existsSync, readFileSync } from "node:fs";
-import { dirname, join, resolve } from "node:path";
+import { existsSync, readdirSync, readFileSync, statSync } from "node:fs";
+import { dirname, join, relative, resolve } from "node:path";
 import { gzipSync } from "node:zlib";
 
 function gzipBytes(path: string): number {
@@ -32,4 +32,18 @@ export function tryPageWeight(dist: string): { try_js_gzip_bytes: number; catalo
     }
   }
   return { try_js_gzip_bytes: js, catalogue_json_gzip_bytes: gzipBytes(join(dist, "data/catalogue.json")) };
+}
+
+/** The whole built site on disk (issue 18): every file's bytes, and the largest HTML page. */
+export function siteWeight(dist: string): { total_bytes: number; largest_page_bytes: number; largest_page: string } {
+  let total = 0;
+  let largest = { bytes: 0, path: "" };
+  for (const entry of readdirSync(dist, { withFileTypes: true, recursive: true })) {
+    if (!entry.isFile()) continue;
+    const path = join(entry.parentPath, entry.name);
+    const bytes = statSync(path).size;
+    total += bytes;
+    if (entry.name.endsWith(".html") && bytes > largest.bytes) largest = { bytes, path: relative(dist, path) };
+  }
+  return { total_bytes: total, largest_page_bytes: largest.bytes, largest_page: largest.path };
 }

@@ -3,6 +3,7 @@
 // the roles that use it in a topology module (src/topologies/).
 import type { AnyRule } from "../src/core/rule-kit/index.ts";
 import { bandwidth } from "./bandwidth.ts";
+import { clampLeakage } from "./clamp-leakage.ts";
 import { baseEmitterReverse } from "./base-emitter-reverse.ts";
 import { differentialInput } from "./differential-input.ts";
 import { forwardCurrent } from "./forward-current.ts";
@@ -49,6 +50,7 @@ export const RULES = [
   reverseVoltage,
   recovery,
   leakage,
+  clampLeakage,
   forwardCurrent,
 ] as const;
 

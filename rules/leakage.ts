@@ -27,7 +27,7 @@ export const leakage = defineRule({
   checks:
     "Reverse leakage at the hottest temperature, flowing through the resistance around the diode, stays inside its share of the error.",
   formula:
-    "ir(T) = ir_na × 2^((T_max − 25)/10) (silicon, low-leakage) or × 10^((T_max − 25)/25) (Schottky); rectifier diode: ir(T) · rectifier_load_ohm / k ≤ offset_share · required_v; clamp diode: ir(T) · pull_down_ohm ≤ vil_v",
+    "ir(T) = ir_na × 2^((T_max − 25)/10) (silicon, low-leakage) or × 10^((T_max − 25)/25) (Schottky); rectifier diode: ir(T) · rectifier_load_ohm / k ≤ offset_share · required_v",
   source: "Leakage doubling per 10 °C and Schottky ×10 per 25 °C: common practice [M].",
   policy: "offset_share",
   kinds: ["diode"],

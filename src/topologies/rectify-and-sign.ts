@@ -6,6 +6,7 @@ import { forwardCurrent } from "../../rules/forward-current.ts";
 import { inputCommonMode } from "../../rules/input-common-mode.ts";
 import { lateSign } from "../../rules/late-sign.ts";
 import { leakage } from "../../rules/leakage.ts";
+import { clampLeakage } from "../../rules/clamp-leakage.ts";
 import { logicHigh } from "../../rules/logic-high.ts";
 import { logicLow } from "../../rules/logic-low.ts";
 import { offset } from "../../rules/offset.ts";
@@ -110,8 +111,15 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     const stage: DiodeStage = {
       stage: "diode",
       label: "the pump diode",
-      reverse_v: 2 * neg.drive_v,
-      reverse_what: `2 × the ${formatVolts(neg.drive_v)} drive`,
+      // Each diode of the two-diode inverter blocks drive − Vf (SPEC §11.12); the smallest drop, at the hot end, is the worst.
+      reverse_v: neg.drive_v,
+      reverse_what: `the ${formatVolts(neg.drive_v)} drive`,
+      reverse_vf: {
+        sign: -1,
+        current_a: 2 * neg.load_a,
+        temp_c: design.temperature.max_c,
+        at: endPhrase("hot", design.temperature.max_c),
+      },
       recovery_limit_s: policy.timing_fraction / (2 * neg.frequency_hz),
       recovery_what: `${policy.timing_fraction * 100} % of the pump's ${formatSI(1 / (2 * neg.frequency_hz), "s")} half period`,
       forward_a: 2 * neg.load_a,
@@ -173,8 +181,15 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     {
       stage: "diode",
       label: "the rectifier diode",
-      reverse_v: 2 * W,
-      reverse_what: `2 × the ${formatVolts(W)} window`,
+      // The off diode sits between the stage output (W + Vf) and the virtual ground (SPEC §11.12); largest drop at the cold end.
+      reverse_v: W,
+      reverse_what: `the ${formatVolts(W)} window`,
+      reverse_vf: {
+        sign: 1,
+        current_a: rectCurrent,
+        temp_c: design.temperature.min_c,
+        at: endPhrase("cold", design.temperature.min_c),
+      },
       recovery_limit_s: policy.timing_fraction / design.signal.max_frequency_hz,
       recovery_what: `${policy.timing_fraction * 100} % of the signal period`,
       leakage_ohm: design.front_end.rectifier_load_ohm,
@@ -542,6 +557,13 @@ function conversion(design: Design, k: number): Conversion {
   };
 }
 
+/** The chosen total beside the one asked for, and how far apart they are. */
+function totalAgainstAsk(got: number, asked: number): string {
+  const times = got / asked;
+  if (Math.abs(times - 1) < 0.005) return `${si(got, "Ω")}, as asked`;
+  return `${si(got, "Ω")}, asked ${si(asked, "Ω")} (${Number(times.toPrecision(2))} × the ask)`;
+}
+
 /** Derived values as the design page, the try page and the CLI print them. */
 function display(design: Design, d: Derived): DisplayGroup[] {
   const series = design.front_end.series;
@@ -552,7 +574,11 @@ function display(design: Design, d: Derived): DisplayGroup[] {
         { label: `Bottom resistor R2 (${series})`, value: si(d.divider.bottom_ohm, "Ω") },
         { label: "Source resistance Rs, in series with R1", value: si(d.divider.source_ohm, "Ω") },
         { label: "Ratio k = R2 / (Rs + R1 + R2)", value: ratio(d.divider.ratio) },
-        { label: "Total R1 + R2", value: si(d.divider.total_ohm, "Ω") },
+        { label: "Total R1 + R2", value: totalAgainstAsk(d.divider.total_ohm, design.front_end.divider_total_ohm) },
+        {
+          label: "Why this total",
+          value: `the ${series} pair with the largest ratio not above the target, among totals from half to twice the ${si(design.front_end.divider_total_ohm, "Ω")} asked for (a larger ratio uses more of the ADC, so it wins over a total nearer the ask; ties go to the nearer total)`,
+        },
       ]
     : [{ label: "Divider", value: "none: the peak already fits the window (k = 1)" }];
   const signal: DisplayRow[] = [
@@ -687,7 +713,7 @@ export const rectifyAndSign = defineTopology({
       field: "Clamp diode",
       label: "series diode from the comparator to the logic input",
       wants: "clamp",
-      rules: [reverseVoltage, leakage],
+      rules: [reverseVoltage, clampLeakage],
       when: [{ path: "logic.level_shift", is: ["diode-clamp"] }],
     },
     {

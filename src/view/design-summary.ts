@@ -1,6 +1,5 @@
-// The one-line state of a design for the home page, the design page head and
-// the try page: the engine's verdict (SPEC §11.11: holds, marginal or fails,
-// the budget included) and a sentence on its roles and budget.
+// The one-line state of a design for the home page and the design page head.
+import { designHolds } from "../core/engine/result.ts";
 import type { DesignState } from "../core/engine/design-verdict.ts";
 import { formatSI } from "../core/units.ts";
 import type { Role } from "../core/schemas/design.ts";
@@ -17,22 +16,21 @@ export type RoleState = {
   optional: boolean;
 };
 
+/** SPEC §11.11's design state, as the engine gives it (core/engine/design-verdict.ts). */
+export type DesignVerdict = DesignState;
+
 export type DesignSummary =
-  | { ok: false; line: string }
-  | {
-      ok: true;
-      /** The design's verdict: roles, BOM parts and the budget together. */
-      state: DesignState;
-      /** state is "holds". */
-      holds: boolean;
-      line: string;
-      roles: RoleState[];
-    };
+  | { ok: false; line: string; verdict: "fails" }
+  | { ok: true; holds: boolean; verdict: DesignVerdict; line: string; roles: RoleState[] };
 
 export function summarizeDesign(entry: DesignEntry): DesignSummary {
   if (!entry.evaluation.ok) {
     const n = entry.evaluation.problems.length;
-    return { ok: false, line: `Could not be evaluated: ${n} problem${n === 1 ? "" : "s"} in the design file.` };
+    return {
+      ok: false,
+      verdict: "fails",
+      line: `Could not be evaluated: ${n} problem${n === 1 ? "" : "s"} in the design file.`,
+    };
   }
   const result = entry.evaluation.result;
   const roles: RoleState[] = result.roles.map((r) => ({
@@ -46,8 +44,7 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
   }));
   const empty = roles.filter((r) => r.fits === 0 && !r.optional).map((r) => r.name.toLowerCase());
   const bad = roles.filter((r) => r.bomFails).map((r) => `${r.chosen ?? "?"} (${r.name.toLowerCase()})`);
-  const state = result.verdict.state;
-  const rolesHold = empty.length === 0 && bad.length === 0;
+  const holds = designHolds(result);
   const problems: string[] = [];
   if (empty.length > 0) problems.push(`no part fits the ${list(empty)}`);
   if (bad.length > 0)
@@ -59,13 +56,14 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
       : `Accuracy budget ${b.verdict === "pass" ? "passes" : b.verdict === "marginal" ? "is marginal" : "fails"} (worst case ${formatSI(b.worst_case_v, "V")} against ${formatSI(b.required_v, "V")}).`;
   const compared = result.comparison ? ` Both topologies compared: ${result.comparison.recommended} recommended.` : "";
   const line = `${
-    rolesHold
+    holds
       ? "Every role has a fit and every BOM part fits."
       : `${capitalize(problems.join("; ") || "the design does not hold")}.`
   } ${budget}${compared}`;
+  // A budget that leaves out an unrated part's noise is at best marginal: say why (SPEC §11.9).
   const unrated = result.verdict.reasons.find((r) => r.kind === "budget-unrated");
   const tail = unrated ? ` ${capitalize(unrated.text)}.` : "";
-  return { ok: true, state, holds: state === "holds", line: `${line}${tail}`, roles };
+  return { ok: true, holds, verdict: result.verdict.state, line: `${line}${tail}`, roles };
 }
 
 function list(items: string[]): string {

@@ -23,9 +23,9 @@ export const HIGH_VOLTAGE_V = 30;
 /**
  * Fits a design page shows in full (rail diagram, findings, arithmetic) per
  * role; the rest are one row each, linking to the part page that has them in
- * full. A shortlist is read from the top; 10 covers the demo roles almost whole.
+ * full. A shortlist is read from the top: the best three decide, the rest are one row each.
  */
-export const FITS_IN_FULL = 10;
+export const FITS_IN_FULL = 3;
 
 /** A part a design page draws in full, with its place among the fits (none for a rejection). */
 export type ShownInFull = { result: PartResult; rank?: number };

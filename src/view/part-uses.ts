@@ -6,7 +6,7 @@ import type { PartResult } from "../core/engine/evaluate-part.ts";
 import type { DesignResult, RoleResult } from "../core/engine/result.ts";
 import type { Rails, Verdict } from "../core/engine/types.ts";
 import type { Role } from "../core/schemas/design.ts";
-import { decidingFinding } from "./deciding.ts";
+import { closestFinding } from "./deciding.ts";
 import type { DesignEntry } from "./design-entry.ts";
 import { rolesTaking } from "./roles.ts";
 
@@ -85,7 +85,8 @@ export function placesOf(partId: string, designId: string, designs: readonly Des
 function cellOf(place: PartPlace | undefined): UseCell {
   if (!place) return { state: "unused" };
   const { result, role, rank } = place;
-  const first = decidingFinding(result);
+  // A rejection says what decides it; a fit what comes closest to its limit.
+  const first = closestFinding(result);
   return {
     state: rank !== undefined ? "fit" : "rejected",
     verdict: result.verdict,

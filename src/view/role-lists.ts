@@ -1,26 +1,41 @@
-// The long lists of a design page's role, one table row per part: the fits
-// below the ones shown in full, and every rejection with each reason that
-// rejects it. A row links to the part's own page, where the same part in the
-// same role has every finding, the arithmetic and its rail diagram; the rows
-// stay a few hundred bytes so a 2,000-part catalogue gives a page a browser
-// opens without effort.
+// A role's lists, as the design page and the try page both show them (SPEC §14):
+// the fits one row each with their own ranking keys, and the rejections grouped
+// by the rule that decides them (count, the range of shortfalls, an example),
+// each part one line linking to its page. Built as keyed pieces (pieces.ts):
+// the design page prints them as one string, the try page patches only the
+// pieces an edit changed. Every piece of catalogue text goes through escapeHtml.
 import type { PartResult } from "../core/engine/evaluate-part.ts";
 import type { RoleResult } from "../core/engine/result.ts";
-import { closestFinding } from "./deciding.ts";
-import { placeAnchor, resultAnchor, type SiteLinks } from "./links.ts";
+import type { Finding } from "../core/engine/types.ts";
+import { formatQuantity } from "../core/units.ts";
+import { closestFinding, decidingFinding } from "./deciding.ts";
 import { escapeHtml } from "./escape.ts";
-import { renderRejectionReasons } from "./findings.ts";
+import type { SiteLinks } from "./links.ts";
+import type { Container, Leaf, Piece } from "./pieces.ts";
 import { renderVerdict } from "./verdict.ts";
 
-export type ListLinks = Pick<SiteLinks, "partUrl">;
+export type ListLinks = Pick<SiteLinks, "partUrl" | "rulesUrl">;
 
 export type RoleListInput = {
   designId: string;
   role: RoleResult;
   links: ListLinks;
-  /** Parts shown in full elsewhere on the page: their rows carry no id, so ids stay unique. */
-  inFull: ReadonlySet<string>;
+  /** Rows (and lines per rejection group) shown before a "show all" button; every one when absent. */
+  first?: number;
+  /** Lists the reader opened, by key "<role>:fits" / "<role>:rejected". */
+  expanded?: ReadonlySet<string>;
+  /** The try page marks each row with its part and verdict (data-part, data-verdict); the design page saves the bytes. */
+  dataAttributes?: boolean;
+  /**
+   * Rejection groups as their heads only (count, shortfall range, an example): for a topology a design
+   * page shows only for comparison, whose parts each have their line on their own page.
+   */
+  headsOnly?: boolean;
 };
+
+/** The ranking of SPEC §7, said once where the fits are listed; each fit shows its own keys. */
+export const RANKING_KEYS =
+  "Fits are ranked by verdict (pass before marginal), then status (stocked, approved, listed), then cost band (1 lowest; not given last), then the least margin relative to its limit (larger first), then id.";
 
 /** Marks a reader needs beside a part's name: BOM, used by the design, a kind standing in for another. */
 export function partMarks(result: PartResult, role: RoleResult): string {
@@ -32,47 +47,204 @@ export function partMarks(result: PartResult, role: RoleResult): string {
   return marks.length === 0 ? "" : ` ${marks.join(" ")}`;
 }
 
-function partHeader(result: PartResult, { designId, role, links }: RoleListInput): string {
+// A list row is the part's id linking to its page, where its name and every
+// design it appears in are one line each: at 2,000 parts a design page lists
+// thousands of rows, so each carries only what the decision needs.
+function partLink(result: PartResult, { role, links }: RoleListInput): string {
   const { part } = result;
-  const href = `${links.partUrl(part.id)}#${placeAnchor(designId, role.role)}`;
-  return `<th scope="row"><a href="${escapeHtml(href)}">${escapeHtml(part.name)}</a> <code>${escapeHtml(part.id)}</code>${partMarks(result, role)}</th>`;
+  return `<a href="${escapeHtml(links.partUrl(part.id))}">${escapeHtml(part.id)}</a>${partMarks(result, role)}`;
 }
 
-function rowId(result: PartResult, input: RoleListInput): string {
-  return input.inFull.has(result.part.id) ? "" : ` id="${escapeHtml(resultAnchor(input.role.role, result.part.id))}"`;
+function rowAttributes(result: PartResult, input: RoleListInput): string {
+  return input.dataAttributes ? ` data-part="${escapeHtml(result.part.id)}" data-verdict="${result.verdict}"` : "";
 }
 
-function standing(result: PartResult): string {
+/** A fit's own ranking keys, as the row shows them. */
+export function rankingKeys(result: PartResult): { status: string; cost: string; margin: string } {
   const { part } = result;
-  return escapeHtml(
-    `${part.status}, ${part.cost_band === undefined ? "cost not given" : `cost ${part.cost_band} of 5`}`,
-  );
+  return {
+    status: part.status,
+    cost: part.cost_band === undefined ? "not given" : `${part.cost_band} of 5`,
+    margin: `${Math.round(result.relative * 100)} %`,
+  };
 }
 
-/** Fits ranked `from` (1-based) to the last, each with the finding closest to its limit. */
-export function renderFitsTable(input: RoleListInput, from: number, caption: string): string {
-  const rows = input.role.fits.slice(from - 1).map((r, i) => {
+const shown = (input: RoleListInput, key: string, total: number): number =>
+  input.first === undefined || input.expanded?.has(key) ? total : Math.min(total, input.first);
+
+function moreButton(input: RoleListInput, key: string, total: number, what: string): Leaf | undefined {
+  if (input.first === undefined || total <= input.first) return undefined;
+  const expanded = input.expanded?.has(key) ?? false;
+  const text = expanded
+    ? `Show the first ${input.first} ${what} only`
+    : `Show all ${total} ${what} (${total - input.first} more)`;
+  return {
+    key: `${key}:more`,
+    html: `<button type="button" class="more" data-toggle="${escapeHtml(key)}" aria-expanded="${expanded}">${escapeHtml(text)}</button>`,
+  };
+}
+
+const FIT_COLUMNS =
+  `<thead><tr><th scope="col" class="num">Rank</th><th scope="col">Part</th><th scope="col">Verdict</th>` +
+  `<th scope="col">Status</th><th scope="col">Cost</th><th scope="col" class="num">Least margin</th>` +
+  `<th scope="col">Closest to its limit</th></tr></thead>`;
+
+/**
+ * The fits ranked `from` (1-based) on, one row each with its ranking keys and
+ * the finding closest to its limit. A part keeps its row (key: its id) whatever its rank.
+ */
+export function fitsPiece(input: RoleListInput, from: number, caption: string, id?: string): Container {
+  const key = `${input.role.role}:fits`;
+  const all = input.role.fits.slice(from - 1);
+  const rows: Piece[] = all.slice(0, shown(input, key, all.length)).map((r, i) => {
     const f = closestFinding(r);
-    const closest = f ? `${escapeHtml(f.rule)}: ${escapeHtml(f.reason)}` : "";
-    return `<tr${rowId(r, input)}><td class="num">${from + i}</td>${partHeader(r, input)}<td class="verdict-cell">${renderVerdict(r.verdict)}</td><td>${standing(r)}</td><td>${closest}</td></tr>`;
+    const k = rankingKeys(r);
+    return {
+      key: r.part.id,
+      open: `<tr${rowAttributes(r, input)}>`,
+      close: "</tr>",
+      children: [
+        { key: "rank", html: `<td class="num">${from + i}</td>` },
+        { key: "part", html: `<th scope="row">${partLink(r, input)}</th>` },
+        { key: "verdict", html: `<td>${renderVerdict(r.verdict)}</td>` },
+        { key: "status", html: `<td>${escapeHtml(k.status)}</td>` },
+        { key: "cost", html: `<td>${escapeHtml(k.cost)}</td>` },
+        { key: "margin", html: `<td class="num">${escapeHtml(k.margin)}</td>` },
+        { key: "closest", html: `<td>${f ? `${escapeHtml(f.rule)}: ${escapeHtml(marginLine(f))}` : ""}</td>` },
+      ],
+    };
   });
+  const more = moreButton(input, key, all.length, "fits");
+  return {
+    key: "fits",
+    open: `<div class="fits-list">`,
+    close: "</div>",
+    children: [
+      {
+        key: "scroll",
+        open: `<div class="table-scroll">`,
+        close: "</div>",
+        children: [
+          {
+            key: "table",
+            open: `<table class="fits-summary"${id ? ` id="${escapeHtml(id)}"` : ""}>`,
+            close: "</table>",
+            children: [
+              { key: "caption", html: `<caption>${escapeHtml(caption)}</caption>` },
+              { key: "head", html: FIT_COLUMNS },
+              { key: "body", open: "<tbody>", close: "</tbody>", children: rows },
+            ],
+          },
+        ],
+      },
+      ...(more ? [more] : []),
+    ],
+  };
+}
+
+/** The rejections that one rule decides. */
+export type RejectionGroup = {
+  rule: string;
+  verdict: "fail" | "unrated";
+  /** Each part with the finding that decides it, in the role's order. */
+  parts: { result: PartResult; finding: Finding }[];
+  /** Smallest and largest shortfall (−margin) of the group, when its findings have numbers. */
+  shortfall?: { low: number; high: number; unit: string };
+};
+
+/**
+ * A role's rejections grouped by their deciding finding (deciding.ts: the first
+ * in rule order as bad as the verdict), largest group first, then rule order.
+ */
+export function rejectionGroups(role: RoleResult): RejectionGroup[] {
+  const groups = new Map<string, RejectionGroup & { first: number }>();
+  const order = new Map(role.rules.map((r, i) => [r, i]));
+  for (const result of role.rejected) {
+    const finding = decidingFinding(result);
+    if (!finding) continue;
+    const verdict = finding.verdict === "unrated" ? "unrated" : "fail";
+    const key = `${verdict}:${finding.rule}`;
+    let group = groups.get(key);
+    if (!group) {
+      group = { rule: finding.rule, verdict, parts: [], first: order.get(finding.rule) ?? order.size };
+      groups.set(key, group);
+    }
+    group.parts.push({ result, finding });
+    if (finding.margin !== null && finding.margin < 0 && Number.isFinite(finding.margin)) {
+      const short = -finding.margin;
+      const s = group.shortfall;
+      group.shortfall = s
+        ? { low: Math.min(s.low, short), high: Math.max(s.high, short), unit: finding.unit }
+        : { low: short, high: short, unit: finding.unit };
+    }
+  }
+  return [...groups.values()]
+    .sort((a, b) => b.parts.length - a.parts.length || a.first - b.first || a.verdict.localeCompare(b.verdict))
+    .map(({ first: _first, ...group }) => group);
+}
+
+// Volts with an SI prefix: a 25 mV limit missed by 775 mV reads so, not "0.78 V".
+const quantity = (v: number, unit: string) =>
+  unit === "" ? String(Number(v.toPrecision(3))) : formatQuantity(v, unit === "V" ? "V-prefixed" : unit);
+
+/** A fit's closest finding in a few words: its margin, spare or short. */
+function marginLine(f: Finding): string {
+  if (f.verdict === "unrated") return "not rated";
+  if (f.margin === null || !Number.isFinite(f.margin)) return f.verdict;
+  return f.margin < 0 ? `${quantity(-f.margin, f.unit)} short` : `${quantity(f.margin, f.unit)} to spare`;
+}
+
+/** What one line says of a part's deciding finding: its shortfall, or that the rule cannot be answered. */
+function shortLine(f: Finding): string {
+  if (f.verdict === "unrated") return "not rated";
+  if (f.margin !== null && f.margin < 0 && Number.isFinite(f.margin)) return `${quantity(-f.margin, f.unit)} short`;
+  return "fails";
+}
+
+function groupSummary(g: RejectionGroup, link: (rule: string) => string): string {
+  const n = g.parts.length;
+  const what = g.verdict === "unrated" ? "cannot be checked (not rated)" : n === 1 ? "fails" : "fail";
+  const range = g.shortfall
+    ? g.shortfall.low === g.shortfall.high
+      ? `, short by ${quantity(g.shortfall.low, g.shortfall.unit)}`
+      : `, short by ${quantity(g.shortfall.low, g.shortfall.unit)} to ${quantity(g.shortfall.high, g.shortfall.unit)}`
+    : "";
+  const example = g.parts[0];
+  const eg = example ? ` For example ${escapeHtml(example.result.part.id)}: ${escapeHtml(example.finding.reason)}` : "";
   return (
-    `<div class="table-scroll"><table class="fits-summary"><caption>${escapeHtml(caption)}</caption>` +
-    `<thead><tr><th scope="col" class="num">Rank</th><th scope="col">Part</th><th scope="col">Verdict</th><th scope="col">Status, cost</th><th scope="col">Closest to its limit</th></tr></thead>` +
-    `<tbody>${rows.join("")}</tbody></table></div>`
+    `<p class="reject-head"><a href="${escapeHtml(link(g.rule))}">${escapeHtml(g.rule)}</a>: ` +
+    `<strong>${n}</strong> part${n === 1 ? "" : "s"} ${what}${escapeHtml(range)}.${eg}</p>`
   );
 }
 
-/** Every rejected part with each failing or unrated finding, in the role's order. */
-export function renderRejectedTable(input: RoleListInput, caption: string): string {
-  const rows = input.role.rejected.map(
-    (r) =>
-      `<tr${rowId(r, input)}>${partHeader(r, input)}<td class="verdict-cell">${renderVerdict(r.verdict)}</td><td>${renderRejectionReasons(r.findings)}</td></tr>`,
-  );
-  return (
-    // The heading above says the same for sighted readers; the caption names the table for screen readers.
-    `<div class="table-scroll"><table class="rejected-summary"><caption class="visually-hidden">${escapeHtml(caption)}</caption>` +
-    `<thead><tr><th scope="col">Part</th><th scope="col">Verdict</th><th scope="col">Why it does not fit</th></tr></thead>` +
-    `<tbody>${rows.join("")}</tbody></table></div>`
-  );
+/** The rejections grouped by deciding rule, each part one line linking to its page. */
+export function rejectionsPiece(input: RoleListInput): Container {
+  const key = `${input.role.role}:rejected`;
+  const groups = rejectionGroups(input.role);
+  const largest = Math.max(0, ...groups.map((g) => g.parts.length));
+  const children: Piece[] = groups.map((g) => {
+    const count = input.headsOnly ? 0 : shown(input, key, g.parts.length);
+    const lines: Piece[] = g.parts.slice(0, count).map(({ result, finding }) => ({
+      key: result.part.id,
+      html: `<li${rowAttributes(result, input)}>${partLink(result, input)} ${escapeHtml(shortLine(finding))}</li>`,
+    }));
+    return {
+      key: `${g.verdict}:${g.rule}`,
+      open: `<section class="reject-group" data-rule="${escapeHtml(g.rule)}">`,
+      close: "</section>",
+      children: [
+        { key: "head", html: groupSummary(g, input.links.rulesUrl) },
+        ...(lines.length > 0
+          ? [{ key: "parts", open: `<ul class="part-lines">`, close: "</ul>", children: lines }]
+          : []),
+      ],
+    };
+  });
+  const more = moreButton(input, key, largest, "rejected parts of each rule");
+  return {
+    key: "rejected",
+    open: `<div class="rejections">`,
+    close: "</div>",
+    children: [...children, ...(more ? [more] : [])],
+  };
 }

@@ -1,4 +1,4 @@
-// bench-results.json has exactly the fields of issue 9: nothing missing, nothing extra.
+// bench-results.json has exactly the fields of issues 9 and 18: nothing missing, nothing extra.
 import { describe, expect, it } from "vitest";
 import { benchResults } from "../../bench/results.ts";
 
@@ -19,9 +19,18 @@ describe("benchResults", () => {
     expect(benchResults.parse({ ...valid, simulation_ms: 4.2 })).toEqual({ ...valid, simulation_ms: 4.2 });
   });
 
+  it("takes issue 18's figures: the ranked lists against the sorting bare loop, and the large site on disk", () => {
+    const withSite = {
+      ...valid,
+      engine: [{ ...valid.engine[0], ranked_ms_per_design: 25, ranked_ratio: 2.1 }],
+      site: { total_bytes: 41_000_000, largest_page_bytes: 900_000, largest_page: "designs/x/index.html" },
+    };
+    expect(benchResults.safeParse(withSite).success).toBe(true);
+  });
+
   it.each([
     ["an extra top-level field", { ...valid, memory_mb: 3 }],
-    ["an extra engine field", { ...valid, engine: [{ ...valid.engine[0], ranked_ms_per_design: 25 }] }],
+    ["an extra engine field", { ...valid, engine: [{ ...valid.engine[0], memory_mb: 25 }] }],
     ["a missing field", { ...valid, build: { demo_s: 2.3, large_s: 13.0 } }],
     ["a figure that is not a number", { ...valid, try_page: { demo_p95_ms: NaN, large_p95_ms: 16.6 } }],
   ])("refuses %s", (_what, results) => {

@@ -13,6 +13,7 @@ import { evaluateDesign } from "../../src/engine.ts";
 import { loadDataSet, type DataSet } from "../../src/node/load-data.ts";
 import { FITS_IN_FULL } from "../../src/view/design-view.ts";
 import { buildSearchIndex } from "../../src/view/search-index.ts";
+import { rejectionGroups } from "../../src/view/role-lists.ts";
 import { projectNode, ROOT } from "./harness/build-site.ts";
 import { browserReady, openBrowser, openTracked, site, troubles, type Tracked } from "./harness/session.ts";
 import { screenshot, tryPageReady, visibleCatalogueRows } from "./harness/steps.ts";
@@ -82,60 +83,24 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
     expect(await value("gbw_mhz")).toMatch(/^3(\.0+)? MHz$/);
     expect(await value("ib_max_na")).toMatch(/^10(\.0+)? pA$/);
     expect(await value("slew_v_per_us")).toMatch(/^2(\.0+)? V\/µs$/);
-    const cell = page.locator(`table.matrix a[href="#in-${DESIGN}--buffer"]`);
-    expect(await cell.textContent()).toBe("rejected");
+    const line = page.locator(`#in-${DESIGN}--buffer`);
+    expect(await line.textContent()).toContain("rejected");
   });
 
-  it("follows the part's verdict to its case: the rules that reject it, their arithmetic, the rest by name", async () => {
+  it("reads the part's verdict in one line per design and role: the rule that decides it, with its numbers", async () => {
     const evaluation = evaluateDesign(data.designs.find((d) => d.design?.id === DESIGN)!.design!, data.catalogue);
     if (!evaluation.ok) throw new Error(`${DESIGN} does not evaluate`);
     const rejection = evaluation.result.roles
       .find((r) => r.role === "buffer")!
       .rejected.find((p) => p.part.id === firstHit)!;
-    await page.locator(`table.matrix a[href="#in-${DESIGN}--buffer"]`).click();
-    await page.waitForURL(t.url(`parts/${firstHit}/index.html#in-${DESIGN}--buffer`));
-    const entry = page.locator(`#in-${DESIGN}--buffer`);
-    expect(await entry.isVisible()).toBe(true);
-    const open = rejection.findings.filter((f) => f.verdict !== "pass");
-    expect(await entry.locator("table.findings > tbody > tr").count()).toBe(open.length);
-    for (const f of open) {
-      const row = entry.locator("table.findings tr", { has: page.locator(`th a:text-is("${f.rule}")`) });
-      expect(await row.locator("td").last().textContent()).toBe(f.reason);
-    }
-    const passes = await entry.locator("p.passes").textContent();
-    for (const f of rejection.findings.filter((x) => x.verdict === "pass")) expect(passes).toContain(f.rule);
-    const failing = rejection.findings.find((f) => f.rule === "supply-range")!;
-    expect(failing.verdict).toBe("fail");
+    const line = page.locator(`#in-${DESIGN}--buffer`);
+    const failing = rejection.findings.find((f) => f.verdict === "fail")!;
+    expect(failing.rule).toBe("supply-range");
     expect(failing.reason).toMatch(/\d\.\d+ V/);
-    // The arithmetic opens on request and shows the failing rule's steps.
-    await entry.locator("details.steps > summary").click();
-    const steps = entry.locator('details.steps table[aria-label="supply-range: arithmetic"] th');
-    expect(await steps.allTextContents()).toEqual(failing.steps.map((s) => s.label));
-    // Its input and output ranges are not what rejects it, so no diagram here; where it fits, one is drawn.
-    const onRange = open.some((f) => f.rule === "input-common-mode" || f.rule === "output-swing");
-    expect(await entry.locator("svg.rail-diagram").count()).toBe(onRange ? 1 : 0);
-    const fits = data.designs.flatMap((d) => {
-      const e = evaluateDesign(d.design!, data.catalogue);
-      if (!e.ok) return [];
-      const results = [
-        e.result,
-        ...(e.result.comparison?.results.filter((r) => r.topology !== e.result.topology) ?? []),
-      ];
-      return results.flatMap((r) =>
-        r.roles.filter((x) => x.fits.some((p) => p.part.id === firstHit)).map((x) => [d.design!.id, x] as const),
-      );
-    });
-    expect(fits.length).toBeGreaterThan(0);
-    const [fitDesign, fitRole] = fits[0]!;
-    const diagram = page.locator(`#in-${fitDesign}--${fitRole.role} svg.rail-diagram`);
-    expect(await diagram.locator("title").textContent()).toBe(
-      `Rail diagram: ${rejection.part.name} as ${fitRole.stage.label}`,
-    );
-    expect((await diagram.locator("text").allTextContents()).join(" ")).toMatch(/V\+ \+\d\.\d\d V/);
-    await screenshot(entry, "part-page-entry");
-
-    await entry.getByRole("link", { name: "on the design page" }).click();
-    await page.waitForURL(t.url(`designs/${DESIGN}/index.html#buffer--${firstHit}`));
+    expect(await line.textContent()).toContain(`${failing.rule}: ${failing.reason}`);
+    await screenshot(line, "part-page-entry");
+    await line.getByRole("link", { name: evaluation.result.design.title }).click();
+    await page.waitForURL(t.url(`designs/${DESIGN}/index.html#role-buffer`));
   });
 
   it("shows the design's buffer shortlist in full, then every rejection with its reasons and numbers", async () => {
@@ -144,42 +109,38 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
     const buffer = evaluation.result.roles.find((r) => r.role === "buffer")!;
     const role = page.locator("#role-buffer");
 
-    // The link from the part page lands on its row, in view, with the reason that rejects it.
-    const target = page.locator(`#buffer--${firstHit}`);
-    expect(await target.isVisible()).toBe(true);
-    const rejection = buffer.rejected.find((p) => p.part.id === firstHit)!;
-    const failing = rejection.findings.find((f) => f.rule === "supply-range")!;
-    expect(await target.locator("td").last().textContent()).toContain(`supply-range: ${failing.reason}`);
+    // The link from the part page lands on the role; the part is one line under the rule that decides it.
+    expect(await role.isVisible()).toBe(true);
+    const group = role.locator('section.reject-group[data-rule="supply-range"]');
+    expect(await group.locator(`li:has(a:text-is("${firstHit}"))`).textContent()).toMatch(/\d\.\d+ V short$/);
+    const supplyGroup = rejectionGroups(buffer).find((g) => g.rule === "supply-range")!;
+    expect(await group.locator("p.reject-head").textContent()).toContain(
+      `supply-range: ${supplyGroup.parts.length} part`,
+    );
 
-    // Shortlist: the demo's buffer has fewer fits than a page draws in full, best first, every reason with a number.
+    // Shortlist: the best fits in full, best first, every reason with a number.
     expect(buffer.fits.length).toBeGreaterThan(0);
-    expect(buffer.fits.length).toBeLessThanOrEqual(FITS_IN_FULL);
+    const inFull = buffer.fits.slice(0, FITS_IN_FULL);
     const fits = role.locator("ol.results > li");
-    expect(await fits.count()).toBe(buffer.fits.length);
+    expect(await fits.count()).toBe(inFull.length);
     expect(await fits.first().locator("h4 a").textContent()).toBe(buffer.fits[0]!.part.name);
     const fitReasons = await fits.locator("table.findings > tbody > tr > td:last-child").allInnerTexts();
     // SPEC §7: unity-gain-stable and phase-reversal are yes/no; every other rule states numbers.
-    const numeric = buffer.fits.flatMap((p) =>
+    const numeric = inFull.flatMap((p) =>
       p.findings.filter((f) => !["unity-gain-stable", "phase-reversal"].includes(f.rule)),
     );
-    expect(numeric.length).toBeGreaterThanOrEqual(buffer.fits.length * 5);
+    expect(numeric.length).toBeGreaterThanOrEqual(inFull.length * 5);
     for (const f of numeric) {
       expect(fitReasons).toContain(f.reason);
       expect(f.reason).toMatch(/\d/);
     }
 
-    // Rejections: all of them, one row each, every failing finding's reason on the page with its numbers.
-    const rejected = role.locator("table.rejected-summary > tbody > tr");
-    expect(await rejected.count()).toBe(buffer.rejected.length);
-    const rejectionReasons = (await rejected.locator("td:last-child").allInnerTexts()).join("\n");
-    for (const p of buffer.rejected) {
-      for (const f of p.findings.filter((f) => f.verdict === "fail"))
-        expect(rejectionReasons).toContain(`${f.rule}: ${f.reason}`);
-    }
+    // Rejections: all of them, one line each, grouped by the rule that decides them.
+    expect(await role.locator(".rejections ul.part-lines > li").count()).toBe(buffer.rejected.length);
 
     // A rail diagram for each fit drawn in full, drawing both rails.
     const diagrams = role.locator("svg.rail-diagram");
-    expect(await diagrams.count()).toBe(buffer.fits.filter((p) => p.part.kind === "op-amp").length);
+    expect(await diagrams.count()).toBe(inFull.filter((p) => p.part.kind === "op-amp").length);
     const first = diagrams.first();
     expect(await first.getAttribute("role")).toBe("img");
     expect(await first.locator("title").textContent()).toBe(
@@ -195,10 +156,10 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
   });
 
   const verdictOf = async (partId: string): Promise<string | null> => {
-    const row = page.locator(`#try-role-buffer tr[data-part="${partId}"]`);
+    const row = page.locator(`#try-role-buffer [data-part="${partId}"]`);
     if ((await row.count()) === 0) {
       // Long lists show their first rows; open the rest as a reader would.
-      for (const more of await page.locator('#try-role-buffer button.try-more[aria-expanded="false"]').all())
+      for (const more of await page.locator('#try-role-buffer button.more[aria-expanded="false"]').all())
         await more.click();
     }
     return row.getAttribute("data-verdict");
@@ -216,9 +177,9 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
     // The page redraws the results before it writes the address, so once the address moved the results are new.
     await page.waitForURL((url) => url.searchParams.get("supply.positive_v") === "12");
     expect(await verdictOf(FLIPS.part)).toBe(FLIPS.after);
-    expect(await page.locator(`#try-role-buffer tr[data-part="${FLIPS.part}"] .try-reasons`).textContent()).toContain(
-      FLIPS.rule,
-    );
+    // A rejection is one line under the rule that decides it.
+    const group = page.locator(`#try-role-buffer section.reject-group:has([data-part="${FLIPS.part}"])`);
+    expect(await group.getAttribute("data-rule")).toBe(FLIPS.rule);
 
     await page.reload();
     await tryPageReady(page);

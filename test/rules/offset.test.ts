@@ -15,6 +15,26 @@ const rth = (40e3 * 13e3) / 53e3;
 
 const cases: RuleCase[] = [
   {
+    // SPEC §11.7: a FET input's bias current doubles per 10 °C (common practice [M], REFERENCES "JFET input"):
+    // 1 nA at 25 °C is 8 nA at 55 °C; × 1 MΩ = 8 mV against 25 mV.
+    label: "FET input, 1 nA at 25 °C, 8 nA at the 55 °C hot end × 1 MΩ",
+    run: {
+      part: opAmp({ vos_max_mv: 0, ib_max_na: 1, input_fet: "yes" }),
+      stage: bufferStage({ rth: 1e6 }),
+      design: design({ temperature: { min_c: 25, max_c: 55 }, accuracy: { required_v: 0.1 } }),
+    },
+    expected: { verdict: "pass", needed: 0.025, available: 0.008, margin: 0.017 },
+  },
+  {
+    label: "the same bipolar input keeps its rated 1 nA",
+    run: {
+      part: opAmp({ vos_max_mv: 0, ib_max_na: 1, input_fet: "no" }),
+      stage: bufferStage({ rth: 1e6 }),
+      design: design({ temperature: { min_c: 25, max_c: 55 }, accuracy: { required_v: 0.1 } }),
+    },
+    expected: { verdict: "pass", needed: 0.025, available: 0.001, margin: 0.024 },
+  },
+  {
     label: "100 nA × 100 kΩ = 10 mV against a 25 mV limit",
     run: { part: biasOnly, stage: bufferStage({ rth: 100e3 }), design: accuracy(0.1) },
     expected: { verdict: "pass", needed: 0.025, available: 0.01, margin: 0.015 },
@@ -70,7 +90,9 @@ describe("offset", () => {
         "10 mV against a 5 mV limit": "fail: adds 10.0 mV at the input (0.00 V offset + 100 nA × 100 kΩ); the limit is 5.00 mV: 5.00 mV short",
         "100 nA × 100 kΩ = 10 mV against a 25 mV limit": "pass: adds 10.0 mV at the input (0.00 V offset + 100 nA × 100 kΩ); the limit is 25.0 mV: 15.0 mV to spare",
         "7 mV offset + 7 µV/°C over 0…50 °C and 250 nA through 9.81 kΩ, ÷ k = 0.25, against 45 mV": "marginal: adds 38.5 mV at the input (7.17 mV offset incl. 175 µV drift + 250 nA × 9.81 kΩ, ÷ 0.25 to the input); the limit is 45.0 mV: 6.49 mV to spare",
+        "FET input, 1 nA at 25 °C, 8 nA at the 55 °C hot end × 1 MΩ": "pass: adds 8.00 mV at the input (0.00 V offset + 8.00 nA at 55 °C (the hot end), a FET input doubling per 10 °C from 1.00 nA × 1.00 MΩ); the limit is 25.0 mV: 17.0 mV to spare",
         "rectifier: 2 × 1 mV + 100 nA × 10 kΩ = 3 mV": "pass: adds 3.00 mV at the input (2·1.00 mV offset + 100 nA × 10.0 kΩ); the limit is 25.0 mV: 22.0 mV to spare",
+        "the same bipolar input keeps its rated 1 nA": "pass: adds 1.00 mV at the input (0.00 V offset + 1.00 nA × 1.00 MΩ); the limit is 25.0 mV: 24.0 mV to spare",
       }
     `);
   });

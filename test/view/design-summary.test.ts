@@ -26,6 +26,7 @@ describe("summarizeDesign", () => {
         ok: true,
         state: "holds",
         holds: true,
+        verdict: expect.stringMatching(/^(holds|marginal|fails)$/),
         line: expect.stringMatching(
           /^Every role has a fit and every BOM part fits\. Accuracy budget passes \(worst case /,
         ),
@@ -50,7 +51,7 @@ describe("summarizeDesign", () => {
     // A ±10 V signal through a 0.25 divider makes the rectifier's offset too large: its stage 1 reaches the
     // output at weight 2 and its summer carries 4·Vos, both ÷ k = 0.25 (SPEC §7 offset rule, §11.2).
     const s = summarizeDesign(entry({ signal: { peak_v: 10 }, front_end: { divider_total_ohm: 40000 } }));
-    expect(s).toEqual(expect.objectContaining({ ok: true, holds: false }));
+    expect(s).toEqual(expect.objectContaining({ ok: true, holds: false, verdict: "fails" }));
     expect(s.line).toMatchInlineSnapshot(
       `"No part fits the rectifier and sign comparator. Accuracy budget incomplete: no part for the rectifier and sign comparator."`,
     );
@@ -59,6 +60,7 @@ describe("summarizeDesign", () => {
   it("says when the design cannot be evaluated", () => {
     expect(summarizeDesign(entry({ bom: { buffer: "nope" } }))).toEqual({
       ok: false,
+      verdict: "fails",
       line: "Could not be evaluated: 1 problem in the design file.",
     });
   });

@@ -42,7 +42,9 @@ describe("derivedGroups", () => {
       "Bottom resistor R2 (E24)": "10 kΩ",
       "Source resistance Rs, in series with R1": "0 Ω",
       "Ratio k = R2 / (Rs + R1 + R2)": "0.25",
-      "Total R1 + R2": "40 kΩ",
+      "Total R1 + R2": "40 kΩ, as asked",
+      "Why this total":
+        "the E24 pair with the largest ratio not above the target, among totals from half to twice the 40 kΩ asked for (a larger ratio uses more of the ADC, so it wins over a total nearer the ask; ties go to the nearer total)",
     });
     // IEEE Std 1241-2010: Q = 5 V / 2^10 = 4.8828 mV, ÷ k 0.25 = 19.53 mV at the input.
     expect(rows(groups, "Signal at the ADC side")).toEqual({
@@ -50,6 +52,15 @@ describe("derivedGroups", () => {
       "Resistance seen by the buffer (Rs + R1) ‖ R2": "7.5 kΩ",
       "One ADC step at the input": "19.5 mV",
     });
+  });
+
+  it("says how far the chosen total is from the one asked: 100 kΩ asked for k 0.25 gives E24 39k + 13k = 52 kΩ", () => {
+    // 39k/13k = 0.25 exactly (E24, IEC 60063), the one E24 pair with k = 0.25 and a total within
+    // 50…200 kΩ (30k/10k = 40 kΩ is below half the ask): the ratio wins, the total lands at 0.52 × the ask.
+    const result = evaluate(
+      design({ signal: { peak_v: 10, source_ohm: 0 }, front_end: { divider_total_ohm: 100000 } }),
+    );
+    expect(rows(derivedGroups(result), "Divider")["Total R1 + R2"]).toBe("52 kΩ, asked 100 kΩ (0.52 × the ask)");
   });
 
   it("says there is no divider when the peak already fits the window", () => {

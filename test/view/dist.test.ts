@@ -12,6 +12,8 @@ import type { RoleResult } from "../../src/core/engine/result.ts";
 import { loadDataSet } from "../../src/node/load-data.ts";
 import { escapeHtml } from "../../src/view/escape.ts";
 import { CAUTION_TEXT, FITS_IN_FULL } from "../../src/view/design-view.ts";
+import { RANKING_KEYS, rankingKeys, rejectionGroups } from "../../src/view/role-lists.ts";
+import { closestFinding, decidingFinding } from "../../src/view/deciding.ts";
 import { RULES } from "../../rules/index.ts";
 import { buildSite } from "../e2e/harness/build-site.ts";
 
@@ -228,7 +230,9 @@ function roleSection(designId: string, name: string): string {
   const html = page(`${BASE}designs/${designId}/`);
   const start = html.indexOf(`<section class="role" id="role-${name}"`);
   expect(start).toBeGreaterThan(0);
-  return html.slice(start, html.indexOf("</section>", start));
+  // A role section holds sections of its own (the rejection groups): it ends where the next role or the page's main ends.
+  const next = [html.indexOf('<section class="role"', start + 1), html.indexOf("</main>", start)].filter((i) => i > 0);
+  return html.slice(start, Math.min(...next));
 }
 
 const listedIn = (html: string, pattern: RegExp) => [...html.matchAll(pattern)].map((m) => m[1]);
@@ -240,73 +244,60 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
   /** The part page's entry for this design's buffer. */
   const partEntry = (id: string) => elementWithId(page(`${BASE}parts/${id}/`), "li", "in-bridge-10v-5v-adc--buffer");
 
-  it("draws the shortlist in full, a rail diagram for each fit, and lists every rejection once", () => {
+  it("draws the best fits in full with a rail diagram each, and lists every rejection once, one line each", () => {
     const buffer = section("buffer");
     const fits = role("buffer").fits;
+    const inFull = Math.min(fits.length, FITS_IN_FULL);
     expect(fits.length).toBeGreaterThan(0);
-    // The first FITS_IN_FULL in full (the rest one row each, see the long shortlist below).
-    const full = fits.slice(0, FITS_IN_FULL);
-    expect(buffer.match(/<svg class="rail-diagram"/g)?.length).toBe(full.length);
+    expect(buffer.match(/<svg class="rail-diagram"/g)?.length).toBe(inFull);
     expect(listedIn(buffer, /<li class="result result-[a-z]+" id="buffer--([a-z0-9-]+)"/g)).toEqual(
-      full.map((p) => p.part.id),
+      fits.slice(0, inFull).map((p) => p.part.id),
     );
-    expect(role("buffer").rejected.length).toBeGreaterThan(0);
-    const fitIds = new Set(fits.map((p) => p.part.id));
-    expect(listedIn(buffer, /<tr id="buffer--([a-z0-9-]+)"/g).filter((id) => !fitIds.has(id ?? ""))).toEqual(
-      role("buffer").rejected.map((p) => p.part.id),
-    );
+    const rejected = role("buffer").rejected;
+    expect(rejected.length).toBeGreaterThan(0);
+    const lines = listedIn(buffer, /<li><a href="\.\.\/\.\.\/parts\/([a-z0-9-]+)\/index\.html">/g);
+    expect([...lines].sort()).toEqual(rejected.map((p) => p.part.id).sort());
   });
 
-  it("gives every rejection each reason that rejects it, with a number and a unit", () => {
+  it("groups the rejections by the rule that decides them: count, shortfall range and an example with its numbers", () => {
     const buffer = section("buffer");
-    for (const r of role("buffer").rejected) {
-      const row = elementWithId(buffer, "tr", `buffer--${r.part.id}`);
-      const failing = r.findings.filter((f) => f.verdict === "fail" || f.verdict === "unrated");
-      expect(failing.length, r.part.id).toBeGreaterThan(0);
-      for (const f of failing) expect(row, `${r.part.id} ${f.rule}`).toContain(escapeHtml(f.reason));
-      for (const f of failing.filter((x) => x.unit !== ""))
-        expect(f.reason, `${r.part.id} ${f.rule}`).toMatch(
-          /\d(\.\d+)? ?(V|mV|µV|nV|A|mA|µA|nA|pA|s|ms|µs|ns|Hz|kHz|MHz|V\/µs|mV\/µs|Ω|kΩ)\b|'[a-z_]+'/,
+    const groups = rejectionGroups(role("buffer"));
+    expect(groups.reduce((n, g) => n + g.parts.length, 0)).toBe(role("buffer").rejected.length);
+    for (const g of groups) {
+      const head = new RegExp(
+        `<p class="reject-head"><a href="[^"]*#rule-${g.rule}">${g.rule}</a>: <strong>${g.parts.length}</strong> parts? `,
+      );
+      expect(buffer, g.rule).toMatch(head);
+      const example = g.parts[0]!;
+      expect(buffer, g.rule).toContain(`For example ${example.result.part.id}: ${escapeHtml(example.finding.reason)}`);
+      if (g.verdict === "fail")
+        expect(example.finding.reason, g.rule).toMatch(
+          /\d(\.\d+)? ?(V|mV|µV|nV|A|mA|µA|nA|pA|s|ms|µs|ns|Hz|kHz|MHz|V\/µs|mV\/µs|Ω|kΩ)\b/,
         );
-      expect(row).toContain(`href="../../parts/${r.part.id}/index.html#in-bridge-10v-5v-adc--buffer"`);
     }
   });
 
-  it("links each rejection to its case on the part page: what rejects it with the arithmetic, the rest by name", () => {
-    let drawn = 0;
+  it("gives each part one line per design and role on its page, with the verdict and the finding that decides it", () => {
     for (const r of role("buffer").rejected) {
       const html = partEntry(r.part.id);
-      expect(html, r.part.id).toContain(`class="result result-${r.verdict}"`);
-      const open = r.findings.filter((f) => f.verdict !== "pass");
-      for (const f of open) {
-        expect(html, `${r.part.id} ${f.rule}`).toContain(escapeHtml(f.reason));
-        for (const step of f.steps) expect(html, `${r.part.id} ${f.rule}`).toContain(`>${escapeHtml(step.label)}</th>`);
-      }
-      const passes = /<p class="passes">It passes ([^<]*)\.<\/p>/.exec(html)?.[1] ?? "";
-      const passed = r.findings.filter((f) => f.verdict === "pass").map((f) => f.rule);
-      expect(
-        passes.split(/, | and /).filter((x) => x !== ""),
-        r.part.id,
-      ).toEqual(passed);
-      // The diagram draws the input and output ranges; it is there when one of them is what falls short.
-      const onRange = open.some((f) => f.rule === "input-common-mode" || f.rule === "output-swing");
-      expect(html.match(/<svg class="rail-diagram"/g)?.length ?? 0, r.part.id).toBe(onRange ? 1 : 0);
-      if (onRange) drawn++;
-      expect(html).toContain(`href="../../designs/bridge-10v-5v-adc/index.html#buffer--${r.part.id}"`);
+      expect(html, r.part.id).toContain(`<span class="verdict verdict-${r.verdict}">`);
+      const deciding = decidingFinding(r);
+      expect(deciding, r.part.id).toBeDefined();
+      expect(html, r.part.id).toContain(escapeHtml(deciding!.reason));
+      expect(html).toContain(`href="../../designs/bridge-10v-5v-adc/index.html#role-buffer"`);
     }
-    expect(drawn).toBeGreaterThan(0);
   });
 
-  it("makes a headroom failure obvious: the split-supply class falls 1.06 V short of −2.50 V", () => {
+  it("files the split-supply class under the rule that decides it: 8.44 V across the rails, rated from 10 V, 1.56 V short", () => {
     // SPEC §6: Vf(0.5 mA) of d-si-switch = 0.70 + 0.16·log10(0.5) = 0.652 V; V− = −(5 − 1.304)
-    // + 0.5 mA/(980 Hz · 2.2 µF) + ½ · 0.5 mA/(980 Hz · 10 µF) = −3.439 V. With 2 V output
-    // headroom the part reaches −1.44 V against the −2.50 V window: 1.06 V short.
-    expect(elementWithId(section("buffer"), "tr", "buffer--oa-bip-split-gp")).toMatch(/: 1\.06 V short(<\/li>|<\/td>)/);
-    const html = partEntry("oa-bip-split-gp");
-    expect(html).toContain('class="result result-fail"');
-    expect(html).toContain(">1.06 V short</text>");
-    expect(html).toContain("V− −3.44 V</text>");
-    expect(html).toContain("1.06 V short</td>");
+    // + 0.5 mA/(980 Hz · 2.2 µF) + ½ · 0.5 mA/(980 Hz · 10 µF) = −3.439 V, so the op amp sees
+    // 5 + 3.439 = 8.44 V against its 10 V minimum: supply-range, the first rule it fails, 1.56 V short.
+    const supply = rejectionGroups(role("buffer")).find((g) => g.rule === "supply-range");
+    expect(supply?.parts.map((p) => p.result.part.id)).toContain("oa-bip-split-gp");
+    expect(section("buffer")).toContain("oa-bip-split-gp</a> 1.56 V short</li>");
+    expect(partEntry("oa-bip-split-gp")).toContain(
+      "needs a supply of 8.44 V (V+ 5.00 V, V− −3.44 V); rated 10.00 V to 36.00 V: 1.56 V short",
+    );
   });
 
   it("shows the derived values: pumped rail with droop and ripple, divider, window, ADC step", () => {
@@ -339,20 +330,28 @@ describe("a long shortlist: vibration-2v-split-2v5's buffer", () => {
   const buffer = evaluated("vibration-2v-split-2v5").roles.find((r) => r.role === "buffer") as RoleResult;
   const section = () => roleSection("vibration-2v-split-2v5", "buffer");
 
-  it("draws the first fits in full, then the others one row each in rank order", () => {
+  it("draws the first fits in full, then the others one row each in rank order, with their ranking keys", () => {
     expect(buffer.fits.length).toBeGreaterThan(FITS_IN_FULL);
     const html = section();
     const [top, rest] = html.split('<table class="fits-summary"');
     expect(listedIn(top ?? "", /<li class="result result-[a-z]+" id="buffer--([a-z0-9-]+)"/g)).toEqual(
       buffer.fits.slice(0, FITS_IN_FULL).map((p) => p.part.id),
     );
+    // The ranking's keys are stated once, in the page's summary; each row shows its own.
+    expect(page(`${BASE}designs/vibration-2v-split-2v5/`).split(escapeHtml(RANKING_KEYS)).length - 1).toBe(1);
     const restHtml = (rest ?? "").slice(0, (rest ?? "").indexOf("</table>"));
-    expect(listedIn(restHtml, /<tr id="buffer--([a-z0-9-]+)"/g)).toEqual(
-      buffer.fits.slice(FITS_IN_FULL).map((p) => p.part.id),
-    );
-    expect(listedIn(restHtml, /<tr id="buffer--[a-z0-9-]+"><td class="num">(\d+)<\/td>/g)).toEqual(
-      buffer.fits.slice(FITS_IN_FULL).map((_, i) => String(FITS_IN_FULL + 1 + i)),
-    );
+    const rows = [
+      ...restHtml.matchAll(/<tr><td class="num">(\d+)<\/td><th scope="row"><a href="[^"]*">([a-z0-9-]+)<\/a>/g),
+    ];
+    expect(rows.map((m) => m[2])).toEqual(buffer.fits.slice(FITS_IN_FULL).map((p) => p.part.id));
+    expect(rows.map((m) => m[1])).toEqual(buffer.fits.slice(FITS_IN_FULL).map((_, i) => String(FITS_IN_FULL + 1 + i)));
+    for (const p of buffer.fits.slice(FITS_IN_FULL)) {
+      const k = rankingKeys(p);
+      expect(restHtml).toContain(`>${p.part.id}</a>`);
+      expect(restHtml, p.part.id).toMatch(
+        new RegExp(`>${p.part.id}</a>.*?<td>${k.status}</td><td>${k.cost}</td><td class="num">${k.margin}</td>`),
+      );
+    }
     expect(html.match(/<svg class="rail-diagram"/g)?.length).toBe(FITS_IN_FULL);
   });
 });
@@ -388,11 +387,9 @@ describe("the other pages", () => {
     ]) {
       expect(html).toContain(text);
     }
-    const matrix = html.slice(
-      html.indexOf('<table class="matrix"'),
-      html.indexOf("</table>", html.indexOf('class="matrix"')),
-    );
-    expect(matrix.match(/<th scope="row">/g)?.length).toBe(data.designs.length);
+    // One line per design and role that weighed it, none per design without it.
+    const lines = html.match(/<li id="in-[a-z0-9-]+--[a-z-]+">/g) ?? [];
+    expect(lines.length).toBeGreaterThanOrEqual(data.designs.length);
   });
 
   it("gives a part every role of every design, the compared topology's roles included", () => {
@@ -406,16 +403,16 @@ describe("the other pages", () => {
         if (!place) continue;
         const anchor = `in-${d.design!.id}--${r.role}`;
         const entry = elementWithId(html, "li", anchor);
-        expect(entry, anchor).toContain(`class="result result-${place.verdict}"`);
-        // A fit with every finding; a rejection with the ones it does not pass (the rest by name).
+        expect(entry, anchor).toContain(`<span class="verdict verdict-${place.verdict}">`);
         const fit = r.fits.includes(place);
-        for (const f of place.findings.filter((x) => fit || x.verdict !== "pass"))
-          expect(entry, `${anchor} ${f.rule}`).toContain(escapeHtml(f.reason));
-        // The matrix cell for this design and role leads to the entry.
-        expect(html, anchor).toContain(`href="#${anchor}"`);
+        expect(entry, anchor).toContain(
+          fit ? `fit, rank ${r.fits.indexOf(place) + 1} of ${r.fits.length}` : "rejected",
+        );
+        const said = closestFinding(place);
+        if (said) expect(entry, anchor).toContain(escapeHtml(said.reason));
       }
     }
-    expect(html).toContain('href="#in-audio-1v5-20k--level-shift"');
+    expect(html).toContain('id="in-audio-1v5-20k--level-shift"');
   });
 
   it("explains every rule with its formula, columns, policy knob and source", () => {

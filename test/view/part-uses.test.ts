@@ -39,7 +39,8 @@ describe("partUses", () => {
     const row = partUses(good, designs).rows[0];
     expect(row?.cells[0]).toEqual({
       role: "buffer",
-      cell: { state: "fit", verdict: "pass", rank: 1, fits: 1, bom: true, chosen: true },
+      // A clean pass names the finding closest to its limit instead of a deciding one.
+      cell: expect.objectContaining({ state: "fit", verdict: "pass", rank: 1, fits: 1, bom: true, chosen: true }),
     });
   });
 

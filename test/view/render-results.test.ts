@@ -6,6 +6,7 @@ import { loadCatalogue } from "../../src/node/load-data.ts";
 import { DEFAULT_DRAFT } from "../../src/client/try/defaults.ts";
 import { checkDraft } from "../../src/client/try/draft.ts";
 import { pieceHtml, type Piece } from "../../src/view/pieces.ts";
+import { rejectionGroups } from "../../src/view/role-lists.ts";
 import { FIRST_ROWS, holdsLine, renderResults, renderRole, resultPieces } from "../../src/view/render-results.ts";
 
 const { catalogue } = loadCatalogue("data");
@@ -19,8 +20,9 @@ function evaluate(draft: Record<string, string>, parts: readonly Part[] = catalo
 }
 
 const closed = { expanded: new Set<string>() };
+// Fits are table rows, rejections list lines, both marked with their part and verdict.
 const rowsOf = (html: string) =>
-  [...html.matchAll(/<tr data-part="([^"]*)" data-verdict="([^"]*)">/g)].map((m) => [m[1], m[2]]);
+  [...html.matchAll(/<(?:tr|li) data-part="([^"]*)" data-verdict="([^"]*)">/g)].map((m) => [m[1], m[2]]);
 
 describe("renderRole", () => {
   // 12 V rails on fixed ±12 V: most op amps fit the buffer, so both lists are long enough to cut.
@@ -36,10 +38,9 @@ describe("renderRole", () => {
   it("marks every shown part with its id and verdict, fits first in rank order", () => {
     const html = renderRole(buffer, result, closed);
     const shown = rowsOf(html);
-    const expected = [...buffer.fits.slice(0, FIRST_ROWS), ...buffer.rejected.slice(0, FIRST_ROWS)].map((p) => [
-      p.part.id,
-      p.verdict,
-    ]);
+    // Rejections come grouped by the rule that decides them (role-lists.ts), the first rows of each group.
+    const rejected = rejectionGroups(buffer).flatMap((g) => g.parts.slice(0, FIRST_ROWS).map((p) => p.result));
+    const expected = [...buffer.fits.slice(0, FIRST_ROWS), ...rejected].map((p) => [p.part.id, p.verdict]);
     expect(shown).toEqual(expected);
   });
 
@@ -51,7 +52,8 @@ describe("renderRole", () => {
       `data-toggle="buffer:fits" aria-expanded="false">Show all ${buffer.fits.length} fits (${more} more)</button>`,
     );
     const open = renderRole(buffer, result, { expanded: new Set(["buffer:fits"]) });
-    expect(rowsOf(open).length).toBe(buffer.fits.length + Math.min(FIRST_ROWS, buffer.rejected.length));
+    const firstRejected = rejectionGroups(buffer).reduce((n, g) => n + Math.min(FIRST_ROWS, g.parts.length), 0);
+    expect(rowsOf(open).length).toBe(buffer.fits.length + firstRejected);
     expect(open).toContain(`aria-expanded="true">Show the first ${FIRST_ROWS} fits only</button>`);
   });
 
@@ -86,8 +88,8 @@ describe("renderResults with hostile catalogue text", () => {
     expanded: new Set(result.roles.flatMap((r) => [`${r.role}:fits`, `${r.role}:rejected`])),
   });
 
-  it("shows the name as text, never as markup", () => {
-    expect(html).toContain("&quot;&gt;&lt;img src=x onerror=alert(1)&gt;&lt;script&gt;alert(2)&lt;/script&gt;");
+  it("lists the part by its id and never lets its name in as markup", () => {
+    expect(html).toContain('<a href="/parts/oa-hostile/">oa-hostile</a>');
     expect(html).not.toMatch(/<img|<script|onerror=alert\(1\)>/);
   });
 

@@ -1,18 +1,31 @@
-// A design page's long lists: one row per part, in the role's order, linking
-// to the part page's entry for the same design and role.
+// A role's lists as the design page and the try page both show them (SPEC §14):
+// the fits one row each with their ranking keys, the rejections grouped by the
+// rule that decides them with the count, the shortfall range and an example.
 import { describe, expect, it } from "vitest";
 import { catalogueFromParts } from "../../src/core/catalogue.ts";
 import { evaluateDesign } from "../../src/engine.ts";
 import type { RoleResult } from "../../src/core/engine/result.ts";
-import { renderFitsTable, renderRejectedTable, type RoleListInput } from "../../src/view/role-lists.ts";
+import { pieceHtml } from "../../src/view/pieces.ts";
+import {
+  fitsPiece,
+  RANKING_KEYS,
+  rankingKeys,
+  rejectionGroups,
+  rejectionsPiece,
+  type RoleListInput,
+} from "../../src/view/role-lists.ts";
 import { design } from "../helpers/designs.ts";
 import { comparator, diode, opAmp } from "../helpers/parts.ts";
 
 const hostile = `<img src=x onerror="alert(1)"> & co`;
+// The test design: V+ 5 V, V− −5 V, the buffer's inputs ±2.50 V (helpers/designs.ts).
 const catalogue = catalogueFromParts([
   ...[1, 2, 3].map((n) => opAmp({ id: `oa-c${n}`, name: `Cost ${n}`, cost_band: n })),
-  // Accepts inputs only down to −5 + 2.6 = −2.40 V against −2.50 V (0.10 V short), and rated only to 8 V.
-  opAmp({ id: "oa-short", name: hostile, icm_neg_headroom_v: 2.6, supply_max_v: 8 }),
+  // Needs a 10 V supply, rated to 8 V: 2.00 V short on supply-range (checked first).
+  opAmp({ id: "oa-short", name: hostile, supply_max_v: 8 }),
+  // Accepts inputs down to −5 + 2.6 = −2.40 V against −2.50 V: 0.10 V short; −5 + 3.0 = −2.00 V: 0.50 V short.
+  opAmp({ id: "oa-icm-1", name: "ICM one", icm_neg_headroom_v: 2.6 }),
+  opAmp({ id: "oa-icm-5", name: "ICM five", icm_neg_headroom_v: 3.0 }),
   opAmp({ id: "oa-unrated", name: "Unrated", phase_reversal: undefined }),
   comparator({ supply_max_v: 36 }),
   diode(),
@@ -26,44 +39,91 @@ function buffer(bom: Record<string, string> = {}): RoleResult {
   return role;
 }
 
-const input = (role: RoleResult, inFull: string[] = []): RoleListInput => ({
+const input = (role: RoleResult, extra: Partial<RoleListInput> = {}): RoleListInput => ({
   designId: "d1",
   role,
-  links: { partUrl: (id) => `/sub/parts/${id}/` },
-  inFull: new Set(inFull),
+  links: { partUrl: (id) => `/sub/parts/${id}/`, rulesUrl: (rule) => `/sub/rules/#rule-${rule}` },
+  ...extra,
 });
 
-describe("renderRejectedTable", () => {
-  const role = buffer({ buffer: "oa-short" });
-
-  it("lists every rejection in the role's order, each anchored and linked to its whole case", () => {
-    const html = renderRejectedTable(input(role), "Rejected");
-    expect([...html.matchAll(/<tr id="buffer--([a-z0-9-]+)">/g)].map((m) => m[1])).toEqual(
-      role.rejected.map((r) => r.part.id),
-    );
-    expect(html).toContain('<a href="/sub/parts/oa-unrated/#in-d1--buffer">Unrated</a> <code>oa-unrated</code>');
-    expect(html).toContain("phase-reversal: not rated");
-    expect(html.match(/<th scope="(col|row)"/g)?.length).toBe(3 + role.rejected.length);
-  });
-
-  it("escapes a part's name and marks a BOM part, whose full entry elsewhere keeps the anchor", () => {
-    const html = renderRejectedTable(input(role, ["oa-short"]), "Rejected");
-    expect(html).not.toContain("<img");
-    expect(html).toContain("&lt;img src=x onerror=&quot;alert(1)&quot;&gt; &amp; co");
-    expect(html).toContain('<span class="mark mark-bom">in the BOM</span>');
-    expect(html).not.toContain('id="buffer--oa-short"');
-    expect(html).toContain('<ul class="reasons"><li>supply-range: ');
-  });
-});
-
-describe("renderFitsTable", () => {
-  it("ranks the rows from the given place on, each with status, cost and the finding closest to its limit", () => {
-    const role = buffer();
-    const html = renderFitsTable(input(role), 2, "Fits 2 on");
+describe("rejectionGroups", () => {
+  it("groups by the deciding rule, largest group first, with the range of shortfalls", () => {
+    const groups = rejectionGroups(buffer());
     expect(
-      [...html.matchAll(/<tr id="buffer--([a-z0-9-]+)"><td class="num">(\d+)<\/td>/g)].map((m) => [m[1], m[2]]),
+      groups.map((g) => ({
+        rule: g.rule,
+        verdict: g.verdict,
+        ids: g.parts.map((p) => p.result.part.id),
+        s: g.shortfall,
+      })),
+    ).toEqual([
+      {
+        rule: "input-common-mode",
+        verdict: "fail",
+        ids: ["oa-icm-1", "oa-icm-5"],
+        s: { low: expect.closeTo(0.1, 9), high: expect.closeTo(0.5, 9), unit: "V" },
+      },
+      { rule: "supply-range", verdict: "fail", ids: ["oa-short"], s: { low: 2, high: 2, unit: "V" } },
+      { rule: "phase-reversal", verdict: "unrated", ids: ["oa-unrated"], s: undefined },
+    ]);
+  });
+});
+
+describe("rejectionsPiece", () => {
+  it("heads each group with its count, shortfall range and an example, then one line per part", () => {
+    const html = pieceHtml(rejectionsPiece(input(buffer())));
+    expect(html).toContain(
+      '<p class="reject-head"><a href="/sub/rules/#rule-input-common-mode">input-common-mode</a>: <strong>2</strong> parts fail, short by 100 mV to 500 mV. For example oa-icm-1: ',
+    );
+    expect(html).toContain('<li><a href="/sub/parts/oa-icm-5/">oa-icm-5</a> 500 mV short</li>');
+    expect(html).toContain("<strong>1</strong> part cannot be checked (not rated).");
+    expect(html).toContain('<li><a href="/sub/parts/oa-unrated/">oa-unrated</a> not rated</li>');
+  });
+
+  it("escapes a part's text in the example and marks a BOM part", () => {
+    const html = pieceHtml(rejectionsPiece(input(buffer({ buffer: "oa-short" }))));
+    expect(html).not.toContain("<img");
+    expect(html).toContain('<span class="mark mark-bom">in the BOM</span>');
+  });
+
+  it("shows the first lines of each group behind a button on the try page, all when opened", () => {
+    const role = buffer();
+    const first = pieceHtml(rejectionsPiece(input(role, { first: 1, dataAttributes: true })));
+    expect(first.match(/<li /g)?.length).toBe(3);
+    expect(first).toContain(
+      'data-toggle="buffer:rejected" aria-expanded="false">Show all 2 rejected parts of each rule',
+    );
+    const all = pieceHtml(rejectionsPiece(input(role, { first: 1, expanded: new Set(["buffer:rejected"]) })));
+    expect(all.match(/<li>/g)?.length).toBe(4);
+  });
+});
+
+describe("fitsPiece", () => {
+  it("ranks the rows from the given place on, each with its own ranking keys", () => {
+    const role = buffer();
+    const html = pieceHtml(fitsPiece(input(role), 2, "Fits 2 on"));
+    expect(
+      [...html.matchAll(/<tr><td class="num">(\d+)<\/td><th scope="row"><a href="[^"]*">([a-z0-9-]+)</g)].map((m) => [
+        m[2],
+        m[1],
+      ]),
     ).toEqual(role.fits.slice(1).map((r, i) => [r.part.id, String(i + 2)]));
-    expect(html).toContain("<td>listed, cost 2 of 5</td>");
-    expect(html).toMatch(/<td>[a-z-]+: [^<]*\d[^<]*<\/td><\/tr>/);
+    // Equal parts but for the cost band: ranked by it, and each row says its own.
+    expect(role.fits.map((r) => r.part.id)).toEqual(["oa-c1", "oa-c2", "oa-c3"]);
+    expect(html).toContain("<td>listed</td><td>2 of 5</td>");
+    expect(html).toMatch(/<td>[a-z-]+: [^<]*\d[^<]* to spare<\/td><\/tr>/);
+  });
+
+  it("states the keys in the order the ranking applies them", () => {
+    expect(RANKING_KEYS).toMatchInlineSnapshot(
+      `"Fits are ranked by verdict (pass before marginal), then status (stocked, approved, listed), then cost band (1 lowest; not given last), then the least margin relative to its limit (larger first), then id."`,
+    );
+    const best = buffer().fits[0];
+    if (!best) throw new Error("no fit");
+    expect(rankingKeys(best)).toEqual({
+      status: "listed",
+      cost: "1 of 5",
+      margin: `${Math.round(best.relative * 100)} %`,
+    });
   });
 });

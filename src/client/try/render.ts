@@ -1,12 +1,13 @@
 // Puts one evaluation on the page. Each piece of the results (pieces.ts: a
 // role, a row, a cell …) keeps one element across edits, matched by key, and
-// only pieces whose HTML changed are touched. They are patched in place, not
-// replaced, so the browser restyles and re-lays-out the text and attributes
-// that moved rather than every row of every table (style and layout of freshly
-// parsed rows were most of an edit's cost): new values go straight into the
-// live nodes when the markup keeps its shape, and anything else is parsed,
-// one parse per table context, and merged. HTML comes from render-results.ts,
-// where every piece of text is escaped.
+// only pieces whose HTML changed are touched. A changed piece is parsed (one
+// parse per table context) and merged node by node into the live element
+// (patchChildren: a keyed patch on the DOM, never on the HTML text), so the
+// browser restyles and re-lays-out only the text and attributes that moved
+// rather than every row of every table (style and layout of freshly parsed rows
+// were most of an edit's cost). A maintained morphing library would do the
+// same merge for about 3 KB more of the try page's script, over its budget.
+// HTML comes from src/view/render-results.ts, where every piece is escaped.
 import type { DesignResult } from "../../core/engine/result.ts";
 import { pieceHtml, type Piece } from "../../view/pieces.ts";
 import { resultPieces, type ViewState } from "../../view/render-results.ts";
@@ -65,14 +66,7 @@ function drawChildren(parent: Element, pieces: readonly Piece[], jobs: Job[]): v
       jobs.push({ piece, html: pieceHtml(piece), slot });
       continue;
     }
-    if (changed) {
-      const before = drawn.get(el)?.source;
-      if ("html" in piece && before !== undefined && patchValues(el, before, piece.html)) {
-        drawn.set(el, { key: piece.key, source });
-      } else {
-        jobs.push({ piece, html: "html" in piece ? piece.html : `${piece.open}${piece.close}`, el });
-      }
-    }
+    if (changed) jobs.push({ piece, html: "html" in piece ? piece.html : `${piece.open}${piece.close}`, el });
     if (!("html" in piece)) drawChildren(el, piece.children, jobs);
   }
   // Whatever is left was drawn from pieces this result no longer has (or by no piece at all).
@@ -127,59 +121,13 @@ function runJobs(jobs: readonly Job[], scratch: HTMLTemplateElement): void {
   }
 }
 
-// The values in our markup, in document order: each quoted attribute value and each run of text.
-const VALUE = /="[^"]*"|>[^<]+</g;
-// The markup with each value replaced by one mark: equal shapes mean the same elements, attribute names and text nodes.
-const shape = (html: string): string => html.replace(VALUE, "\u0001");
-const ENTITY: Readonly<Record<string, string>> = {
-  "&amp;": "&",
-  "&lt;": "<",
-  "&gt;": ">",
-  "&quot;": '"',
-  "&#39;": "'",
-};
-const valueOf = (token: string): string =>
-  token.slice(token.startsWith("=") ? 2 : 1, -1).replace(/&(?:amp|lt|gt|quot|#39);/g, (e) => ENTITY[e] ?? e);
-
-/**
- * An edit mostly changes numbers: a reason's text, a diagram's coordinates.
- * When the markup keeps its shape, the live nodes take the new values in
- * document order without a parse. Every value must still read as it was
- * drawn; when one does not, or the parser could read the markup otherwise
- * (another entity, CR, NUL), this gives up and the caller parses.
- */
-function patchValues(el: Element, before: string, after: string): boolean {
-  if (/[\r\0]|&(?!amp;|lt;|gt;|quot;|#39;)/.test(after) || shape(before) !== shape(after)) return false;
-  const was = before.match(VALUE) ?? [];
-  const now = after.match(VALUE) ?? [];
-  const walker = el.ownerDocument.createTreeWalker(el, NodeFilter.SHOW_ELEMENT | NodeFilter.SHOW_TEXT);
-  let i = 0;
-  for (let node: Node | null = el; node !== null; node = walker.nextNode()) {
-    if (node instanceof Element) {
-      const attributes = node.attributes;
-      for (let a = 0; a < attributes.length; a++, i++) {
-        if (was[i] === now[i]) continue;
-        const attribute = attributes[a];
-        if (attribute === undefined || !was[i]?.startsWith("=") || attribute.value !== valueOf(was[i] ?? "")) {
-          return false;
-        }
-        attribute.value = valueOf(now[i] ?? "");
-      }
-    } else {
-      if (!was[i]?.startsWith(">") || node.nodeValue !== valueOf(was[i] ?? "")) return false;
-      if (was[i] !== now[i]) node.nodeValue = valueOf(now[i] ?? "");
-      i++;
-    }
-  }
-  return i === now.length;
-}
-
 function apply(job: Job, fresh: Element): void {
   if (job.slot) {
     job.slot.replaceWith(fresh);
     remember(fresh, job.piece);
     return;
   }
+  // A leaf takes the whole new element; a container only its own attributes (its children are pieces, drawn above).
   patchAttributes(job.el, fresh);
   if ("html" in job.piece) patchChildren(job.el, fresh);
   drawn.set(job.el, { key: job.piece.key, source: sourceOf(job.piece) });

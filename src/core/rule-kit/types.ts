@@ -92,6 +92,11 @@ export type DiodeStage = {
   reverse_v: number;
   /** Phrase for where the reverse voltage comes from ("2 × drive 5.00 V"). */
   reverse_what?: string;
+  /**
+   * When the reverse voltage moves with the part's own drop (SPEC §11.12): needed = reverse_v + sign·Vf,
+   * Vf at `current_a` and `temp_c` (the end that makes it largest, named by `at`).
+   */
+  reverse_vf?: { sign: 1 | -1; current_a: number; temp_c: number; at: string };
   /** Recovery time limit, seconds. */
   recovery_limit_s?: number;
   recovery_what?: string;
