@@ -24,7 +24,7 @@ describe("summarizeDesign", () => {
     expect(s).toEqual(
       expect.objectContaining({
         ok: true,
-        state: "holds",
+        verdict: "holds",
         holds: true,
         verdict: expect.stringMatching(/^(holds|marginal|fails)$/),
         line: expect.stringMatching(
