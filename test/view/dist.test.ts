@@ -253,6 +253,12 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
     expect(listedIn(buffer, /<li class="result result-[a-z]+" id="buffer--([a-z0-9-]+)"/g)).toEqual(
       fits.slice(0, inFull).map((p) => p.part.id),
     );
+    // Each fit in full shows its own ranking keys: status, cost band and least relative margin.
+    for (const p of fits.slice(0, inFull)) {
+      const entry = elementWithId(buffer, "li", `buffer--${p.part.id}`);
+      expect(entry).toContain(`<span class="mark">least margin ${rankingKeys(p).margin}</span>`);
+      expect(entry).toContain(`<span class="mark">${p.part.status}</span>`);
+    }
     const rejected = role("buffer").rejected;
     expect(rejected.length).toBeGreaterThan(0);
     const lines = listedIn(buffer, /<li><a href="\.\.\/\.\.\/parts\/([a-z0-9-]+)\/index\.html">/g);
