@@ -53,6 +53,13 @@ export type OpAmpStage = {
   zero_crossing_v?: number;
   /** What a fault on the signal input puts at this stage's input pins (input-fault rule, SPEC §12.4). */
   fault?: FaultPath;
+  /**
+   * Peak of the signal driving the stage at its crossing, volts; the larger end of `input` when absent.
+   * An inverting stage's input pins sit at 0 V while the signal reaches it through its input resistor.
+   */
+  zero_crossing_signal_v?: number;
+  /** Input-referred peak the crossing error scales with; `bandwidth_peak_v` when absent. */
+  zero_crossing_peak_v?: number;
   /** Feedback factor β while the diodes are off (SPEC §11.3); ½ (the inverting half-wave stage) when absent. */
   zero_crossing_beta?: number;
   /**
