@@ -213,6 +213,8 @@ const ROLE_TERMS: readonly RoleTerm[] = [
     label: "difference amplifier offset and bias current",
     role: "difference",
     rule: offset.id,
+    // A true offset: a two-point calibration removes it.
+    removed_by: "two-point",
   },
   {
     name: "difference-bandwidth",

@@ -173,7 +173,14 @@ function display(d: Derived, x: GainedLevelShift, design: Design): DisplayGroup[
 }
 
 const ROLE_TERMS: readonly RoleTerm[] = [
-  { name: "gain-stage-offset", label: "gain stage offset and bias current", role: "gain-stage", rule: offset.id },
+  {
+    name: "gain-stage-offset",
+    label: "gain stage offset and bias current",
+    role: "gain-stage",
+    rule: offset.id,
+    // A true offset: a two-point calibration removes it.
+    removed_by: "two-point",
+  },
   { name: "gain-stage-bandwidth", label: "gain stage gain error at f max", role: "gain-stage", rule: bandwidth.id },
 ];
 
