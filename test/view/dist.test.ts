@@ -253,6 +253,12 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
     expect(listedIn(buffer, /<li class="result result-[a-z]+" id="buffer--([a-z0-9-]+)"/g)).toEqual(
       fits.slice(0, inFull).map((p) => p.part.id),
     );
+    // Each fit in full shows its own ranking keys: status, cost band and least relative margin.
+    for (const p of fits.slice(0, inFull)) {
+      const entry = elementWithId(buffer, "li", `buffer--${p.part.id}`);
+      expect(entry).toContain(`<span class="mark">least margin ${rankingKeys(p).margin}</span>`);
+      expect(entry).toContain(`<span class="mark">${p.part.status}</span>`);
+    }
     const rejected = role("buffer").rejected;
     expect(rejected.length).toBeGreaterThan(0);
     const lines = listedIn(buffer, /<li><a href="\.\.\/\.\.\/parts\/([a-z0-9-]+)\/index\.html">/g);
@@ -270,7 +276,8 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
       expect(buffer, g.rule).toMatch(head);
       const example = g.parts[0]!;
       expect(buffer, g.rule).toContain(`For example ${example.result.part.id}: ${escapeHtml(example.finding.reason)}`);
-      if (g.verdict === "fail")
+      // A yes/no rule (unit "", e.g. unity-gain-stable) has no number to show.
+      if (g.verdict === "fail" && example.finding.unit !== "")
         expect(example.finding.reason, g.rule).toMatch(
           /\d(\.\d+)? ?(V|mV|µV|nV|A|mA|µA|nA|pA|s|ms|µs|ns|Hz|kHz|MHz|V\/µs|mV\/µs|Ω|kΩ)\b/,
         );
@@ -288,16 +295,16 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
     }
   });
 
-  it("files the split-supply class under the rule that decides it: 8.08 V across the rails, rated from 10 V, 1.92 V short", () => {
-    // SPEC §6, §11.5: the pump carries 0.5 mA stated + 2 × 0.2 mA + 2 × 3 mA + 0.6 mA = 7.5 mA; each diode
-    // conducts 15 mA: Vf = 0.70 + 0.16·log10(15) = 0.888 V at 25 °C, + 2 mV/°C × 25 °C at the 0 °C cold end
-    // = 0.938 V (Sedra & Smith); V− = −(5 − 1.876) + 7.5 mA/(20 kHz · 10 µF) + ½ · 7.5 mA/(20 kHz · 22 µF)
-    // = −3.078 V (Winder), so the op amp sees 8.08 V against its 10 V minimum: 1.92 V short.
+  it("files the split-supply class under the rule that decides it: 8.98 V across the rails, rated from 10 V, 1.02 V short", () => {
+    // SPEC §6, §11.5: the pump carries 0.5 mA stated + 2 × 0.2 mA + 2 × 3 mA + 0.6 mA = 7.5 mA; each Schottky
+    // conducts 15 mA: Vf = 0.32 + 0.10·log10(15) = 0.438 V at 25 °C, + 2 mV/°C × 25 °C at the 0 °C cold end
+    // = 0.488 V (Sedra & Smith); V− = −(5 − 0.975) + 7.5 mA/(20 kHz · 10 µF) + ½ · 7.5 mA/(20 kHz · 22 µF)
+    // = −3.979 V (Winder), so the op amp sees 8.98 V against its 10 V minimum: 1.02 V short.
     const supply = rejectionGroups(role("buffer")).find((g) => g.rule === "supply-range");
     expect(supply?.parts.map((p) => p.result.part.id)).toContain("oa-bip-split-gp");
-    expect(section("buffer")).toContain("oa-bip-split-gp</a> 1.92 V short</li>");
+    expect(section("buffer")).toContain("oa-bip-split-gp</a> 1.02 V short</li>");
     expect(partEntry("oa-bip-split-gp")).toContain(
-      "needs a supply of 8.08 V (V+ 5.00 V, V− −3.08 V); rated 10.00 V to 36.00 V: 1.92 V short",
+      "needs a supply of 8.98 V (V+ 5.00 V, V− −3.98 V); rated 10.00 V to 36.00 V: 1.02 V short",
     );
   });
 
@@ -309,7 +316,7 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
     for (const text of [
       "<dd>37.5 mV</dd>",
       "<dd>17 mV</dd>",
-      "<dd>−3.08 V</dd>",
+      "<dd>−3.98 V</dd>",
       "<dd>47 kΩ</dd>",
       "<dd>16 kΩ</dd>",
       "<dd>1 kΩ</dd>",
