@@ -41,8 +41,10 @@ export function hasBareLoop(id: string): boolean {
 export type RolePlan = {
   topology: string;
   role: string;
+  /** Every stage's rules in turn (the engine's finding order). */
   rules: readonly Benchmarked[];
-  stage: Stage;
+  /** Each stage of the role with its rules (the two-stage rectifier has two). */
+  checks: readonly { stage: Stage; rules: readonly Benchmarked[] }[];
   rails: Rails;
   design: Design;
   table: Table;
@@ -129,8 +131,8 @@ export function planOf(design: Design, catalogue: Catalogue): RolePlan[] {
     return e.result.roles.map((r) => ({
       topology,
       role: r.role,
-      rules: r.rules as Benchmarked[],
-      stage: r.stage,
+      rules: r.stages.flatMap((s) => s.rules) as Benchmarked[],
+      checks: r.stages.map((s) => ({ stage: s.stage, rules: s.rules as Benchmarked[] })),
       rails: e.result.derived.rails,
       design,
       // The engine's candidates for the role: the kinds that can fill it, in file order.
@@ -165,8 +167,12 @@ export function bareLoop(plans: readonly RolePlan[], out: readonly RoleOutput[])
     const o = out[r] as RoleOutput;
     o.severity.fill(PASS);
     o.relative.fill(Infinity);
-    for (let k = 0; k < plan.rules.length; k++) {
-      runRule(plan, plan.rules[k] as Benchmarked, o.margins[k] as Float64Array, o.severity, o.relative);
+    let k = 0;
+    for (const check of plan.checks) {
+      for (const rule of check.rules) {
+        runRule(plan, check.stage, rule, o.margins[k] as Float64Array, o.severity, o.relative);
+        k++;
+      }
     }
     const allowUnrated = plan.design.policy.allow_unrated;
     for (let i = 0; i < plan.table.n; i++) {
@@ -194,8 +200,15 @@ export function bareLoopSorted(plans: readonly RolePlan[], out: readonly RoleOut
   });
 }
 
-function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: Uint8Array, rel: Float64Array): void {
-  const { design, stage, rails, table } = plan;
+function runRule(
+  plan: RolePlan,
+  stage: Stage,
+  rule: Benchmarked,
+  margin: Float64Array,
+  sev: Uint8Array,
+  rel: Float64Array,
+): void {
+  const { design, rails, table } = plan;
   const c = table.col as Record<(typeof COLUMNS)[number] | "is_op_amp" | "open_drain", Float64Array> &
     Record<"unity_gain_stable" | "phase_reversal" | "schottky" | "input_fet", Float64Array>;
   const n = table.n;
@@ -352,8 +365,17 @@ function runRule(plan: RolePlan, rule: Benchmarked, margin: Float64Array, sev: U
       if (stage.stage !== "op-amp") return;
       const jump = stage.zero_crossing_v ?? 0;
       const beta = stage.zero_crossing_beta ?? 0.5;
-      const slope = 2 * Math.PI * f * Math.max(Math.abs(stage.input.low), Math.abs(stage.input.high));
-      const perSecond = (stage.zero_crossing_error === "clips" ? 1 : 2) * 2 * Math.PI * f * stage.bandwidth_peak_v;
+      const slope =
+        2 *
+        Math.PI *
+        f *
+        (stage.zero_crossing_signal_v ?? Math.max(Math.abs(stage.input.low), Math.abs(stage.input.high)));
+      const perSecond =
+        (stage.zero_crossing_error === "clips" ? 1 : 2) *
+        2 *
+        Math.PI *
+        f *
+        (stage.zero_crossing_peak_v ?? stage.bandwidth_peak_v);
       const limit = policy.timing_share * A;
       for (let i = 0; i < n; i++) {
         const accel = 2 * Math.PI * (c.gbw_mhz[i] as number) * 1e6 * beta * slope;

@@ -26,7 +26,7 @@ type Worked = { t: DeadTime; slope: number; jump: number; beta: number; error: n
 function work(ctx: RoleContext, part: PartOf<"op-amp">): Worked {
   const s = stageAs(ctx.stage, "op-amp", "zero-crossing");
   const f = ctx.design.signal.max_frequency_hz;
-  const amplitude = Math.max(Math.abs(s.input.low), Math.abs(s.input.high));
+  const amplitude = s.zero_crossing_signal_v ?? Math.max(Math.abs(s.input.low), Math.abs(s.input.high));
   const slope = 2 * Math.PI * f * amplitude;
   const jump = s.zero_crossing_v ?? 0;
   const beta = s.zero_crossing_beta ?? DEAD_TIME_BETA_DEFAULT;
@@ -42,7 +42,12 @@ function work(ctx: RoleContext, part: PartOf<"op-amp">): Worked {
     slope,
     jump,
     beta,
-    error: crossingError(f, s.bandwidth_peak_v, t.seconds, s.zero_crossing_error ?? "inverts"),
+    error: crossingError(
+      f,
+      s.zero_crossing_peak_v ?? s.bandwidth_peak_v,
+      t.seconds,
+      s.zero_crossing_error ?? "inverts",
+    ),
     limit: ctx.policy.timing_share * ctx.design.accuracy.required_v,
   };
 }

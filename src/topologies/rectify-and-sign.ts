@@ -22,7 +22,17 @@ import { reverseVoltage } from "../../rules/reverse-voltage.ts";
 import { signDeadBand } from "../../rules/sign-dead-band.ts";
 import { supplyRange } from "../../rules/supply-range.ts";
 import { zeroCrossing } from "../../rules/zero-crossing.ts";
-import { budgetTerm, type BudgetTerm, type Conversion, type RoleTerm } from "../core/engine/budget.ts";
+import {
+  budgetTerm,
+  type BudgetTerm,
+  type Conversion,
+  type NoiseFigure,
+  type RoleTerm,
+} from "../core/engine/budget.ts";
+import type { Catalogue } from "../core/catalogue-index.ts";
+import { enobOf, sinadDb, stageNoise } from "../core/math/noise.ts";
+import { ratioSpread } from "../core/math/rectifier-ratios.ts";
+import type { OpAmp } from "../core/schemas/op-amp.ts";
 import { isFitResult } from "../core/engine/evaluate-part.ts";
 import type { Derived, DiodeUse, DisplayGroup, DisplayRow, RoleResult } from "../core/engine/result.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
@@ -162,8 +172,10 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
   }
   const rails: Rails = { positive_v: positive, negative_v };
 
-  // 2. The rectifier's diodes, at the current the full window drives through the load.
-  const rectCurrent = W / design.front_end.rectifier_load_ohm;
+  // 2. The rectifier's diodes, at the current the full window drives through stage 1's loads.
+  // Stage 1's conducting diode carries the current into its feedback resistor R and into the summer's
+  // R/2 input, both ending at a virtual ground: 3·W/R at the peak (SPEC §11.2).
+  const rectCurrent = (3 * W) / design.front_end.rectifier_load_ohm;
   const rectDiodeRole = role(
     "rectifier-diode",
     {
@@ -252,21 +264,44 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     bandwidth_peak_v: design.signal.peak_v,
     slew_amplitude_v: W,
   };
-  const rectifier: OpAmpStage = {
+  // The two-op-amp full-wave rectifier (SPEC §11.2): both stages are inverting
+  // with the + input grounded, so both inputs sit at 0 V. Stage 1's output errors
+  // reach the converter at the summer's weight 2: its output_per_input is k/2 and
+  // its bandwidth error scales with twice the peak.
+  const R = design.front_end.rectifier_load_ohm;
+  const peak = design.signal.peak_v;
+  const halfWave: OpAmpStage = {
     stage: "op-amp",
-    label: "the rectifier",
-    input: { low: -W, high: W },
-    output: { low: -vf, high: W + vf },
+    label: "the rectifier's stage 1 (half-wave)",
+    input: { low: 0, high: 0 },
+    // Its op amp's output is one diode drop beyond the stage output: −(W + Vf) for a positive input, +Vf for a negative one.
+    output: { low: -(W + vf), high: vf },
     noise_gain: 2,
     vos_multiplier: 2,
-    bias_ohm: design.front_end.rectifier_load_ohm,
-    output_per_input: k,
-    bandwidth_peak_v: design.signal.peak_v,
+    bias_ohm: R,
+    output_per_input: k / 2,
+    bandwidth_peak_v: 2 * peak,
     slew_amplitude_v: W + vf,
     zero_crossing_v: 2 * vfCold,
     zero_crossing_at: endPhrase("cold", cold),
+    // The buffer's ±W reaches stage 1 through its input resistor; the reading's error is input-referred at the peak.
+    zero_crossing_signal_v: W,
+    zero_crossing_peak_v: peak,
     // While stage 1 is dead the summer's output is −x, below 0 V, and the single-supply converter reads 0: off by x.
     zero_crossing_error: "clips",
+  };
+  const summer: OpAmpStage = {
+    stage: "op-amp",
+    label: "the rectifier's stage 2 (summer)",
+    input: { low: 0, high: 0 },
+    output: { low: 0, high: W },
+    // Inputs R (from the buffer) and R/2 (from stage 1), feedback R: 1 + R/(R ‖ R/2) = 4.
+    noise_gain: 4,
+    vos_multiplier: 4,
+    bias_ohm: R,
+    output_per_input: k,
+    bandwidth_peak_v: peak,
+    slew_amplitude_v: W,
   };
   const sign: SignStage = {
     stage: "sign",
@@ -277,9 +312,23 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     ...(baseClamp ? { base_clamp: baseClamp } : {}),
     deepest_negative_v: deepest_v,
   };
-  role("buffer", buffer, rails);
-  role("rectifier", rectifier, rails);
+  const bufferRole = role("buffer", buffer, rails);
+  const rectifierRole = role(
+    "rectifier",
+    [
+      { id: RECTIFIER_STAGES[0], stage: halfWave, rules: [...OP_AMP_STAGE_RULES, zeroCrossing] },
+      { id: RECTIFIER_STAGES[1], stage: summer, rules: OP_AMP_STAGE_RULES },
+    ],
+    rails,
+  );
   role("sign", sign, rails);
+
+  const noise = chainNoise(design, catalogue, k, thevenin_ohm, bufferRole, rectifierRole);
+  if (noise.unrated.length > 0) {
+    notes.push(
+      `No voltage noise rating (noise_nv_rthz) for ${noise.unrated.join(", ")}: the noise term leaves that part's own noise out.`,
+    );
+  }
 
   const derived: Derived = {
     rails,
@@ -298,13 +347,17 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     outcome: {
       derived,
       notes,
-      terms: fixedTerms(design, k, divider),
+      terms: [...fixedTerms(design, k, divider), ...noise.terms],
+      noise: noise.figure,
       codesSpannedBits: design.adc.bits + Math.log2(W / design.adc.reference_v) + 1,
       conversion: conversion(design, k),
       display: display(design, derived),
     },
   };
 }
+
+/** The rectifier role's two stages (SPEC §11.2); findings and budget terms name them. */
+export const RECTIFIER_STAGES = ["stage-1", "stage-2"] as const;
 
 const ROLE_TERMS: readonly RoleTerm[] = [
   // The buffer's offset shifts the reading like a true offset (the sign follows the shifted signal): a
@@ -317,9 +370,35 @@ const ROLE_TERMS: readonly RoleTerm[] = [
     rule: offset.id,
     removed_by: "two-point",
   },
-  { name: "rectifier-offset", label: "rectifier offset and bias current", role: "rectifier", rule: offset.id },
+  {
+    name: "rectifier-1-offset",
+    label: "rectifier stage 1 offset and bias current, through the summer's weight 2",
+    role: "rectifier",
+    rule: offset.id,
+    stage: "stage-1",
+  },
+  {
+    name: "rectifier-2-offset",
+    label: "rectifier stage 2 (summer) offset and bias current",
+    role: "rectifier",
+    rule: offset.id,
+    stage: "stage-2",
+  },
   { name: "buffer-bandwidth", label: "buffer gain error at f max", role: "buffer", rule: bandwidth.id },
-  { name: "rectifier-bandwidth", label: "rectifier gain error at f max", role: "rectifier", rule: bandwidth.id },
+  {
+    name: "rectifier-1-bandwidth",
+    label: "rectifier stage 1 gain error at f max, through the summer's weight 2",
+    role: "rectifier",
+    rule: bandwidth.id,
+    stage: "stage-1",
+  },
+  {
+    name: "rectifier-2-bandwidth",
+    label: "rectifier stage 2 (summer) gain error at f max",
+    role: "rectifier",
+    rule: bandwidth.id,
+    stage: "stage-2",
+  },
   { name: "sign-dead-band", label: "comparator dead band", role: "sign", rule: signDeadBand.id },
   { name: "rectifier-diode-leakage", label: "rectifier diode leakage", role: "rectifier-diode", rule: leakage.id },
   ...TIMING_ROLE_TERMS,
@@ -330,7 +409,104 @@ export function fixedTerms(design: Design, k: number, divider: Divider | null): 
   const peak = design.signal.peak_v;
   const terms = converterTerms(design, k, peak);
   if (divider) terms.push(...dividerTerms(design, divider));
+  terms.push(...rectifierRatioTerms(design));
   return terms;
+}
+
+/**
+ * The rectifier's five resistors at their tolerance, over all 32 corners (SPEC
+ * §11.2): the part of the half-wave gains both halves share (a one-point gain
+ * calibration removes it) and the difference between the halves (nothing
+ * removes it: after a calibration on one half the other is off by all of it).
+ */
+export function rectifierRatioTerms(design: Design): BudgetTerm[] {
+  const t = design.front_end.rectifier_tolerance ?? design.front_end.resistor_tolerance;
+  const peak = design.signal.peak_v;
+  const s = ratioSpread(design.front_end.rectifier_load_ohm, t);
+  const head = `g+ = Rf2·(Rf1/(Ri1·Rb) − 1/Ra), g− = Rf2/Ra, 5 resistors ± ${pct(t)}, 32 corners: |g+ − 1| ≤ ${pct(s.positive)}, |g− − 1| ≤ ${pct(s.negative)}`;
+  return [
+    budgetTerm(
+      "rectifier-ratio-common",
+      "rectifier resistor ratios, common to both halves",
+      s.common * peak,
+      `${head}; common part |(g+ + g−)/2 − 1| ≤ ${pct(s.common)} × ${formatSI(peak, "V")} = ${formatSI(s.common * peak, "V")}`,
+      "one-point",
+    ),
+    budgetTerm(
+      "rectifier-ratio-difference",
+      "rectifier resistor ratios, difference between the halves",
+      s.difference * peak,
+      `${head}; |g+ − g−| ≤ ${pct(s.difference)} × ${formatSI(peak, "V")} = ${formatSI(s.difference * peak, "V")}`,
+      "none",
+    ),
+  ];
+}
+
+const ROOM_K = 273.15;
+
+/**
+ * The chain's random noise (SPEC §11.9), input-referred: each op amp's
+ * voltage noise, current noise where rated and the Johnson noise of the
+ * resistance its inputs see, over its own noise bandwidth (π/2)·GBW/NG, times
+ * its noise gain; stage 1 at the summer's weight 2; all through k to the
+ * input and combined root-sum-square at the hottest end of the range. The
+ * budget takes it at coverage factor 2 (JCGM 100:2008 §6).
+ */
+export function chainNoise(
+  design: Design,
+  catalogue: Catalogue,
+  k: number,
+  theveninOhm: number,
+  buffer: RoleResult,
+  rectifier: RoleResult,
+): { terms: BudgetTerm[]; figure?: NoiseFigure; unrated: string[] } {
+  const kelvin = design.temperature.max_c + ROOM_K;
+  const R = design.front_end.rectifier_load_ohm;
+  const opAmp = (r: RoleResult): OpAmp | undefined => {
+    const p = r.chosen === undefined ? undefined : catalogue.byId.get(r.chosen);
+    return p?.kind === "op-amp" ? p : undefined;
+  };
+  const b = opAmp(buffer);
+  const rect = opAmp(rectifier);
+  if (!b || !rect) return { terms: [], unrated: [] };
+  const unrated = [...new Set([b, rect].filter((p) => p.noise_nv_rthz === undefined).map((p) => p.id))];
+  const stages = [
+    { what: "buffer", part: b, ng: 1, r: theveninOhm, weight: 1 },
+    { what: "stage 1", part: rect, ng: 2, r: R / 2, weight: 2 },
+    { what: "stage 2", part: rect, ng: 4, r: R / 4, weight: 1 },
+  ].map((x) => {
+    const n = stageNoise({
+      en: (x.part.noise_nv_rthz ?? 0) * 1e-9,
+      in: (x.part.in_pa_rthz ?? 0) * 1e-12,
+      gbw_hz: x.part.gbw_mhz * 1e6,
+      noise_gain: x.ng,
+      r_ohm: x.r,
+      kelvin,
+    });
+    return { ...x, n, input_v: (n.output_rms_v * x.weight) / k };
+  });
+  const rms = Math.sqrt(stages.reduce((a, x) => a + x.input_v ** 2, 0));
+  const atAdc = rms * k;
+  const sinad = sinadDb(design.adc.bits, design.adc.reference_v, atAdc);
+  const parts = stages
+    .map(
+      (x) =>
+        `${x.what} ${formatSI(x.n.density, "V")}/√Hz × NG ${x.ng} × √(π/2 · ${formatSI(x.n.fc_hz, "Hz")})${x.weight === 1 ? "" : ` × ${x.weight}`} ÷ ${ratio(k)} = ${formatSI(x.input_v, "V")}`,
+    )
+    .join("; ");
+  return {
+    terms: [
+      budgetTerm(
+        "noise",
+        "random noise, coverage factor 2",
+        2 * rms,
+        `√(en² + (in·R)² + 4kTR) at ${Number(kelvin.toFixed(2))} K per stage: ${parts}; RSS ${formatSI(rms, "V")} rms × 2 = ${formatSI(2 * rms, "V")}`,
+        "none",
+      ),
+    ],
+    figure: { rms_v: rms, sinad_db: sinad, enob: enobOf(sinad), unrated },
+    unrated,
+  };
 }
 
 /** The divider's ratio over its resistors' tolerance, and over the source's when the design gives one (SPEC §11.1). */
@@ -440,7 +616,7 @@ export const rectifyAndSign = defineTopology({
   id: "rectify-and-sign",
   title: "Rectify and sign",
   description:
-    "A divider (top R1, bottom R2 from the named E-series, ratio k = R2/(Rs + R1 + R2), loaded by the source resistance Rs, as large as possible but not above window/peak) feeds a follower buffer; a comparator decides the sign; a two-op-amp precision rectifier folds the negative half up; an optional diode/capacitor charge pump makes V− = −(V_d − 2V_F) + I/(f·C_fly) + ripple/2, ripple = I/(f·C_res) (switched-capacitor resistance 1/(f·C)). Buffer in = out = ±W; rectifier out −Vf … W + Vf at noise gain 2; W = k · peak.",
+    "A divider (top R1, bottom R2 from the named E-series, ratio k = R2/(Rs + R1 + R2), loaded by the source resistance Rs, as large as possible but not above window/peak) feeds a follower buffer; a comparator decides the sign; a two-op-amp precision rectifier folds the negative half up; an optional diode/capacitor charge pump makes V− = −(V_d − 2V_F) + I/(f·C_fly) + ripple/2, ripple = I/(f·C_res) (switched-capacitor resistance 1/(f·C)). Buffer in = out = ±W; rectifier stage 1 (inverting half-wave) out −(W + Vf) … +Vf at noise gain 2, stage 2 (inverting summer, inputs R and R/2, feedback R) out 0 … W at noise gain 4, both inputs at 0 V, stage 1 reaching the output at weight 2; W = k · peak.",
   reading: "volts = sign · (code + 0.5) · (V_ref/2^N)/k",
   fields: [
     "supply.positive_v",
@@ -485,7 +661,8 @@ export const rectifyAndSign = defineTopology({
       id: "rectifier",
       name: "Rectifier",
       field: "Rectifier op amp",
-      label: "precision rectifier, two per design (output −Vf … W + Vf, noise gain 2)",
+      label:
+        "two-op-amp precision rectifier (a dual, or two singles): stage 1 a half-wave inverter (output −(W + Vf) … +Vf, noise gain 2), stage 2 a summer (output 0 … W, noise gain 4); both inputs at 0 V",
       wants: "amplify",
       rules: [...OP_AMP_STAGE_RULES, zeroCrossing],
       count: 2,

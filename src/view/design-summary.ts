@@ -60,7 +60,10 @@ export function summarizeDesign(entry: DesignEntry): DesignSummary {
       ? "Every role has a fit and every BOM part fits."
       : `${capitalize(problems.join("; ") || "the design does not hold")}.`
   } ${budget}${compared}`;
-  return { ok: true, holds, verdict: result.verdict.state, line, roles };
+  // A budget that leaves out an unrated part's noise is at best marginal: say why (SPEC §11.9).
+  const unrated = result.verdict.reasons.find((r) => r.kind === "budget-unrated");
+  const tail = unrated ? ` ${capitalize(unrated.text)}.` : "";
+  return { ok: true, holds, verdict: result.verdict.state, line: `${line}${tail}`, roles };
 }
 
 function list(items: string[]): string {

@@ -9,6 +9,7 @@ import { escapeHtml } from "./escape.ts";
 import { renderRailDiagram } from "./rail-diagram.ts";
 import { partUrl, rulesUrl } from "./links.ts";
 import { fitsPiece, rejectionsPiece, type RoleListInput } from "./role-lists.ts";
+import { STATE_WORDS, type DesignState } from "../core/engine/design-verdict.ts";
 import { summarizeDesign } from "./design-summary.ts";
 import { derivedGroups } from "./design-view.ts";
 import { roleName } from "./roles.ts";
@@ -115,14 +116,16 @@ export function renderRole(role: RoleResult, result: DesignResult, view: ViewSta
 }
 
 /** One sentence on whether the design holds (SPEC §10's exit-0 condition), worded as on the design pages. */
-export function holdsLine(result: DesignResult): { holds: boolean; line: string } {
+export function holdsLine(result: DesignResult): { holds: boolean; state: DesignState; line: string } {
   const summary = summarizeDesign({
     id: result.design.id,
     file: "",
     design: result.design,
     evaluation: { ok: true, result },
   });
-  return { holds: summary.ok && summary.holds, line: summary.line };
+  // The try page's status says the design's state in the words of every other surface (SPEC §11.11).
+  const state = summary.verdict;
+  return { holds: state === "holds", state, line: `Design ${STATE_WORDS[state]}. ${summary.line}` };
 }
 
 /** Everything below the form for one evaluation, in page order; blocks with nothing to say are left out. */

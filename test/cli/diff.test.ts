@@ -75,7 +75,7 @@ describe("diff between two data folders", () => {
     expect(code).toBe(0);
   });
 
-  it("says so in words, the role's best part included", async () => {
+  it("says so in words, part by part", async () => {
     const after = copyDataFolder();
     setCell(after, "op-amps.csv", "oa-cmos-rrio-1m", "out_pos_headroom_v", "1.6");
     const { code, out } = await run("diff", "data", after);

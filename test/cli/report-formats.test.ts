@@ -145,8 +145,8 @@ describe("check --format markdown", () => {
       "# railsieve check
       ## bridge-10v-5v-adc: marginal
       | Role | Part | Verdict | Fits | Deciding finding |
-      | \`buffer\` | \`oa-cmos-rro-limited\` | pass | 11 of 35 | closest: \`output-swing\` (pass): needs the output to reach −2.50 V; with V− = −3.16 V it reaches −3.15 V (0.01 V headroom): 0.65 V to spare |
-      Accuracy budget: worst case 108 mV, root-sum-square 38.7 mV, required 100 mV: marginal (largest term: ADC reference tolerance)."
+      | \`buffer\` | \`oa-cmos-rro-limited\` | pass | 11 of 35 | closest: \`output-swing\` (pass): needs the output to reach −2.50 V; with V− = −3.44 V it reaches −3.42 V (0.01 V headroom): 0.92 V to spare |
+      Accuracy budget: worst case 164 mV, root-sum-square 52.4 mV, required 100 mV: marginal (largest term: rectifier stage 1 offset and bias current, through the summer's weight 2 (oa-cmos-rrio-150m-12v))."
     `);
   });
 });

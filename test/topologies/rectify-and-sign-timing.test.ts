@@ -26,12 +26,13 @@ const catalogue = catalogueFromParts([
   opAmp({ id: "oa-1m-fast-slew", gbw_mhz: 1, slew_v_per_us: 0.5, ...RRIO }),
   opAmp({ id: "oa-1m-slow-slew", gbw_mhz: 1, slew_v_per_us: 0.2, ...RRIO }),
   comparator({ supply_max_v: 12 }),
-  // 0.600 V at 1 mA, the current the 2.5 V window drives through 2.5 kΩ: 2·Vf = 1.2 V.
+  // 0.600 V at 1 mA, the current the 2.5 V window drives through stage 1's loads at 7.5 kΩ
+  // (its feedback R and the summer's R/2 input: 3·W/R, SPEC §11.2): 2·Vf = 1.2 V.
   diode({ id: "d-0v6", vf_1ma_v: 0.6, vf_10ma_v: 0.7, ir_na: 0.001 }),
 ]);
 const at1k = design({
   signal: { max_frequency_hz: 1000 },
-  front_end: { rectifier_load_ohm: 2500 },
+  front_end: { rectifier_load_ohm: 7500 },
   temperature: { min_c: 25, max_c: 25 },
 });
 

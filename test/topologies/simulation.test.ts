@@ -56,14 +56,14 @@ describe("every demo design and topology, simulated", () => {
     expect(table).toMatchInlineSnapshot(`
       [
         "audio-1v5-20k rectify-and-sign: not simulated",
-        "audio-1v5-20k offset-to-mid-rail: BEYOND 167 / 23",
-        "bridge-10v-5v-adc rectify-and-sign: BEYOND 537 / 108",
-        "bus-48v rectify-and-sign: within 188 / 432",
-        "hub-generator-15v rectify-and-sign: BEYOND 1516 / 193",
-        "probe-0v5-10meg rectify-and-sign: within 1 / 5",
-        "thermoelectric-3v-on-3v3 rectify-and-sign: within 16 / 35",
-        "vibration-2v-split-2v5 rectify-and-sign: within 21 / 65",
-        "wave-flume-6v-npn rectify-and-sign: within 10 / 45",
+        "audio-1v5-20k offset-to-mid-rail: BEYOND 167 / 19",
+        "bridge-10v-5v-adc rectify-and-sign: within 45 / 164",
+        "bus-48v rectify-and-sign: within 189 / 815",
+        "hub-generator-15v rectify-and-sign: within 76 / 301",
+        "probe-0v5-10meg rectify-and-sign: within 1 / 8",
+        "thermoelectric-3v-on-3v3 rectify-and-sign: within 5 / 29",
+        "vibration-2v-split-2v5 rectify-and-sign: within 21 / 325",
+        "wave-flume-6v-npn rectify-and-sign: within 10 / 57",
       ]
     `);
   });

@@ -97,9 +97,10 @@ describe("derivedGroups", () => {
   });
 
   it("names the diodes in the signal chain with their drop at the operating current", () => {
-    // Vf(250 µA) = 0.7 + 0.1 · log10(0.25) = 0.640 V; Vf(500 µA) = 0.670 V (SPEC §4 two-point model).
+    // The rectifier diode carries 3·W/R = 3 · 2.5 V / 10 kΩ = 750 µA (its feedback R and the summer's R/2 input,
+    // SPEC §11.2): Vf(750 µA) = 0.7 + 0.1 · log10(0.75) = 0.688 V; Vf(500 µA) = 0.670 V (SPEC §4 two-point model).
     expect(rows(derivedGroups(evaluate(design())), "Diode drops in the signal chain")).toEqual({
-      "Rectifier diode drop": "d-07, 0.64 V at 250 µA",
+      "Rectifier diode drop": "d-07, 0.69 V at 750 µA",
       "Clamp diode drop": "d-07, 0.67 V at 500 µA",
     });
   });

@@ -294,27 +294,27 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
     }
   });
 
-  it("files the split-supply class under the rule that decides it: 8.16 V across the rails, rated from 10 V, 1.84 V short", () => {
+  it("files the split-supply class under the rule that decides it: 8.44 V across the rails, rated from 10 V, 1.56 V short", () => {
     // SPEC §6: Vf(0.5 mA) of d-si-switch = 0.70 + 0.16·log10(0.5) = 0.652 V; V− = −(5 − 1.304)
-    // + 0.5 mA/(980 Hz · 1 µF) + ½ · 0.5 mA/(980 Hz · 10 µF) = −3.161 V, so the op amp sees
-    // 5 + 3.161 = 8.16 V against its 10 V minimum: supply-range, the first rule it fails, 1.84 V short.
+    // + 0.5 mA/(980 Hz · 2.2 µF) + ½ · 0.5 mA/(980 Hz · 10 µF) = −3.439 V, so the op amp sees
+    // 5 + 3.439 = 8.44 V against its 10 V minimum: supply-range, the first rule it fails, 1.56 V short.
     const supply = rejectionGroups(role("buffer")).find((g) => g.rule === "supply-range");
     expect(supply?.parts.map((p) => p.result.part.id)).toContain("oa-bip-split-gp");
-    expect(section("buffer")).toContain("oa-bip-split-gp</a> 1.84 V short</li>");
+    expect(section("buffer")).toContain("oa-bip-split-gp</a> 1.56 V short</li>");
     expect(partEntry("oa-bip-split-gp")).toContain(
-      "needs a supply of 8.16 V (V+ 5.00 V, V− −3.16 V); rated 10.00 V to 36.00 V: 1.84 V short",
+      "needs a supply of 8.44 V (V+ 5.00 V, V− −3.44 V); rated 10.00 V to 36.00 V: 1.56 V short",
     );
   });
 
   it("shows the derived values: pumped rail with droop and ripple, divider, window, ADC step", () => {
     const html = page(`${BASE}designs/bridge-10v-5v-adc/`);
-    // Droop 0.5 mA/(980 Hz · 1 µF) = 510 mV, ripple 0.5 mA/(980 Hz · 10 µF) = 51.0 mV; E24 47k/16k behind the
+    // Droop 0.5 mA/(980 Hz · 2.2 µF) = 232 mV, ripple 0.5 mA/(980 Hz · 10 µF) = 51.0 mV; E24 47k/16k behind the
     // 1 kΩ source: 16/(1 + 47 + 16) = 0.25 (SPEC §11.1, loaded ratio);
     // ADC step (5 V / 1024) / 0.25 = 19.5 mV (IEEE Std 1241-2010, Q = V_FS / 2^N).
     for (const text of [
-      "<dd>510 mV</dd>",
+      "<dd>232 mV</dd>",
       "<dd>51 mV</dd>",
-      "<dd>−3.16 V</dd>",
+      "<dd>−3.44 V</dd>",
       "<dd>47 kΩ</dd>",
       "<dd>16 kΩ</dd>",
       "<dd>1 kΩ</dd>",

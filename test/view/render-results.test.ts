@@ -100,12 +100,13 @@ describe("renderResults with hostile catalogue text", () => {
 
 describe("holdsLine", () => {
   // Worded by the design pages' summary (src/view/design-summary.ts); here, that the page states the right case.
+  // SPEC §11.11: the state includes the budget; a worst case over the requirement with the RSS inside is marginal.
   it.each([
     [
       "the default design",
       {},
-      true,
-      /^Every role has a fit and every BOM part fits\. Accuracy budget is marginal \(worst case 108 mV against 100 mV\)\.$/,
+      false,
+      /^Design marginal\. Every role has a fit and every BOM part fits\. Accuracy budget is marginal \(worst case 164 mV against 100 mV\)\.$/,
     ],
     [
       "a BOM buffer that cannot reach the window",
@@ -117,7 +118,7 @@ describe("holdsLine", () => {
       "a 12 V rail that lifts every comparator output above the logic supply and puts the pumped supply beyond the fast rectifiers' 12 V",
       { "supply.positive_v": "12" },
       false,
-      /^No part fits the rectifier and sign comparator\. Accuracy budget incomplete: no part for the rectifier and sign comparator\.$/,
+      /^Design fails\. No part fits the rectifier and sign comparator\. Accuracy budget incomplete: no part for the rectifier and sign comparator\.$/,
     ],
   ] as const)("%s", (_label, change, holds, line) => {
     const result = holdsLine(evaluate({ ...DEFAULT_DRAFT, ...change }));

@@ -1,6 +1,7 @@
 // The design a visitor starts from without a link: the worked example of
 // SPEC §5 (±10 V into a 5 V, 10-bit ADC with a pumped negative rail), with a
-// 0.5 mA pump load and 0.1 % resistors so that every role has a fit at first.
+// 0.5 mA pump load, a 2.2 µF flying capacitor (the rectifier's stage 1 swings to −(W + Vf)) and 0.1 %
+// resistors (0.01 % for the rectifier) so that every role has a fit at first.
 import { draftFromInput } from "./draft.ts";
 import type { Draft } from "./fields.ts";
 
@@ -14,7 +15,7 @@ export const DEFAULT_INPUT = {
       kind: "charge-pump",
       drive_v: 5,
       frequency_hz: 980,
-      flying_cap_f: 1e-6,
+      flying_cap_f: 2.2e-6,
       reservoir_cap_f: 10e-6,
       load_a: 0.0005,
     },
@@ -24,6 +25,8 @@ export const DEFAULT_INPUT = {
     window_v: 2.5,
     divider_total_ohm: 100000,
     resistor_tolerance: 0.001,
+    // The rectifier's five resistors as a 0.01 % matched network: its half-waves' gains then agree (SPEC §11.2).
+    rectifier_tolerance: 0.0001,
     series: "E24",
     rectifier_load_ohm: 10000,
   },
@@ -31,7 +34,8 @@ export const DEFAULT_INPUT = {
   logic: { vdd_v: 5, vih_v: 3.0, vil_v: 1.5, level_shift: "diode-clamp", pull_down_ohm: 10000 },
   accuracy: { required_v: 0.1 },
   temperature: { min_c: 0, max_c: 50 },
-  policy: {},
+  // Each rectifier stage's offset takes 30 % of the requirement: the summer carries 4·Vos (SPEC §11.2).
+  policy: { offset_share: 0.3 },
 } as const;
 
 /** Values for fields the default design does not use, shown when a visitor switches to them. */

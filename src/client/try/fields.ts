@@ -149,6 +149,11 @@ export const FIELDS: readonly Field[] = [
   num("signal.peak_v", "signal", "Peak signal (±)", "V"),
   num("signal.max_frequency_hz", "signal", "Highest signal frequency", "Hz"),
   num("signal.source_ohm", "signal", "Source resistance", "Ω"),
+  num("signal.source_tolerance", "signal", "Source resistance tolerance", "fraction", {
+    ...plain,
+    optional: true,
+    hint: "optional; 0.1 = 10 %, a budget term of its own",
+  }),
 
   num("front_end.window_v", "front_end", "Window at the ADC (±)", "V"),
   num("front_end.divider_total_ohm", "front_end", "Divider total resistance", "Ω"),
@@ -161,11 +166,28 @@ export const FIELDS: readonly Field[] = [
     choices: SERIES.map((s) => ({ value: s, label: s })),
   },
   num("front_end.rectifier_load_ohm", "front_end", "Rectifier resistors", "Ω"),
+  num("front_end.rectifier_tolerance", "front_end", "Rectifier resistor tolerance", "fraction", {
+    ...plain,
+    optional: true,
+    hint: "optional; empty is the resistor tolerance; 0.0001 = 0.01 %",
+  }),
   num("front_end.sign_series_ohm", "front_end", "Series resistor into the sign input", "Ω", { optional: true }),
 
   num("adc.bits", "adc", "ADC resolution", "bits", plain),
   num("adc.reference_v", "adc", "ADC reference", "V"),
   num("adc.reference_tolerance", "adc", "Reference tolerance", "fraction", { ...plain, hint: "0.002 = 0.2 %" }),
+  num("adc.reference_tempco_ppm_per_c", "adc", "Reference tempco", "ppm/°C", {
+    ...plain,
+    optional: true,
+    hint: "optional; over the temperature range",
+  }),
+  num("adc.offset_lsb", "adc", "ADC offset", "LSB", { ...plain, optional: true, hint: "optional" }),
+  num("adc.gain_error", "adc", "ADC gain error", "fraction", {
+    ...plain,
+    optional: true,
+    hint: "optional; 0.001 = 0.1 %",
+  }),
+  num("adc.inl_lsb", "adc", "ADC integral non-linearity", "LSB", { ...plain, optional: true, hint: "optional" }),
 
   num("logic.vdd_v", "logic", "Logic supply VDD", "V"),
   num("logic.vih_v", "logic", "Logic-high threshold V_IH", "V"),

@@ -268,10 +268,11 @@ class TryPage {
     page.downloadDesign.disabled = false;
     page.downloadCsv.disabled = false;
     page.caution.hidden = !needsCaution(result.design);
-    const { holds, line } = holdsLine(result);
+    const { state, line } = holdsLine(result);
     say(page.status, `${line} ${this.catalogue.parts.length} parts checked.`);
-    page.status.classList.toggle("try-holds", holds);
-    page.status.classList.toggle("try-fails", !holds);
+    page.status.classList.toggle("try-holds", state === "holds");
+    page.status.classList.toggle("try-marginal", state === "marginal");
+    page.status.classList.toggle("try-fails", state === "fails");
     if (writeUrl === "after-frame") this.queueAddress();
     else if (writeUrl !== "none") this.writeUrl(writeUrl === "replace");
     if (this.simulating) this.queueSimulation(SIMULATION_PAUSE_MS);

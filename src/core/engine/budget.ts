@@ -70,6 +70,8 @@ export type NoiseFigure = {
   sinad_db: number;
   /** (SINAD − 1.76)/6.02 (IEEE Std 1241-2010). */
   enob: number;
+  /** Parts whose noise is not rated and is therefore left out: the figure is a lower bound. */
+  unrated: string[];
 };
 
 export type Budget = BudgetSum & {

@@ -2,7 +2,8 @@
 // BOM part fits and the budget's worst case fits the requirement; it is
 // marginal when only the budget's root-sum-square fits; it fails otherwise,
 // including when the budget could not be summed because a role has no part
-// (an unknown error is never a pass). Every surface (CLI text, JSON, CSV,
+// (an unknown error is never a pass). A budget that leaves out an unrated
+// part's noise is at best marginal. Every surface (CLI text, JSON, CSV,
 // markdown, JUnit, exit code, home page, design pages, try page) reads this.
 import { formatSI } from "../units.ts";
 import { isFitResult } from "./evaluate-part.ts";
@@ -18,6 +19,7 @@ export const VERDICT_REASONS = [
   "budget-incomplete",
   "budget-fails",
   "budget-marginal",
+  "budget-unrated",
 ] as const;
 export type VerdictReasonKind = (typeof VERDICT_REASONS)[number];
 
@@ -89,7 +91,14 @@ export function designVerdict(roles: readonly RoleResult[], budget: Budget): Des
       text: `accuracy budget marginal: only the root-sum-square fits (${budgetSums(b)})`,
     });
   }
-  const failing = reasons.some((r) => r.kind !== "budget-marginal");
+  // A noise figure missing a part's rating may understate the budget: never a plain "holds".
+  if (b.noise && b.noise.unrated.length > 0 && b.missing.length === 0) {
+    reasons.push({
+      kind: "budget-unrated",
+      text: `accuracy budget leaves out the noise of ${b.noise.unrated.join(", ")} (no noise_nv_rthz rating)`,
+    });
+  }
+  const failing = reasons.some((r) => r.kind !== "budget-marginal" && r.kind !== "budget-unrated");
   return { state: failing ? "fails" : reasons.length > 0 ? "marginal" : "holds", reasons };
 }
 

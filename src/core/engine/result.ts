@@ -25,7 +25,7 @@ export type RoleResult = {
   /** The role's first (often only) stage. */
   stage: Stage;
   /** Every stage the role's part serves; `id` is set when there are several. */
-  stages: readonly { id?: string; stage: Stage }[];
+  stages: readonly { id?: string; stage: Stage; rules: readonly string[] }[];
   /** Parts of this role on the board (default 1). */
   count?: number;
   /** Ranked on first read. */

@@ -57,7 +57,11 @@ export function runRole(
     label: spec.label,
     rules: [...new Set(checks.flatMap((c) => c.rules.map((r) => r.id)))],
     stage: first.ctx.stage,
-    stages: checks.map((c) => ({ ...(c.stage !== undefined ? { id: c.stage } : {}), stage: c.ctx.stage })),
+    stages: checks.map((c) => ({
+      ...(c.stage !== undefined ? { id: c.stage } : {}),
+      stage: c.ctx.stage,
+      rules: c.rules.map((r) => r.id),
+    })),
     ...(spec.count !== undefined ? { count: spec.count } : {}),
     // Ranked, and made into result objects, only when read.
     get fits() {

@@ -51,6 +51,13 @@ export type OpAmpStage = {
   slew_amplitude_v: number;
   /** Extra output jump at each zero crossing (two diode drops), when the stage has one. */
   zero_crossing_v?: number;
+  /**
+   * Peak of the signal driving the stage at its crossing, volts; the larger end of `input` when absent.
+   * An inverting stage's input pins sit at 0 V while the signal reaches it through its input resistor.
+   */
+  zero_crossing_signal_v?: number;
+  /** Input-referred peak the crossing error scales with; `bandwidth_peak_v` when absent. */
+  zero_crossing_peak_v?: number;
   /** Feedback factor β while the diodes are off (SPEC §11.3); ½ (the inverting half-wave stage) when absent. */
   zero_crossing_beta?: number;
   /**

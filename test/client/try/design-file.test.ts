@@ -52,7 +52,8 @@ describe("designFileFromDraft", () => {
     const set = JSON.parse(
       fileOf({ ...DEFAULT_DRAFT, "policy.allow_unrated": "false", "policy.sign_share": "0.4" }).text,
     ) as { policy: object };
-    expect(set.policy).toEqual({ sign_share: 0.4, allow_unrated: false });
+    // The default design sets offset_share 0.3 itself (its rectifier's summer carries 4·Vos, SPEC §11.2).
+    expect(set.policy).toEqual({ offset_share: 0.3, sign_share: 0.4, allow_unrated: false });
   });
 
   it("writes numbers in SI units, whatever prefix was typed, and only the fields of the chosen rail kind", () => {
@@ -81,7 +82,7 @@ describe("designFileFromDraft", () => {
             "kind": "charge-pump",
             "drive_v": 5,
             "frequency_hz": 980,
-            "flying_cap_f": 0.000001,
+            "flying_cap_f": 0.0000022,
             "reservoir_cap_f": 0.00001,
             "load_a": 0.0005
           }
@@ -96,7 +97,8 @@ describe("designFileFromDraft", () => {
           "divider_total_ohm": 100000,
           "resistor_tolerance": 0.001,
           "series": "E24",
-          "rectifier_load_ohm": 10000
+          "rectifier_load_ohm": 10000,
+          "rectifier_tolerance": 0.0001
         },
         "adc": {
           "bits": 10,
@@ -117,7 +119,9 @@ describe("designFileFromDraft", () => {
           "min_c": 0,
           "max_c": 50
         },
-        "policy": {}
+        "policy": {
+          "offset_share": 0.3
+        }
       }
       "
     `);

@@ -69,6 +69,7 @@ describe("draftFromInput / rawFromDraft", () => {
 
   it("turns the allow_unrated choice into a boolean and leaves other text for the schema to judge", () => {
     expect(rawFromDraft({ ...DEFAULT_DRAFT, "policy.allow_unrated": "true" })["policy"]).toEqual({
+      offset_share: "0.3",
       allow_unrated: true,
     });
     // The wording is the schema's (pinned in test/core); here only that it lands on the field.
@@ -92,11 +93,13 @@ describe("draftFromInput / rawFromDraft", () => {
   });
 
   it("lists only the policy keys the visitor set", () => {
+    // The default design sets offset_share itself (SPEC §11.2: the summer carries 4·Vos).
     expect(policyOverrides({ ...DEFAULT_DRAFT, "policy.sign_share": "0.3", "policy.allow_unrated": "false" })).toEqual([
+      "offset_share",
       "sign_share",
       "allow_unrated",
     ]);
-    expect(policyOverrides(DEFAULT_DRAFT)).toEqual([]);
+    expect(policyOverrides(DEFAULT_DRAFT)).toEqual(["offset_share"]);
   });
 
   it("has one field for every leaf of the SPEC §5 design (and no other)", () => {
@@ -110,6 +113,12 @@ describe("draftFromInput / rawFromDraft", () => {
       "supply.negative.v",
       "supply.negative.drive_ohm", // optional (issue 16)
       "logic.pin_min_v", // optional (issue 16)
+      // The optional budget fields of issue 15 (SPEC §11.1, §11.2, §11.10).
+      "signal.source_tolerance",
+      "adc.reference_tempco_ppm_per_c",
+      "adc.offset_lsb",
+      "adc.gain_error",
+      "adc.inl_lsb",
       "policy.headroom_margin_v",
       "policy.marginal_fraction",
       "policy.offset_share",

@@ -59,7 +59,12 @@ describe("fixedTerms for rectify-and-sign", () => {
   });
 
   it("has no divider term when no divider is needed (k = 1)", () => {
-    expect(fixedTerms(d, 1, null).map((t) => t.name)).toEqual(["quantization", "reference"]);
+    expect(fixedTerms(d, 1, null).map((t) => t.name)).toEqual([
+      "quantization",
+      "reference",
+      "rectifier-ratio-common",
+      "rectifier-ratio-difference",
+    ]);
   });
 });
 
@@ -89,5 +94,72 @@ describe("buildBudget", () => {
     expect(b.calibrated.worst_case_v).toBeCloseTo(0.01, 12);
     expect(b.calibrated.verdict).toBe("pass");
     expect(b.dominant).toBe("reference");
+  });
+});
+
+describe("GUM combination (JCGM 100:2008)", () => {
+  it("±0.1 %, ±0.1 %, ±0.2 % limits read as rectangular: u_c = 0.14142 %, U (k = 2) = 0.28284 % (REFERENCES.md)", () => {
+    // A rectangular ±a has u = a/√3 (GUM 4.3.7); the budget's noise term is entered at k = 2 (GUM §6).
+    const u = Math.hypot(0.1 / Math.sqrt(3), 0.1 / Math.sqrt(3), 0.2 / Math.sqrt(3));
+    expect(u).toBeCloseTo(0.14142, 5);
+    expect(2 * u).toBeCloseTo(0.28284, 5);
+    const s = sumTerms([term("a", 0.001), term("b", 0.001), term("c", 0.002)], 1);
+    expect(s.rss_v / Math.sqrt(3)).toBeCloseTo(0.0014142, 7);
+  });
+});
+
+describe("every term carries a formula with its numbers and what removes it (SPEC §11.10)", () => {
+  const d = designFor({
+    id: "terms-case",
+    signal: { peak_v: 10, source_tolerance: 0.1 },
+    adc: { reference_tempco_ppm_per_c: 50, offset_lsb: 2, gain_error: 0.001, inl_lsb: 1 },
+    temperature: { min_c: 0, max_c: 50 },
+  });
+  const terms = Object.fromEntries(
+    fixedTerms(d, 13 / 53, {
+      top_ohm: 39000,
+      bottom_ohm: 13000,
+      ratio: 13 / 53,
+      total_ohm: 52000,
+      source_ohm: 1000,
+    }).map((t) => [t.name, t]),
+  );
+
+  it.each([
+    ["quantization", "none"],
+    ["reference", "one-point"],
+    ["reference-tempco", "none"],
+    ["adc-offset", "two-point"],
+    ["adc-gain", "one-point"],
+    ["adc-inl", "none"],
+    ["divider-ratio", "one-point"],
+    ["source-resistance", "one-point"],
+    ["rectifier-ratio-common", "one-point"],
+    ["rectifier-ratio-difference", "none"],
+  ] as const)("%s is removed by %s", (name, by) => {
+    expect(terms[name]?.removed_by).toBe(by);
+    expect(terms[name]?.calibrates_out).toBe(by === "one-point");
+    expect(terms[name]?.formula).toMatch(/\d/);
+  });
+
+  it("quantization with the fixture 39k/13k behind 1 kΩ: 0.5 × (5 V/2^10) / (13/53) = 9.953 mV (IEEE 1241, Q = V_ref/2^N)", () => {
+    expect(terms.quantization?.v).toBeCloseTo((0.5 * (5 / 1024)) / (13 / 53), 12);
+    expect(terms.quantization?.formula).toMatchInlineSnapshot(
+      `"0.5 × Q / gain; Q = 5 V / 2^10 = 4.883 mV; 0.5 × 4.883 mV / 0.24528 = 9.953 mV"`,
+    );
+  });
+
+  it("the tempco term: 50 ppm/°C × 25 °C × 10 V = 12.5 mV", () => {
+    expect(terms["reference-tempco"]?.v).toBeCloseTo(0.0125, 12);
+  });
+
+  it("converter offset and INL are steps through k; gain error scales the peak", () => {
+    expect(terms["adc-offset"]?.v).toBeCloseTo((2 * (5 / 1024)) / (13 / 53), 12);
+    expect(terms["adc-inl"]?.v).toBeCloseTo(5 / 1024 / (13 / 53), 12);
+    expect(terms["adc-gain"]?.v).toBeCloseTo(0.01, 12);
+  });
+
+  it("the source term: 1 kΩ ± 10 % behind 39k/13k moves k by +0.189 % / −0.188 % (53/52.9 − 1), × 10 V", () => {
+    expect(terms["source-resistance"]?.v).toBeCloseTo((53 / 52.9 - 1) * 10, 12);
   });
 });

@@ -129,7 +129,9 @@ describe("evaluateDesign: roles and ranking", () => {
       const all = [...rr.fits, ...rr.rejected];
       const candidates = CATALOGUE.parts.filter((p) => rr.kinds.includes(p.kind));
       expect(all.map((p) => p.part.id).sort()).toEqual(candidates.map((p) => p.id).sort());
-      for (const p of all) expect(p.findings.map((f) => f.rule)).toEqual(rr.rules);
+      // A role of several stages (the rectifier, SPEC §11.2) has each stage's rules in turn.
+      const rules = rr.stages.flatMap((st) => st.rules);
+      for (const p of all) expect(p.findings.map((f) => f.rule)).toEqual(rules);
       for (const p of rr.rejected)
         expect(p.findings.some((f) => f.verdict === "fail" || f.verdict === "unrated")).toBe(true);
     }
@@ -239,22 +241,40 @@ describe("evaluateDesign: derived values", () => {
     ).toEqual({ positive_v: 12, negative_v: -12 });
   });
 
-  it("evaluates the rectifier diode at W / rectifier_load_ohm and the clamp diode at V+ / pull_down_ohm", () => {
+  it("evaluates the rectifier diode at 3·W / rectifier_load_ohm and the clamp diode at V+ / pull_down_ohm", () => {
+    // Stage 1's diode feeds its feedback R and the summer's R/2 input, both at virtual ground: W/R + 2W/R (SPEC §11.2).
     const r = evaluate({ bom: { "rectifier-diode": "d-si", "clamp-diode": "d-si" } });
     const si = { vf_1ma_v: 0.65, vf_10ma_v: 0.75 };
     expect(r.derived.rectifier_diode).toMatchObject({
       id: "d-si",
-      current_a: 2.5e-4,
-      vf_v: forwardVoltage(si, 2.5e-4),
+      current_a: 7.5e-4,
+      vf_v: forwardVoltage(si, 7.5e-4),
       fits: true,
     });
     expect(r.derived.clamp_diode).toMatchObject({ id: "d-si", current_a: 5e-4, vf_v: forwardVoltage(si, 5e-4) });
-    const rect = role(r, "rectifier").stage;
-    expect(rect).toMatchObject({
-      output: { low: -forwardVoltage(si, 2.5e-4), high: 2.5 + forwardVoltage(si, 2.5e-4) },
-      noise_gain: 2,
-      zero_crossing_v: 2 * forwardVoltage(si, 2.5e-4),
+    // SPEC §11.2 (Franco, Sedra & Smith, precision rectifiers): stage 1, an inverting half-wave stage whose op
+    // amp output swings −(W + Vf) … +Vf at noise gain 2; stage 2, a summer with inputs R and R/2 and feedback R,
+    // noise gain 1 + R/(R ‖ R/2) = 4, output 0 … W; both inverting, so both inputs sit at 0 V.
+    const vf = forwardVoltage(si, 7.5e-4);
+    const [one, two] = role(r, "rectifier").stages;
+    expect(one).toMatchObject({
+      id: "stage-1",
+      stage: {
+        input: { low: 0, high: 0 },
+        output: { low: -(2.5 + vf), high: vf },
+        noise_gain: 2,
+        vos_multiplier: 2,
+        // Its output reaches the converter at the summer's weight 2: k / 2 (k = 1 here, no divider).
+        output_per_input: r.derived.ratio / 2,
+        zero_crossing_v: 2 * vf,
+      },
     });
+    expect(one?.rules).toContain("zero-crossing");
+    expect(two).toMatchObject({
+      id: "stage-2",
+      stage: { input: { low: 0, high: 0 }, output: { low: 0, high: 2.5 }, noise_gain: 4, vos_multiplier: 4 },
+    });
+    expect(two?.rules).not.toContain("zero-crossing");
   });
 });
 
