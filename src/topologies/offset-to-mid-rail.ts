@@ -114,14 +114,27 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
 }
 
 const ROLE_TERMS: readonly RoleTerm[] = [
-  { name: "level-shift-offset", label: "level shifter offset and bias current", role: "level-shift", rule: offset.id },
+  // Both offsets move the mid point the reading is taken from: true offsets, which a two-point calibration removes.
+  {
+    name: "level-shift-offset",
+    label: "level shifter offset and bias current",
+    role: "level-shift",
+    rule: offset.id,
+    removed_by: "two-point",
+  },
   {
     name: "level-shift-bandwidth",
     label: "level shifter gain error at f max",
     role: "level-shift",
     rule: bandwidth.id,
   },
-  { name: "reference-buffer-offset", label: "reference buffer offset", role: "reference-buffer", rule: offset.id },
+  {
+    name: "reference-buffer-offset",
+    label: "reference buffer offset",
+    role: "reference-buffer",
+    rule: offset.id,
+    removed_by: "two-point",
+  },
 ];
 
 /** Derived values as the design page, the try page and the CLI print them: the network, its gain and offset, no divider and no buffer. */

@@ -544,7 +544,7 @@ export function dividerTerms(design: Design, d: Divider): BudgetTerm[] {
 
 const pct = (x: number) => `${Number((x * 100).toPrecision(4))} %`;
 
-function conversion(design: Design, k: number): Conversion {
+export function conversion(design: Design, k: number): Conversion {
   const perCode = design.adc.reference_v / 2 ** design.adc.bits / k;
   const positiveIsHigh = design.logic.level_shift !== "npn-inverter";
   return {

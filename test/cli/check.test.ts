@@ -1,10 +1,12 @@
 // `railsieve check` and `explain` on the demo data and small temporary designs.
-import { mkdtempSync, readdirSync, writeFileSync } from "node:fs";
+import { mkdtempSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { engine } from "../../src/engine.ts";
 import { loadCatalogue } from "../../src/node/load-data.ts";
+import { loadedRatio } from "../../src/core/math/divider.ts";
+import { conversion } from "../../src/topologies/rectify-and-sign.ts";
 import { designInput } from "../helpers/designs.ts";
 import { run } from "./run.ts";
 
@@ -196,5 +198,69 @@ describe("check --topology offset-to-mid-rail (issue 14)", () => {
     const [r1, r2, r3] = [ohms("R1 from the signal"), ohms("R2 from the ADC reference"), ohms("R3 to ground")];
     const g = 1 / (1 / r1 + 1 / r2 + 1 / r3);
     expect(Number(/Gain a = [^:]*: ([\d.]+)/.exec(head)?.[1])).toBeCloseTo(g / r1, 4);
+  });
+});
+
+describe("the design verdict includes the budget (SPEC §11.11, issue 15 acceptance)", () => {
+  const bridge = JSON.parse(readFileSync("data/designs/bridge-10v-5v-adc.json", "utf8")) as Record<string, unknown>;
+  const withRequirement = (volts: number) => {
+    const dir = mkdtempSync(join(tmpdir(), "railsieve-verdict-"));
+    const file = join(dir, "bridge.json");
+    writeFileSync(file, JSON.stringify({ ...bridge, accuracy: { required_v: volts } }));
+    return file;
+  };
+
+  it("a worst case over the requirement with the RSS inside is marginal: exit 0, and 1 with --strict", async () => {
+    const { code, out } = await run("check", "data/designs/bridge-10v-5v-adc.json", "--format", "json");
+    const d = JSON.parse(out).designs[0];
+    expect(d.budget.worst_case_v).toBeGreaterThan(d.budget.required_v);
+    expect(d.budget.rss_v).toBeLessThanOrEqual(d.budget.required_v);
+    expect(d.verdict.state).toBe("marginal");
+    expect(d.verdict.reasons.map((r: { kind: string }) => r.kind)).toEqual(["budget-marginal"]);
+    expect(code).toBe(0);
+    expect((await run("check", "data/designs/bridge-10v-5v-adc.json", "--strict")).code).toBe(1);
+  });
+
+  it("one whose RSS exceeds the requirement fails and exits 1 (issue 15: 10 mV asked of the bridge)", async () => {
+    const { code, out } = await run("check", withRequirement(0.01), "--format", "json");
+    const d = JSON.parse(out).designs[0];
+    expect(d.verdict.state).toBe("fails");
+    // The roles' shares of 10 mV leave some roles without a fit too; the budget's own reason is there.
+    expect(d.verdict.reasons.map((r: { kind: string }) => r.kind)).toContain(
+      d.budget.missing.length > 0 ? "budget-incomplete" : "budget-fails",
+    );
+    expect(code).toBe(1);
+    const text = await run("check", withRequirement(0.01));
+    expect(text.code).toBe(1);
+  });
+
+  it("says the state in the same word in text, CSV and markdown", async () => {
+    const file = "data/designs/bridge-10v-5v-adc.json";
+    expect((await run("check", file, "--format", "csv")).out).toContain(
+      "bridge-10v-5v-adc,rectify-and-sign,design,budget-marginal,,,,verdict,marginal,",
+    );
+    expect((await run("check", file, "--format", "markdown")).out).toContain("## bridge-10v-5v-adc: marginal");
+  });
+
+  it("reports every term with its formula and what removes it", async () => {
+    const { out } = await run("check", "data/designs/bridge-10v-5v-adc.json", "--format", "json");
+    const terms = JSON.parse(out).designs[0].budget.terms as { formula: string; removed_by: string }[];
+    expect(terms.length).toBeGreaterThan(10);
+    for (const t of terms) {
+      expect(t.formula).toMatch(/\d/);
+      expect(["one-point", "two-point", "none"]).toContain(t.removed_by);
+    }
+  });
+});
+
+describe("the loaded ratio in the firmware constant (SPEC §11.1, issue 15 acceptance on a 39k/13k/1 kΩ fixture)", () => {
+  it("k = 13/53 = 0.24528 gives (5 V / 2^10) / k = 0.019907 V per code (IEEE 1241 convention Q = V_ref/2^N)", () => {
+    // The demo bridge now picks 47k/16k (0.25 loaded); the issue's hand check used 39k/13k behind 1 kΩ.
+    const k = loadedRatio(39000, 13000, 1000);
+    expect(k).toBeCloseTo(0.24528, 5);
+    const c = conversion(JSON.parse(readFileSync("data/designs/bridge-10v-5v-adc.json", "utf8")), k);
+    expect(c.volts_per_code).toBeCloseTo(0.019907, 6);
+    // With V_ref/(2^N − 1), as some texts write it, the constant would be 0.019926: this project states Q = V_ref/2^N.
+    expect(5 / 1023 / k).toBeCloseTo(0.019926, 6);
   });
 });
