@@ -5,7 +5,10 @@
 // do not grow with the catalogue; test/bench/bare-loop.test.ts checks that this
 // loop and the engine agree on every margin.
 import type { Catalogue, Part } from "../src/core/catalogue.ts";
-import type { Rails, Stage } from "../src/core/rule-kit/index.ts";
+import type { PumpOnRail, Rails, Stage } from "../src/core/rule-kit/index.ts";
+import type { Derived } from "../src/core/engine/result.ts";
+import { railAt } from "../src/core/math/pump-rail.ts";
+import { ROLES_ON_RAIL } from "../src/topologies/rectify-and-sign-pump.ts";
 import { forwardVoltage } from "../src/core/math/diode.ts";
 import { CLAMP_CURRENT_MAX_A, CLAMP_SAFE_V } from "../src/core/math/input-difference.ts";
 import {
@@ -81,6 +84,8 @@ const COLUMNS = [
   "vdiff_max_v",
   "overload_recovery_us",
   "iout_max_ma",
+  "iq_ma",
+  "channels",
 ] as const;
 
 export function tableOf(parts: readonly Part[]): Table {
@@ -133,7 +138,7 @@ export function planOf(design: Design, catalogue: Catalogue): RolePlan[] {
       role: r.role,
       rules: r.stages.flatMap((s) => s.rules) as Benchmarked[],
       checks: r.stages.map((s) => ({ stage: s.stage, rules: s.rules as Benchmarked[] })),
-      rails: e.result.derived.rails,
+      rails: railsOfRole(design, catalogue, e.result.derived, r.role),
       design,
       // The engine's candidates for the role: the kinds that can fill it, in file order.
       table: table(
@@ -142,6 +147,30 @@ export function planOf(design: Design, catalogue: Catalogue): RolePlan[] {
       ),
     }));
   });
+}
+
+/** The rails a role was checked on: with the pumped rail's other load, as rectify-and-sign hands it (SPEC §11.5). */
+function railsOfRole(design: Design, catalogue: Catalogue, derived: Derived, role: string): Rails {
+  const n = derived.negative;
+  const neg = design.supply.negative;
+  const on = ROLES_ON_RAIL.find((x) => x.role === role);
+  if (n.kind !== "charge-pump" || neg.kind !== "charge-pump" || !n.load || !on) return derived.rails;
+  const diode = catalogue.byId.get(n.diode.id);
+  if (!diode || diode.kind !== "diode") return derived.rails;
+  const own = n.load.draws.filter((d) => d.role === role).reduce((a, d) => a + d.amps, 0);
+  const pump: PumpOnRail = {
+    drive_v: neg.drive_v,
+    frequency_hz: neg.frequency_hz,
+    flying_cap_f: neg.flying_cap_f,
+    reservoir_cap_f: neg.reservoir_cap_f,
+    drive_ohm: neg.drive_ohm ?? 0,
+    diode,
+    cold_c: design.temperature.min_c,
+    other_a: n.load.total_a - own,
+    channels: on.channels,
+    assumed_a: own,
+  };
+  return { ...derived.rails, pump };
 }
 
 /** What the loop leaves per role: each part's worst severity (0 pass … 3 fail), least relative margin, and every margin. */
@@ -499,6 +528,25 @@ function runRule(
       }
       return;
     }
+    case "pump-load": {
+      const p = rails.pump;
+      if (p === undefined) {
+        for (let i = 0; i < n; i++) put(i, 0, 0, PASS);
+        return;
+      }
+      const depth = -N;
+      for (let i = 0; i < n; i++) {
+        const per = Math.max(1, c.channels[i] as number);
+        const total = p.other_a + Math.ceil(p.channels / per) * per * (c.iq_ma[i] as number) * 1e-3;
+        const rail = railAt(p, total);
+        if (total >= rail.collapse_a || rail.worst_v >= 0) put(i, -depth, depth, FAIL);
+        else {
+          const shallower = rail.worst_v - N;
+          put(i, -shallower, depth, shallower > 1e-12 ? MARGINAL : PASS);
+        }
+      }
+      return;
+    }
     case "differential-input": {
       const d = Math.max(Math.abs(range.low), Math.abs(range.high));
       const series = design.front_end.sign_series_ohm;
@@ -651,6 +699,7 @@ const CASES: Record<Benchmarked, true> = {
   recovery: true,
   leakage: true,
   "clamp-leakage": true,
+  "pump-load": true,
   "forward-current": true,
   "differential-input": true,
   "overload-recovery": true,

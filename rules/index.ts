@@ -18,6 +18,7 @@ import { outputSwing } from "./output-swing.ts";
 import { overloadRecoveryRule } from "./overload-recovery.ts";
 import { phaseReversal } from "./phase-reversal.ts";
 import { propagationDelay } from "./propagation-delay.ts";
+import { pumpLoad } from "./pump-load.ts";
 import { recovery } from "./recovery.ts";
 import { reverseVoltage } from "./reverse-voltage.ts";
 import { riseTime } from "./rise-time.ts";
@@ -47,6 +48,7 @@ export const RULES = [
   lateSign,
   outputCurrent,
   baseEmitterReverse,
+  pumpLoad,
   reverseVoltage,
   recovery,
   leakage,

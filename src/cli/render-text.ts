@@ -1,5 +1,6 @@
 // Human-readable report of one evaluated design, readable at 80 columns.
 import type { PartResult } from "../core/engine/evaluate-part.ts";
+import { STATE_WORDS } from "../core/engine/design-verdict.ts";
 import type { DesignResult, RoleResult } from "../core/engine/result.ts";
 import type { Verdict } from "../core/engine/types.ts";
 import { formatSI } from "../core/units.ts";
@@ -72,6 +73,17 @@ function renderSingle(result: DesignResult, io: Pick<Io, "color">): string {
   out.push("");
   if (problems.length === 0) out.push(paint(io, "pass", "  result: every role has a fit and every BOM part fits"));
   else for (const p of problems) out.push(paint(io, "fail", wrap(`result: ${p}`, WIDTH, "    ", "  ")));
+  // The design's verdict (SPEC §11.11), roles, BOM and budget together, in the words of every other surface.
+  const v = result.verdict;
+  const why = v.reasons.filter((r) => r.kind.startsWith("budget-")).map((r) => r.text);
+  const look: Verdict = v.state === "holds" ? "pass" : v.state === "marginal" ? "marginal" : "fail";
+  out.push(
+    paint(
+      io,
+      look,
+      wrap(`design: ${STATE_WORDS[v.state]}${why.length > 0 ? `: ${why.join("; ")}` : ""}`, WIDTH, "    ", "  "),
+    ),
+  );
   return `${out.join("\n")}\n`;
 }
 

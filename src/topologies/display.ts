@@ -15,10 +15,23 @@ export function railRows(derived: Derived): DisplayRow[] {
     rows.push(
       {
         label: "Pump diode",
-        value: `${n.diode.id}, ${formatVolts(n.diode.vf_v)} at ${si(n.diode.current_a, "A")}`,
+        value: `${n.diode.id}, ${formatVolts(n.diode.vf_v)} at ${si(n.diode.current_a, "A")}${n.vf_c === undefined ? "" : ` and ${n.vf_c} °C (the cold end)`}`,
         partId: n.diode.id,
         role: "pump-diode",
       },
+      ...(n.load
+        ? [
+            {
+              label: "Load on V− = stated + each part's supply current",
+              value: [
+                `${si(n.load.stated_a, "A")} stated`,
+                ...n.load.draws.map((d) => `${d.channels} × ${si(d.per_channel_a, "A")} (${d.part}, ${d.role})`),
+              ]
+                .join(" + ")
+                .concat(` = ${si(n.load.total_a, "A")}`),
+            },
+          ]
+        : []),
       { label: "V− with no load = −(drive − 2·Vf)", value: signed(n.no_load_v) },
       { label: "Droop = I / (f · C_flying)", value: si(n.droop_v, "V") },
       { label: "V− at load, average", value: signed(n.dc_v) },

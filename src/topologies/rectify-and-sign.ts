@@ -36,12 +36,11 @@ import type { OpAmp } from "../core/schemas/op-amp.ts";
 import { isFitResult } from "../core/engine/evaluate-part.ts";
 import type { Derived, DiodeUse, DisplayGroup, DisplayRow, RoleResult } from "../core/engine/result.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
-import { pumpRail } from "../core/math/charge-pump.ts";
 import { forwardVoltage } from "../core/math/diode.ts";
 import { endPhrase, forwardVoltageAt } from "../core/math/temperature.ts";
 import { loadedRatioDeviation, sourceRatioDeviation, type Divider } from "../core/math/divider.ts";
 import { NPN_VBE_ON_V } from "../core/math/npn-inverter.ts";
-import type { DiodeStage, OpAmpStage, Rails, SignStage } from "../core/rule-kit/index.ts";
+import type { DiodeStage, OpAmpStage, PumpOnRail, Rails, SignStage } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
 import type { Diode } from "../core/schemas/diode.ts";
 import { formatSI, formatVolts } from "../core/units.ts";
@@ -51,6 +50,10 @@ import { converterTerms } from "./converter-terms.ts";
 import { frontEnd } from "./front-end.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
 import { TIMING_ROLE_TERMS } from "./rectify-and-sign-timing.ts";
+import { loadSum, settlePumpedRail } from "./rectify-and-sign-pump.ts";
+import { pumpLoad as pumpLoadRule } from "../../rules/pump-load.ts";
+import { conductionCurrent, pumpLoad, type SupplyDraw } from "../core/math/pump-load.ts";
+import { railAt } from "../core/math/pump-rail.ts";
 
 /** Used only when the catalogue has no diode at all, so rails can still be computed. */
 const NOMINAL_SILICON: Diode = {
@@ -71,7 +74,11 @@ const NOMINAL_SILICON: Diode = {
   if_max_ma: 200,
 };
 
-function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation {
+function evaluate(run: TopologyRun): TopologyEvaluation {
+  return settlePumpedRail(run, evaluateWith);
+}
+
+function evaluateWith({ design, catalogue, role }: TopologyRun, draws: readonly SupplyDraw[]): TopologyEvaluation {
   const fe = frontEnd(design);
   if (!fe.ok) return fe;
   const { divider, ratio: k, window_v: W, thevenin_ohm, target_ratio } = fe;
@@ -102,6 +109,7 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
   });
 
   // 1. The negative rail, with the pump diode settled first.
+  let pumpOn: ((role: string, channels: number) => PumpOnRail) | undefined;
   let negative_v: number;
   // The deepest the rail goes (no load, or the ripple's trough), for reverse stress on the NPN's base.
   let deepest_v: number;
@@ -126,8 +134,27 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     };
     const r = role("pump-diode", stage, noRails);
     const diode = settleDiode(r, "pump diode");
-    const pumpDiode = use(diode, neg.load_a, r);
-    const rail = pumpRail(neg, pumpDiode.vf_v);
+    // The rail carries the stated load and every part on it (SPEC §11.5); diode drops at their
+    // conduction current and the cold end, where they are largest.
+    const load = pumpLoad(neg.load_a, draws);
+    const onRail = {
+      drive_v: neg.drive_v,
+      frequency_hz: neg.frequency_hz,
+      flying_cap_f: neg.flying_cap_f,
+      reservoir_cap_f: neg.reservoir_cap_f,
+      drive_ohm: neg.drive_ohm ?? 0,
+      diode,
+      cold_c: design.temperature.min_c,
+    };
+    const pumpDiode: DiodeUse = {
+      ...use(diode, conductionCurrent(load.total_a), r),
+      vf_v: forwardVoltageAt(diode, conductionCurrent(load.total_a), design.temperature.min_c),
+    };
+    const rail = railAt(onRail, load.total_a);
+    pumpOn = (roleId, channels) => {
+      const own = draws.filter((d) => d.role === roleId).reduce((a, d) => a + d.amps, 0);
+      return { ...onRail, other_a: load.total_a - own, channels, assumed_a: own };
+    };
     // A drive below two diode drops makes no rail at any load; "collapse current 0 A" would hide why.
     if (rail.collapse_a === 0) {
       return {
@@ -140,13 +167,13 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
         ],
       };
     }
-    if (neg.load_a >= rail.collapse_a) {
+    if (load.total_a >= rail.collapse_a) {
       return {
         ok: false,
         problems: [
           {
             path: "supply.negative.load_a",
-            message: `load is at or past the pump's collapse current (got ${formatSI(neg.load_a, "A")}, expected less than (drive − 2·Vf)·f·C = ${formatSI(rail.collapse_a, "A")} with diode ${diode.id}); raise the frequency or the flying capacitor, or lower the load`,
+            message: `load is at or past the pump's collapse current (got ${loadSum(load)}, expected less than (drive − 2·Vf)·f·C = ${formatSI(rail.collapse_a, "A")} with diode ${diode.id}); raise the frequency or the flying capacitor, or lower the load`,
           },
         ],
       };
@@ -160,7 +187,7 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     }
     negative_v = rail.worst_v;
     deepest_v = Math.min(rail.no_load_v, rail.dc_v - rail.ripple_v / 2);
-    negativeDerived = { kind: "charge-pump", diode: pumpDiode, ...rail };
+    negativeDerived = { kind: "charge-pump", diode: pumpDiode, ...rail, load, vf_c: design.temperature.min_c };
   } else if (neg.kind === "fixed") {
     negative_v = neg.v;
     deepest_v = neg.v;
@@ -312,16 +339,18 @@ function evaluate({ design, catalogue, role }: TopologyRun): TopologyEvaluation 
     ...(baseClamp ? { base_clamp: baseClamp } : {}),
     deepest_negative_v: deepest_v,
   };
-  const bufferRole = role("buffer", buffer, rails);
+  // Each amplifier role sees the rail with its own pick's draw, and what another candidate's would do (pump-load).
+  const railsOf = (id: string, channels: number): Rails => (pumpOn ? { ...rails, pump: pumpOn(id, channels) } : rails);
+  const bufferRole = role("buffer", buffer, railsOf("buffer", 1));
   const rectifierRole = role(
     "rectifier",
     [
-      { id: RECTIFIER_STAGES[0], stage: halfWave, rules: [...OP_AMP_STAGE_RULES, zeroCrossing] },
+      { id: RECTIFIER_STAGES[0], stage: halfWave, rules: [...OP_AMP_STAGE_RULES, zeroCrossing, pumpLoadRule] },
       { id: RECTIFIER_STAGES[1], stage: summer, rules: OP_AMP_STAGE_RULES },
     ],
-    rails,
+    railsOf("rectifier", 2),
   );
-  role("sign", sign, rails);
+  role("sign", sign, railsOf("sign", 1));
 
   const noise = chainNoise(design, catalogue, k, thevenin_ohm, bufferRole, rectifierRole);
   if (noise.unrated.length > 0) {
@@ -655,7 +684,7 @@ export const rectifyAndSign = defineTopology({
       field: "Buffer op amp",
       label: "follower after the divider (in = out = ±W)",
       wants: "amplify",
-      rules: OP_AMP_STAGE_RULES,
+      rules: [...OP_AMP_STAGE_RULES, pumpLoadRule],
     },
     {
       id: "rectifier",
@@ -664,7 +693,7 @@ export const rectifyAndSign = defineTopology({
       label:
         "two-op-amp precision rectifier (a dual, or two singles): stage 1 a half-wave inverter (output −(W + Vf) … +Vf, noise gain 2), stage 2 a summer (output 0 … W, noise gain 4); both inputs at 0 V",
       wants: "amplify",
-      rules: [...OP_AMP_STAGE_RULES, zeroCrossing],
+      rules: [...OP_AMP_STAGE_RULES, zeroCrossing, pumpLoadRule],
       count: 2,
     },
     {
@@ -686,6 +715,7 @@ export const rectifyAndSign = defineTopology({
         lateSign,
         outputCurrent,
         baseEmitterReverse,
+        pumpLoadRule,
       ],
     },
     {

@@ -236,6 +236,9 @@ describe("the design verdict includes the budget (SPEC §11.11, issue 15 accepta
 
   it("says the state in the same word in text, CSV and markdown", async () => {
     const file = "data/designs/bridge-10v-5v-adc.json";
+    expect((await run("check", file)).out.replace(/\n\s+/g, " ")).toContain(
+      "design: marginal: accuracy budget marginal: only the root-sum-square fits (worst case 164 mV, root-sum-square 52.4 mV, required 100 mV)",
+    );
     expect((await run("check", file, "--format", "csv")).out).toContain(
       "bridge-10v-5v-adc,rectify-and-sign,design,budget-marginal,,,,verdict,marginal,",
     );

@@ -396,9 +396,9 @@ describe("messages, pinned", () => {
       result: rectifier: no part fits; every candidate fails zero-crossing, e.g. oa-bip-gs-dual: dead 4.45 µs at each crossing, gain-bandwidth, then slew: the open-loop output ramps as an integrator for 760 ns (114 mV) until its rate reaches the 0.300 V/µs slew rate, then slews the rest of the 1.22 V (two diode drops at 0 °C (the cold end)): 4.45 µs in all; the reading is off by up to 839 mV (2π·f·peak·t: the output would go below 0 V, where the converter reads 0); the limit is 12.5 mV (timing share 25 % of the required accuracy): 826 mV short
       result: rectifier: BOM part oa-jfet-prec does not fit (zero-crossing: dead 1.24 µs at each crossing, gain-bandwidth limited: the open-loop output ramps as an integrator and crosses 1.22 V (two diode drops at 0 °C (the cold end)) in 1.24 µs, before its rate reaches the 20.0 V/µs slew rate (slew alone would take 61.1 ns); the reading is off by up to 234 mV (2π·f·peak·t: the output would go below 0 V, where the converter reads 0); the limit is 12.5 mV (timing share 25 % of the required accuracy): 222 mV short)
       result: sign: no part fits; every candidate fails propagation-delay, e.g. cmp-cmos-pp-rr: switches 450 ns after its input passes the threshold by 100 mV (assumed, common practice: tpd_overdrive_mv is empty, so at best marginal), which the 126 kV/s ramp takes 796 ns to reach: 1.25 µs in all; the sign may be late by 33.2 ns (timing share 25 % of the required accuracy at 2·2π·f·peak·t): 1.21 µs short
-      result: buffer: no part fits; every candidate fails output-swing, e.g. oa-bip-gs-dual: needs the output to reach −4.98 V; with V− = −3.16 V it reaches only −3.14 V (0.02 V headroom): 1.83 V short
-      result: rectifier: no part fits; every candidate fails output-swing, e.g. oa-bip-gs-dual: needs the output to reach −5.70 V; with V− = −3.16 V it reaches only −3.14 V (0.02 V headroom): 2.56 V short
-      result: sign: no part fits; every candidate fails input-common-mode, e.g. cmp-cmos-pp-rr: needs inputs from −4.98 V to +4.98 V; with V− = −3.16 V and V+ = +5.00 V it accepts −3.36 V to +5.20 V: 1.61 V short"
+      result: buffer: no part fits; every candidate fails output-swing, e.g. oa-bip-gs-dual: needs the output to reach −4.98 V; with V− = −2.96 V it reaches only −2.94 V (0.02 V headroom): 2.03 V short
+      result: rectifier: no part fits; every candidate fails output-swing, e.g. oa-bip-gs-dual: needs the output to reach −5.70 V; with V− = −2.96 V it reaches only −2.94 V (0.02 V headroom): 2.76 V short
+      result: sign: no part fits; every candidate fails input-common-mode, e.g. cmp-cmos-pp-rr: needs inputs from −4.98 V to +4.98 V; with V− = −2.96 V and V+ = +5.00 V it accepts −3.16 V to +5.20 V: 1.81 V short"
     `);
   });
   it("design-window-wider-than-rails", async () => {
@@ -501,22 +501,22 @@ describe("messages, pinned", () => {
   it("pump-drive-below-two-diode-drops", async () => {
     expect(await seen("pump-drive-below-two-diode-drops")).toMatchInlineSnapshot(`
       "validate: exit 2
-      .fixtures/bad/pump-drive-below-two-diode-drops/designs/bridge-10v-5v-adc.json: supply.negative.drive_v: pump drive cannot make a negative rail (got 1.20 V, expected more than two diode drops, 2 × 0.65 V = 1.30 V with diode d-si-switch); raise the drive or use a diode with a lower forward voltage
+      .fixtures/bad/pump-drive-below-two-diode-drops/designs/bridge-10v-5v-adc.json: supply.negative.drive_v: pump drive cannot make a negative rail (got 1.20 V, expected more than two diode drops, 2 × 0.75 V = 1.50 V with diode d-si-switch); raise the drive or use a diode with a lower forward voltage
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      .fixtures/bad/pump-drive-below-two-diode-drops/designs/bridge-10v-5v-adc.json: supply.negative.drive_v: pump drive cannot make a negative rail (got 1.20 V, expected more than two diode drops, 2 × 0.65 V = 1.30 V with diode d-si-switch); raise the drive or use a diode with a lower forward voltage
+      .fixtures/bad/pump-drive-below-two-diode-drops/designs/bridge-10v-5v-adc.json: supply.negative.drive_v: pump drive cannot make a negative rail (got 1.20 V, expected more than two diode drops, 2 × 0.75 V = 1.50 V with diode d-si-switch); raise the drive or use a diode with a lower forward voltage
       railsieve: 1 problem found; nothing was checked"
     `);
   });
   it("pump-load-past-collapse", async () => {
     expect(await seen("pump-load-past-collapse")).toMatchInlineSnapshot(`
       "validate: exit 2
-      .fixtures/bad/pump-load-past-collapse/designs/bridge-10v-5v-adc.json: supply.negative.load_a: load is at or past the pump's collapse current (got 5.00 mA, expected less than (drive − 2·Vf)·f·C = 3.31 mA with diode d-si-switch); raise the frequency or the flying capacitor, or lower the load
+      .fixtures/bad/pump-load-past-collapse/designs/bridge-10v-5v-adc.json: supply.negative.load_a: load is at or past the pump's collapse current (got 5.00 mA stated = 5.00 mA, expected less than (drive − 2·Vf)·f·C = 3.12 mA with diode d-si-switch); raise the frequency or the flying capacitor, or lower the load
       railsieve: 1 problem found; the data is not valid
 
       check: exit 2
-      .fixtures/bad/pump-load-past-collapse/designs/bridge-10v-5v-adc.json: supply.negative.load_a: load is at or past the pump's collapse current (got 5.00 mA, expected less than (drive − 2·Vf)·f·C = 3.31 mA with diode d-si-switch); raise the frequency or the flying capacitor, or lower the load
+      .fixtures/bad/pump-load-past-collapse/designs/bridge-10v-5v-adc.json: supply.negative.load_a: load is at or past the pump's collapse current (got 5.00 mA stated = 5.00 mA, expected less than (drive − 2·Vf)·f·C = 3.12 mA with diode d-si-switch); raise the frequency or the flying capacitor, or lower the load
       railsieve: 1 problem found; nothing was checked"
     `);
   });

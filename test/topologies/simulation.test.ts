@@ -61,7 +61,7 @@ describe("every demo design and topology, simulated", () => {
         "bus-48v rectify-and-sign: within 189 / 815",
         "hub-generator-15v rectify-and-sign: within 76 / 301",
         "probe-0v5-10meg rectify-and-sign: within 1 / 8",
-        "thermoelectric-3v-on-3v3 rectify-and-sign: within 5 / 29",
+        "thermoelectric-3v-on-3v3 rectify-and-sign: within 7 / 34",
         "vibration-2v-split-2v5 rectify-and-sign: within 21 / 325",
         "wave-flume-6v-npn rectify-and-sign: within 10 / 57",
       ]

@@ -78,14 +78,23 @@ describe("derivedGroups", () => {
       reservoir_cap_f: 10e-6,
       load_a: 0.001,
     };
-    const result = evaluate(design({ supply: { negative: pump }, bom: { "pump-diode": "d-07" } }));
+    // Amplifiers drawing nothing and a flat 0.7 V diode, so the rail carries exactly the stated 1 mA (SPEC §11.5).
+    const idle = catalogueFromParts([
+      opAmp({ iq_ma: 0 }),
+      comparator({ supply_max_v: 36, iq_ma: 0 }),
+      diode({ id: "d-07", vf_1ma_v: 0.7, vf_10ma_v: 0.7 }),
+    ]);
+    const e = evaluateDesign(design({ supply: { negative: pump }, bom: { "pump-diode": "d-07" } }), idle);
+    if (!e.ok) throw new Error(JSON.stringify(e.problems));
+    const result = e.result;
     const rails = derivedGroups(result).find((g) => g.title === "Rails");
     // No load −(5 − 1.4) = −3.60 V; droop 1 mA / (980 Hz · 1 µF) = 1.020 V; loaded −2.580 V;
     // ripple 1 mA / (980 Hz · 10 µF) = 102 mV p-p; worst −2.580 + 0.051 = −2.529 V;
     // collapse (5 − 1.4) · 980 · 1 µF = 3.528 mA.
     expect(rails?.rows.map((r) => [r.label, r.value])).toEqual([
       ["V+", "+5.00 V"],
-      ["Pump diode", "d-07, 0.70 V at 1 mA"],
+      ["Pump diode", "d-07, 0.70 V at 2 mA and 25 °C (the cold end)"],
+      ["Load on V− = stated + each part's supply current", "1 mA stated = 1 mA"],
       ["V− with no load = −(drive − 2·Vf)", "−3.60 V"],
       ["Droop = I / (f · C_flying)", "1.02 V"],
       ["V− at load, average", "−2.58 V"],

@@ -276,7 +276,8 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
       expect(buffer, g.rule).toMatch(head);
       const example = g.parts[0]!;
       expect(buffer, g.rule).toContain(`For example ${example.result.part.id}: ${escapeHtml(example.finding.reason)}`);
-      if (g.verdict === "fail")
+      // A yes/no rule (unit "", e.g. unity-gain-stable) has no number to show.
+      if (g.verdict === "fail" && example.finding.unit !== "")
         expect(example.finding.reason, g.rule).toMatch(
           /\d(\.\d+)? ?(V|mV|µV|nV|A|mA|µA|nA|pA|s|ms|µs|ns|Hz|kHz|MHz|V\/µs|mV\/µs|Ω|kΩ)\b/,
         );
@@ -294,27 +295,28 @@ describe("a demo design page: bridge-10v-5v-adc", () => {
     }
   });
 
-  it("files the split-supply class under the rule that decides it: 8.44 V across the rails, rated from 10 V, 1.56 V short", () => {
-    // SPEC §6: Vf(0.5 mA) of d-si-switch = 0.70 + 0.16·log10(0.5) = 0.652 V; V− = −(5 − 1.304)
-    // + 0.5 mA/(980 Hz · 2.2 µF) + ½ · 0.5 mA/(980 Hz · 10 µF) = −3.439 V, so the op amp sees
-    // 5 + 3.439 = 8.44 V against its 10 V minimum: supply-range, the first rule it fails, 1.56 V short.
+  it("files the split-supply class under the rule that decides it: 8.98 V across the rails, rated from 10 V, 1.02 V short", () => {
+    // SPEC §6, §11.5: the pump carries 0.5 mA stated + 2 × 0.2 mA + 2 × 3 mA + 0.6 mA = 7.5 mA; each Schottky
+    // conducts 15 mA: Vf = 0.32 + 0.10·log10(15) = 0.438 V at 25 °C, + 2 mV/°C × 25 °C at the 0 °C cold end
+    // = 0.488 V (Sedra & Smith); V− = −(5 − 0.975) + 7.5 mA/(20 kHz · 10 µF) + ½ · 7.5 mA/(20 kHz · 22 µF)
+    // = −3.979 V (Winder), so the op amp sees 8.98 V against its 10 V minimum: 1.02 V short.
     const supply = rejectionGroups(role("buffer")).find((g) => g.rule === "supply-range");
     expect(supply?.parts.map((p) => p.result.part.id)).toContain("oa-bip-split-gp");
-    expect(section("buffer")).toContain("oa-bip-split-gp</a> 1.56 V short</li>");
+    expect(section("buffer")).toContain("oa-bip-split-gp</a> 1.02 V short</li>");
     expect(partEntry("oa-bip-split-gp")).toContain(
-      "needs a supply of 8.44 V (V+ 5.00 V, V− −3.44 V); rated 10.00 V to 36.00 V: 1.56 V short",
+      "needs a supply of 8.98 V (V+ 5.00 V, V− −3.98 V); rated 10.00 V to 36.00 V: 1.02 V short",
     );
   });
 
   it("shows the derived values: pumped rail with droop and ripple, divider, window, ADC step", () => {
     const html = page(`${BASE}designs/bridge-10v-5v-adc/`);
-    // Droop 0.5 mA/(980 Hz · 2.2 µF) = 232 mV, ripple 0.5 mA/(980 Hz · 10 µF) = 51.0 mV; E24 47k/16k behind the
+    // Droop 7.5 mA/(20 kHz · 10 µF) = 37.5 mV, ripple 7.5 mA/(20 kHz · 22 µF) = 17.0 mV; E24 47k/16k behind the
     // 1 kΩ source: 16/(1 + 47 + 16) = 0.25 (SPEC §11.1, loaded ratio);
     // ADC step (5 V / 1024) / 0.25 = 19.5 mV (IEEE Std 1241-2010, Q = V_FS / 2^N).
     for (const text of [
-      "<dd>232 mV</dd>",
-      "<dd>51 mV</dd>",
-      "<dd>−3.44 V</dd>",
+      "<dd>37.5 mV</dd>",
+      "<dd>17 mV</dd>",
+      "<dd>−3.98 V</dd>",
       "<dd>47 kΩ</dd>",
       "<dd>16 kΩ</dd>",
       "<dd>1 kΩ</dd>",

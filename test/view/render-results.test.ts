@@ -106,7 +106,7 @@ describe("holdsLine", () => {
       "the default design",
       {},
       false,
-      /^Design marginal\. Every role has a fit and every BOM part fits\. Accuracy budget is marginal \(worst case 164 mV against 100 mV\)\.$/,
+      /^Design marginal\. Every role has a fit and every BOM part fits\. Accuracy budget is marginal \(worst case 178 mV against 100 mV\)\.$/,
     ],
     [
       "a BOM buffer that cannot reach the window",

@@ -1,6 +1,7 @@
 // The design a visitor starts from without a link: the worked example of
 // SPEC §5 (±10 V into a 5 V, 10-bit ADC with a pumped negative rail), with a
-// 0.5 mA pump load, a 2.2 µF flying capacitor (the rectifier's stage 1 swings to −(W + Vf)) and 0.1 %
+// 0.5 mA pump load besides the parts it carries, a stiff pump (20 kHz, 10 µF flying capacitor) and a 2.2 V
+// window (the rectifier's stage 1 swings to −(W + Vf) with every amplifier on the rail, SPEC §11.5), and 0.1 %
 // resistors (0.01 % for the rectifier) so that every role has a fit at first.
 import { draftFromInput } from "./draft.ts";
 import type { Draft } from "./fields.ts";
@@ -14,15 +15,15 @@ export const DEFAULT_INPUT = {
     negative: {
       kind: "charge-pump",
       drive_v: 5,
-      frequency_hz: 980,
-      flying_cap_f: 2.2e-6,
-      reservoir_cap_f: 10e-6,
+      frequency_hz: 20000,
+      flying_cap_f: 10e-6,
+      reservoir_cap_f: 22e-6,
       load_a: 0.0005,
     },
   },
   signal: { peak_v: 10, max_frequency_hz: 200, source_ohm: 1000 },
   front_end: {
-    window_v: 2.5,
+    window_v: 2.2,
     divider_total_ohm: 100000,
     resistor_tolerance: 0.001,
     // The rectifier's five resistors as a 0.01 % matched network: its half-waves' gains then agree (SPEC §11.2).

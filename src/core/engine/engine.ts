@@ -148,7 +148,10 @@ export function createEngine(topologies: readonly TopologyDef[]): Engine {
       if (!def) throw new Error(`role ${id} is not part of ${t.id}`);
       const candidates: readonly Part[] = catalogue.byCapability[def.wants];
       const result = runRole(scoped, id, specOf(def), stages, rails, candidates);
-      ran.push(result);
+      // A topology that settles its roles over several passes (a pumped rail carrying its parts) keeps the last.
+      const before = ran.findIndex((r) => r.role === id);
+      if (before >= 0) ran[before] = result;
+      else ran.push(result);
       return result;
     };
     const evaluated = t.evaluate({ design: scoped, catalogue, role });

@@ -8,6 +8,7 @@ import { isFitResult, type PartResult } from "./evaluate-part.ts";
 import type { Rails, Stage } from "../rule-kit/types.ts";
 import type { SimulationOutcome } from "../sim/report.ts";
 import type { Budget, Conversion } from "./budget.ts";
+import type { PumpLoad } from "../math/pump-load.ts";
 import type { DesignState, DesignVerdict } from "./verdict-shape.ts";
 
 /** A derived value the pages, the try page and the CLI print as it is. */
@@ -47,7 +48,17 @@ export type DiodeUse = { id: string; vf_v: number; current_a: number; fits: bool
 
 export type Derived = {
   rails: Rails;
-  negative: { kind: "ground" } | { kind: "fixed" } | ({ kind: "charge-pump"; diode: DiodeUse } & PumpRail);
+  negative:
+    | { kind: "ground" }
+    | { kind: "fixed" }
+    | ({
+        kind: "charge-pump";
+        diode: DiodeUse;
+        /** The rail's load as a sum: the stated load and each part's supply current (SPEC §11.5). */
+        load?: PumpLoad;
+        /** The temperature the pump diode's drop is taken at (the cold end). */
+        vf_c?: number;
+      } & PumpRail);
   /** Target ratio window/peak (1 when no divider is needed). */
   target_ratio: number;
   divider: Divider | null;

@@ -81,9 +81,9 @@ describe("designFileFromDraft", () => {
           "negative": {
             "kind": "charge-pump",
             "drive_v": 5,
-            "frequency_hz": 980,
-            "flying_cap_f": 0.0000022,
-            "reservoir_cap_f": 0.00001,
+            "frequency_hz": 20000,
+            "flying_cap_f": 0.00001,
+            "reservoir_cap_f": 0.000022,
             "load_a": 0.0005
           }
         },
@@ -93,7 +93,7 @@ describe("designFileFromDraft", () => {
           "source_ohm": 1000
         },
         "front_end": {
-          "window_v": 2.5,
+          "window_v": 2.2,
           "divider_total_ohm": 100000,
           "resistor_tolerance": 0.001,
           "series": "E24",

@@ -53,9 +53,9 @@ describe("draftFromInput / rawFromDraft", () => {
   it("keeps SI strings as the file writes them and writes plain numbers with a prefix", () => {
     const hub = DEMO_DESIGNS.find((d) => d.file === "hub-generator-15v.json");
     const draft = draftFromInput(hub?.raw, DEFAULT_DRAFT);
-    expect(draft["supply.negative.flying_cap_f"]).toBe("4.7u");
+    expect(draft["supply.negative.flying_cap_f"]).toBe("10u");
     expect(draft["front_end.divider_total_ohm"]).toBe("200k");
-    expect(draft["supply.negative.frequency_hz"]).toBe("4k");
+    expect(draft["supply.negative.frequency_hz"]).toBe("20k");
     expect(draft["policy.timing_fraction"]).toBe("0.02");
     expect(draft["policy.offset_share"]).toBe("");
   });

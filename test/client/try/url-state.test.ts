@@ -48,7 +48,7 @@ describe("encodeDraft → stateFromUrl round trip", () => {
   it("writes fields in file order and leaves out the ones the design does not use", () => {
     const query = encodeDraft(DEFAULT_DRAFT);
     expect(query.startsWith("id=new-design&title=")).toBe(true);
-    expect(query).toContain("&supply.negative.flying_cap_f=2.2u&");
+    expect(query).toContain("&supply.negative.flying_cap_f=10u&");
     expect(query).not.toContain("supply.negative.v=");
     // Only the policy key the default design sets itself (SPEC §11.2: the summer carries 4·Vos).
     expect(query.match(/policy\.[a-z_]+/g)).toEqual(["policy.offset_share"]);
