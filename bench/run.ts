@@ -8,7 +8,7 @@ import { join, resolve } from "node:path";
 import { loadDataSet } from "../src/node/load-data.ts";
 import { findChromium, INSTALL_HINT, launchChromium } from "../test/e2e/harness/chromium.ts";
 import { measureEngine, type EngineRow } from "./engine.ts";
-import { largeDataSet, timeBuild, writeDataFolder } from "./site-build.ts";
+import { htmlPages, largeDataSet, timeBuild, writeDataFolder } from "./site-build.ts";
 import { measureTryPage } from "./try-page.ts";
 import { benchResults, type BenchResults } from "./results.ts";
 import { measureSimulation } from "./simulate.ts";
@@ -77,8 +77,15 @@ try {
     `build ${LARGE_PARTS} parts + ${large.designs.length} designs: ${largeBuild.seconds.toFixed(1)} s, ${largeBuild.pages} pages (${(largeBuild.pages / largeBuild.seconds).toFixed(0)} pages/s)`,
   );
   const site = siteWeight(largeSite);
+  const largestOf = (folder: string) =>
+    Math.max(
+      0,
+      ...htmlPages(largeSite)
+        .filter((p) => p.path.startsWith(folder))
+        .map((p) => p.bytes),
+    );
   log(
-    `site ${LARGE_PARTS} parts + ${large.designs.length} designs: ${(site.total_bytes / 1e6).toFixed(1)} MB on disk, largest page ${(site.largest_page_bytes / 1e6).toFixed(2)} MB (${site.largest_page})`,
+    `site ${LARGE_PARTS} parts + ${large.designs.length} designs: ${(site.total_bytes / 1e6).toFixed(1)} MB on disk, largest page ${(site.largest_page_bytes / 1e6).toFixed(2)} MB (${site.largest_page}); largest design page ${(largestOf("designs/") / 1e6).toFixed(2)} MB, part page ${(largestOf("parts/") / 1e3).toFixed(0)} kB`,
   );
 
   const browser = await launchChromium(chromium);

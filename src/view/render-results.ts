@@ -16,6 +16,9 @@ import { roleName } from "./roles.ts";
 import { pieceHtml, type Container, type Piece } from "./pieces.ts";
 import { renderBudget, renderComparison } from "./render-budget.ts";
 
+/** Rejections the try page groups by rule at every keystroke; a longer list is grouped when opened (role-lists.ts). */
+export const GROUP_LIMIT = 300;
+
 /** Rows shown before a "show all" button: keeps each keystroke's DOM work bounded on a large catalogue. */
 export const FIRST_ROWS = 8;
 
@@ -94,6 +97,7 @@ export function rolePiece(role: RoleResult, result: DesignResult, view: ViewStat
     role,
     links: { partUrl, rulesUrl },
     dataAttributes: true,
+    groupLimit: GROUP_LIMIT,
     first: FIRST_ROWS,
     expanded: view.expanded,
   };

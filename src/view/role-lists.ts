@@ -31,6 +31,12 @@ export type RoleListInput = {
    * page shows only for comparison, whose parts each have their line on their own page.
    */
   headsOnly?: boolean;
+  /**
+   * Grouping needs every rejection's deciding finding: with more rejections than this, a collapsed list
+   * (the try page, at each keystroke) shows its first lines in the role's order, each with its rule, and
+   * groups them when opened.
+   */
+  groupLimit?: number;
 };
 
 /** The ranking of SPEC §7, said once where the fits are listed; each fit shows its own keys. */
@@ -220,6 +226,10 @@ function groupSummary(g: RejectionGroup, link: (rule: string) => string): string
 /** The rejections grouped by deciding rule, each part one line linking to its page. */
 export function rejectionsPiece(input: RoleListInput): Container {
   const key = `${input.role.role}:rejected`;
+  const total = input.role.rejected.length;
+  if (input.groupLimit !== undefined && total > input.groupLimit && !input.expanded?.has(key)) {
+    return firstRejections(input, key);
+  }
   const groups = rejectionGroups(input.role);
   const largest = Math.max(0, ...groups.map((g) => g.parts.length));
   const children: Piece[] = groups.map((g) => {
@@ -246,5 +256,36 @@ export function rejectionsPiece(input: RoleListInput): Container {
     open: `<div class="rejections">`,
     close: "</div>",
     children: [...children, ...(more ? [more] : [])],
+  };
+}
+
+/** A long role's first rejections in its order, each with the rule that decides it, before the list is opened. */
+function firstRejections(input: RoleListInput, key: string): Container {
+  const total = input.role.rejected.length;
+  const first = input.role.rejected.slice(0, input.first ?? total);
+  const lines: Piece[] = first.map((result) => {
+    const f = decidingFinding(result);
+    const why = f ? `${escapeHtml(f.rule)}: ${escapeHtml(shortLine(f))}` : "";
+    return {
+      key: result.part.id,
+      html: `<li${rowAttributes(result, input)}>${partLink(result, input)} ${why}</li>`,
+    };
+  });
+  const button = {
+    key: `${key}:more`,
+    html: `<button type="button" class="more" data-toggle="${escapeHtml(key)}" aria-expanded="false">${escapeHtml(`Show all ${total} rejected parts, grouped by the rule that decides them`)}</button>`,
+  };
+  return {
+    key: "rejected-first",
+    open: `<div class="rejections">`,
+    close: "</div>",
+    children: [
+      {
+        key: "head",
+        html: `<p class="reject-head"><strong>${total}</strong> parts rejected; the first ${first.length}, each with the rule that decides it:</p>`,
+      },
+      { key: "parts", open: `<ul class="part-lines">`, close: "</ul>", children: lines },
+      button,
+    ],
   };
 }

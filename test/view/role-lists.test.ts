@@ -98,6 +98,21 @@ describe("rejectionsPiece", () => {
   });
 });
 
+describe("a long list on the try page", () => {
+  it("shows the first rejections in the role's order with their rules until opened, then groups them", () => {
+    const role = buffer();
+    const closed = pieceHtml(rejectionsPiece(input(role, { first: 2, groupLimit: 2 })));
+    expect(closed).toContain("<strong>4</strong> parts rejected; the first 2, each with the rule that decides it:");
+    expect(closed.match(/<li>/g)?.length).toBe(2);
+    expect(closed).not.toContain('class="reject-group"');
+    expect(closed).toContain('aria-expanded="false">Show all 4 rejected parts, grouped by the rule that decides them');
+    const open = pieceHtml(
+      rejectionsPiece(input(role, { first: 2, groupLimit: 2, expanded: new Set(["buffer:rejected"]) })),
+    );
+    expect(open.match(/class="reject-group"/g)?.length).toBe(3);
+  });
+});
+
 describe("fitsPiece", () => {
   it("ranks the rows from the given place on, each with its own ranking keys", () => {
     const role = buffer();

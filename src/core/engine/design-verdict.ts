@@ -10,26 +10,17 @@ import { isFitResult } from "./evaluate-part.ts";
 import type { Budget } from "./budget.ts";
 import type { RoleResult } from "./result.ts";
 
-export const DESIGN_STATES = ["holds", "marginal", "fails"] as const;
-export type DesignState = (typeof DESIGN_STATES)[number];
-
-export const VERDICT_REASONS = [
-  "no-fit",
-  "bom-part-fails",
-  "budget-incomplete",
-  "budget-fails",
-  "budget-marginal",
-  "budget-unrated",
-] as const;
-export type VerdictReasonKind = (typeof VERDICT_REASONS)[number];
-
-/** One reason a design does not simply hold: data first (kind, role), then the sentence. */
-export type VerdictReason = { kind: VerdictReasonKind; role?: string; text: string };
-
-export type DesignVerdict = { state: DesignState; reasons: VerdictReason[] };
-
-/** The words every surface uses for a state. */
-export const STATE_WORDS: Record<DesignState, string> = { holds: "holds", marginal: "marginal", fails: "fails" };
+// The verdict's shape lives in verdict-shape.ts, which result.ts reads too (no import cycle).
+export {
+  DESIGN_STATES,
+  STATE_WORDS,
+  VERDICT_REASONS,
+  type DesignState,
+  type DesignVerdict,
+  type VerdictReason,
+  type VerdictReasonKind,
+} from "./verdict-shape.ts";
+import type { DesignVerdict, VerdictReason } from "./verdict-shape.ts";
 
 // A rule every candidate fails is the design's problem, not the parts': name it
 // first (a ground-only rail fails every op amp's negative output swing).

@@ -9,7 +9,7 @@ import type { Rails, Stage } from "../rule-kit/types.ts";
 import type { SimulationOutcome } from "../sim/report.ts";
 import type { Budget, Conversion } from "./budget.ts";
 import type { PumpLoad } from "../math/pump-load.ts";
-import type { DesignState, DesignVerdict } from "./design-verdict.ts";
+import type { DesignState, DesignVerdict } from "./verdict-shape.ts";
 
 /** A derived value the pages, the try page and the CLI print as it is. */
 export type DisplayRow = { label: string; value: string; partId?: string; role?: string };
