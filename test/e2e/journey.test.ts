@@ -159,8 +159,10 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
     const row = page.locator(`#try-role-buffer [data-part="${partId}"]`);
     if ((await row.count()) === 0) {
       // Long lists show their first rows; open the rest as a reader would.
-      for (const more of await page.locator('#try-role-buffer button.more[aria-expanded="false"]').all())
-        await more.click();
+      // Each click re-renders the list, so take the first closed button each time (a list's
+      // buttons are not stable handles across patches).
+      const closed = page.locator('#try-role-buffer button.more[aria-expanded="false"]');
+      for (let guard = 0; guard < 10 && (await closed.count()) > 0; guard++) await closed.first().click();
     }
     return row.getAttribute("data-verdict");
   };
