@@ -31,7 +31,7 @@ const NAMES: Readonly<Record<number, string>> = {
   0x2069: "pop directional isolate",
 };
 
-/** U+XXXX, with a name where one helps ("U+202E right-to-left override"). */
+/** A code point as "U+" and four hex digits, with a name where one helps ("U+202E right-to-left override"). */
 export function codePointName(code: number): string {
   const hex = `U+${code.toString(16).toUpperCase().padStart(4, "0")}`;
   const name = NAMES[code] ?? (code < 0x20 || (code >= 0x7f && code <= 0x9f) ? "control character" : undefined);
