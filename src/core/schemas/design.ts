@@ -238,6 +238,11 @@ function designObject(names: DesignNames) {
       sign_series_ohm: z.optional(si({ above: 0 })),
       /** Series resistor between the input connector and the front end: limits the fault current into clamps (issue 17). */
       protection_ohm: z.optional(si({ above: 0 })),
+      // Optional (issue 16, SPEC §11.1): the divider's resistors held as given, both or neither; the E-series search is skipped.
+      /** Top resistor R1, in series with the source. */
+      divider_r1_ohm: z.optional(si({ above: 0, max: 1e9 })),
+      /** Bottom resistor R2, across which the buffer reads. */
+      divider_r2_ohm: z.optional(si({ above: 0, max: 1e9 })),
     }),
     adc: z.strictObject({
       bits: si({ integer: true, min: 1, max: 32 }),
@@ -304,6 +309,15 @@ export function designSchemaFor(names: DesignNames) {
       issue(
         ["front_end", "window_v"],
         `window can never fit inside the positive rail (got ${d.front_end.window_v} V, expected less than supply.positive_v ${d.supply.positive_v} V)`,
+      );
+    }
+    const { divider_r1_ohm: r1, divider_r2_ohm: r2 } = d.front_end;
+    if ((r1 === undefined) !== (r2 === undefined)) {
+      const [missing, given, what] =
+        r1 === undefined ? ["divider_r1_ohm", "divider_r2_ohm", "top"] : ["divider_r2_ohm", "divider_r1_ohm", "bottom"];
+      issue(
+        ["front_end", missing],
+        `required value is missing (got nothing, expected the divider's ${what} resistor in ohms: front_end.${given} holds the divider, so hold both of its resistors or neither)`,
       );
     }
     for (const p of names.check?.(d) ?? []) issue(p.path, p.message);
