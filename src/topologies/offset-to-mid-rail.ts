@@ -36,6 +36,7 @@ import { converterTerms } from "./converter-terms.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { offsetToMidRailChain } from "./offset-to-mid-rail-sim.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
+import { noHeldDivider } from "./front-end.ts";
 
 const LEVEL_SHIFT_RULES = [...OP_AMP_STAGE_RULES, adcSettling, inputFault];
 
@@ -276,6 +277,7 @@ export const offsetToMidRail = defineTopology({
   ],
   roleTerms: ROLE_TERMS,
   appliesTo: singleEndedOnly,
+  checkDesign: (d) => noHeldDivider(d, "offset-to-mid-rail"),
   evaluate,
   simulation: offsetToMidRailChain,
 });

@@ -86,6 +86,7 @@ describe("issue 3 acceptance", () => {
       bottom_ohm: 16000,
       source_ohm: 1000,
       ratio: 0.25,
+      chosen_by: "search",
     });
   });
 
@@ -104,6 +105,28 @@ describe("issue 3 acceptance", () => {
 });
 
 describe("check, text and csv", () => {
+  it("says the divider is held when the design holds R1 and R2, and chosen by search when not", async () => {
+    const held = tempDesign((d) => {
+      d.id = "held-divider";
+      Object.assign(d.front_end as Record<string, unknown>, { divider_r1_ohm: "39k", divider_r2_ohm: "13k" });
+    });
+    const flat = (await run("check", held)).out.replace(/\n\s+/g, " ");
+    // SPEC §11.1: 13k/(1k + 39k + 13k) = 0.2453.
+    expect(flat).toContain("Top resistor R1 (held): 39 kΩ");
+    expect(flat).toContain("Ratio k = R2 / (Rs + R1 + R2): 0.2453");
+    expect(flat).toMatch(
+      /Why these resistors: held by the design \(front_end\.divider_r1_ohm and divider_r2_ohm\): used as given, no search/,
+    );
+    const searched = (
+      await run(
+        "check",
+        tempDesign(() => undefined),
+      )
+    ).out.replace(/\n\s+/g, " ");
+    expect(searched).toContain("Top resistor R1 (E24): 47 kΩ");
+    expect(searched).toContain("Why this total: chosen by search: the E24 pair");
+  });
+
   it("keeps text within 80 columns", async () => {
     const { out } = await run("check", "data/designs/bridge-10v-5v-adc.json");
     for (const line of out.split("\n")) expect(line.length, line).toBeLessThanOrEqual(80);
