@@ -1,9 +1,10 @@
 // Every editable field of a design file (SPEC §5), in file order. One table
 // serves the page's markup (built at build time), the URL codec and the form
 // script, so a field's name, label and unit are written once.
-import type { RoleDef } from "../../core/engine/topology.ts";
+import { ALL_TOPOLOGIES, roleApplies } from "../../core/engine/engine.ts";
 import { LEVEL_SHIFTS, POLICY_DEFAULTS, SERIES, SIGNAL_KINDS, type Role } from "../../core/schemas/design.ts";
-import { ALL_TOPOLOGIES, engine, roleApplies, TOPOLOGY_IDS } from "../../engine.ts";
+import { ROLE_META, TOPOLOGY_META, type RoleMeta } from "../../topologies/meta.ts";
+import { TOPOLOGY_IDS } from "./engine.ts";
 
 export type FieldGroup = { id: string; legend: string; hint?: string };
 
@@ -54,15 +55,18 @@ const isFixed = (d: Readonly<Record<string, string>>) => d["supply.negative.kind
 const isNpn = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] === "npn-inverter";
 const isDifferential = (d: Readonly<Record<string, string>>) => d["signal.kind"] === "differential";
 const pulledUp = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] !== "diode-clamp";
+// Only rectify-and-sign has an R1/R2 divider to hold (src/topologies/front-end.ts).
+const hasDivider = (d: Readonly<Record<string, string>>) =>
+  d["topology"] === "rectify-and-sign" || d["topology"] === ALL_TOPOLOGIES;
 
 /**
  * A role's BOM box shows when the chosen topology has the role (any topology
  * for "all") and the role's own conditions hold, as the engine's rolesOf has it.
  */
 const hasRole =
-  (role: RoleDef) =>
+  (role: RoleMeta) =>
   (d: Readonly<Record<string, string>>): boolean =>
-    engine.topologies.some(
+    TOPOLOGY_META.some(
       (t) => (d["topology"] === t.id || d["topology"] === ALL_TOPOLOGIES) && t.roles.some((r) => r.id === role.id),
     ) && roleApplies(role, (path) => d[path]);
 
@@ -195,6 +199,16 @@ export const FIELDS: readonly Field[] = [
   }),
   num("front_end.sign_series_ohm", "front_end", "Series resistor into the sign input", "Ω", { optional: true }),
   num("front_end.protection_ohm", "front_end", "Series protection resistor at the input", "Ω", { optional: true }),
+  num("front_end.divider_r1_ohm", "front_end", "Divider top resistor R1, held", "Ω", {
+    optional: true,
+    when: hasDivider,
+    hint: "optional; with R2, used as given instead of the search; both or neither",
+  }),
+  num("front_end.divider_r2_ohm", "front_end", "Divider bottom resistor R2, held", "Ω", {
+    optional: true,
+    when: hasDivider,
+    hint: "optional; with R1, used as given instead of the search; both or neither",
+  }),
 
   num("adc.bits", "adc", "ADC resolution", "bits", plain),
   num("adc.reference_v", "adc", "ADC reference", "V"),
@@ -292,7 +306,7 @@ export const FIELDS: readonly Field[] = [
     ],
   },
 
-  ...engine.roles.map((role) => bomRole(role.id, role.field, hasRole(role))),
+  ...ROLE_META.map((role) => bomRole(role.id, role.field, hasRole(role))),
 ];
 
 export const FIELD_BY_PATH: ReadonlyMap<string, Field> = new Map(FIELDS.map((f) => [f.path, f]));

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import "./all-topologies.ts";
 import { parseDesignValue } from "../../../src/engine.ts";
 import { parseSI } from "../../../src/core/units.ts";
 import { DEFAULT_DRAFT, DEFAULT_INPUT } from "../../../src/client/try/defaults.ts";
@@ -142,6 +143,8 @@ describe("draftFromInput / rawFromDraft", () => {
       "signal.fault_v",
       "signal.out_of_band_v",
       "front_end.protection_ohm",
+      "front_end.divider_r1_ohm", // optional (issue 16): a held divider
+      "front_end.divider_r2_ohm",
       "adc.sample_cap_f",
       "adc.switch_ohm",
       "adc.acquisition_s",
