@@ -46,6 +46,7 @@ export function designJson(result: DesignResult): Record<string, unknown> {
           bottom_ohm: x.divider.bottom_ohm,
           source_ohm: x.divider.source_ohm,
           ratio: x.divider.ratio,
+          chosen_by: x.divider.chosen_by,
         }
       : null,
     window_v: x.window_v,

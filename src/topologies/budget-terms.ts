@@ -160,10 +160,24 @@ export const BUDGET_TERM_INFO: readonly TermInfo[] = [
   },
   {
     name: "network-ratio",
-    what: "level-shift network over its three resistors' tolerance",
-    formula: "worst of the eight tolerance corners at ±peak",
+    what: "level-shift network gain over its resistors' tolerance",
+    formula: "worst |Δa|/a · peak over the tolerance corners, the source in series with R1",
     removed_by: "one-point",
     source: "Millman network arithmetic",
+  },
+  {
+    name: "network-zero",
+    what: "level-shift network zero shift over its resistors' tolerance",
+    formula: "worst |Δb|/a over the tolerance corners, the source in series with R1",
+    removed_by: "two-point",
+    source: "Millman network arithmetic",
+  },
+  {
+    name: "source-resistance-network",
+    what: "source resistance tolerance through the level-shift network",
+    formula: "max |Δa|/a · peak + max |Δb|/a over Rs(1 ± t_s), Rs in series with R1",
+    removed_by: "two-point",
+    source: "Millman network arithmetic with the source in series with R1 (SPEC §11.1)",
   },
   {
     name: "level-shift-offset",

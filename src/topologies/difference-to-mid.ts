@@ -36,6 +36,7 @@ import {
 import { differenceToMidChain } from "./difference-to-mid-sim.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
+import { noHeldDivider } from "./front-end.ts";
 
 const ROLE_RULES = [...OP_AMP_STAGE_RULES, adcSettling, inputFault];
 
@@ -272,6 +273,7 @@ export const differenceToMid = defineTopology({
     },
   ],
   roleTerms: ROLE_TERMS,
+  checkDesign: (d) => noHeldDivider(d, "difference-to-mid"),
   evaluate,
   simulation: differenceToMidChain,
 });

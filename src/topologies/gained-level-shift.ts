@@ -35,6 +35,7 @@ import {
 import { railRows, ratio, si } from "./display.ts";
 import { gainedLevelShiftChain } from "./gained-level-shift-sim.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
+import { noHeldDivider } from "./front-end.ts";
 
 const ROLE_RULES = [...OP_AMP_STAGE_RULES, adcSettling, inputFault];
 
@@ -222,6 +223,7 @@ export const gainedLevelShift = defineTopology({
   ],
   roleTerms: ROLE_TERMS,
   appliesTo: singleEndedOnly,
+  checkDesign: (d) => noHeldDivider(d, "gained-level-shift"),
   evaluate,
   simulation: gainedLevelShiftChain,
 });

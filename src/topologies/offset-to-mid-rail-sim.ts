@@ -24,8 +24,9 @@ export function offsetToMidRailChain(result: DesignResult, catalogue: Catalogue)
   if (!follower) return { ok: false, reason: "no part fits level-shift" };
   const refBuffer = chosen("reference-buffer");
   const vref = design.adc.reference_v + (refBuffer ? offsetAtCorner(refBuffer, design, 0) : 0);
-  // The source's resistance adds to R1: the physical gain and offset, not the nominal ones.
-  const real = networkOf(net.r1_ohm + design.signal.source_ohm, net.r2_ohm, net.r3_ohm, vref);
+  // The network's a and b already include the source's resistance (evaluate chose them so);
+  // only the buffered reference's offset moves them here.
+  const real = networkOf(net.r1_ohm, net.r2_ohm, net.r3_ohm, vref, net.source_ohm);
   const sampleRate = (design.adc as { sample_rate_hz?: number }).sample_rate_hz;
   const rails = { positive_v: derived.rails.positive_v, negative_v: 0 };
   return {

@@ -16,8 +16,8 @@ import type { Derived, DisplayGroup } from "../core/engine/result.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import {
   chooseLevelShift,
-  networkOf,
   networkToleranceError,
+  sourceToleranceError,
   type LevelShiftNetwork,
 } from "../core/math/level-shift.ts";
 import type { OpAmpStage, Rails } from "../core/rule-kit/index.ts";
@@ -38,6 +38,7 @@ import { converterTerms } from "./converter-terms.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { offsetToMidRailChain } from "./offset-to-mid-rail-sim.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
+import { noHeldDivider } from "./front-end.ts";
 
 const LEVEL_SHIFT_RULES = [...OP_AMP_STAGE_RULES, adcSettling, inputFault];
 
@@ -49,7 +50,15 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
   const vref = design.adc.reference_v;
   const peak = design.signal.peak_v;
   const margin = design.policy.headroom_margin_v;
-  const network = chooseLevelShift(peak, vref, margin, design.front_end.divider_total_ohm, design.front_end.series);
+  // The source (and any protection resistor) is in series with R1: the network is sized and read with it.
+  const network = chooseLevelShift(
+    peak,
+    vref,
+    margin,
+    design.front_end.divider_total_ohm,
+    design.front_end.series,
+    seriesInOhm(design),
+  );
   if (!network) {
     return {
       ok: false,
@@ -81,7 +90,7 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     output: { low, high },
     noise_gain: 1,
     vos_multiplier: 1,
-    // The signal source sits in series with R1; its share is small next to R1 and is left out.
+    // (R1 + Rs) ‖ R2 ‖ R3: the signal source sits in series with R1.
     bias_ohm: network.parallel_ohm,
     output_per_input: a,
     bandwidth_peak_v: peak,
@@ -90,8 +99,7 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     load: drivingPin(design, []),
   };
   // A fault reaches the follower's input through R1 with the source and any series resistor in front of it.
-  const faultNet = networkOf(network.r1_ohm + seriesInOhm(design), network.r2_ohm, network.r3_ohm, vref);
-  levelShift.fault = faultPath(faultNet.gain, faultNet.offset_v, faultNet.parallel_ohm, "the level shifter's input");
+  levelShift.fault = faultPath(network.gain, network.offset_v, network.parallel_ohm, "the level shifter's input");
   const referenceBuffer: OpAmpStage = {
     stage: "op-amp",
     label: "the reference buffer",
@@ -125,14 +133,35 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
   const netErr = networkToleranceError(network, tol, peak, vref);
   const fixed: BudgetTerm[] = [
     ...converterTerms(design, a, peak),
+    // R2 and R3 move b as well as a: the gain part goes with a one-point calibration, the shift of the zero does not.
     budgetTerm(
       "network-ratio",
-      "level-shift network, worst case of the three tolerances",
-      netErr,
-      `R1, R2, R3 ± ${Number((tol * 100).toPrecision(4))} % at the worst corner, the reading's error at ±${formatVolts(peak)}: ${formatSI(netErr, "V")}`,
+      "level-shift network gain, worst case of the three tolerances",
+      netErr.gain_v,
+      `R1, R2, R3 ± ${pct(tol)} at the worst corner: |Δa|/a × ${formatVolts(peak)} = ${formatSI(netErr.gain_v, "V")}`,
       "one-point",
     ),
+    budgetTerm(
+      "network-zero",
+      "level-shift network zero shift, worst case of the three tolerances",
+      netErr.offset_v,
+      `R1, R2, R3 ± ${pct(tol)} at the worst corner: |Δb|/a = ${formatSI(netErr.offset_v, "V")}`,
+      "two-point",
+    ),
   ];
+  const ts = design.signal.source_tolerance;
+  if (ts !== undefined && network.source_ohm > 0) {
+    const srcErr = sourceToleranceError(network, ts, peak, vref);
+    fixed.push(
+      budgetTerm(
+        "source-resistance-network",
+        "source resistance tolerance, through the network",
+        srcErr.gain_v + srcErr.offset_v,
+        `Rs = ${formatSI(network.source_ohm, "Ω")} ± ${pct(ts)} in series with R1: |Δa|/a × ${formatVolts(peak)} + |Δb|/a = ${formatSI(srcErr.gain_v, "V")} + ${formatSI(srcErr.offset_v, "V")}`,
+        "two-point",
+      ),
+    );
+  }
   fixed.push(...pinTerms(design));
   return {
     ok: true,
@@ -152,6 +181,8 @@ export function referenceLoadOhm(n: LevelShiftNetwork): number {
   const rest = n.r3_ohm === null ? n.r1_ohm : (n.r1_ohm * n.r3_ohm) / (n.r1_ohm + n.r3_ohm);
   return n.r2_ohm + rest;
 }
+
+const pct = (x: number) => `${Number((x * 100).toPrecision(4))} %`;
 
 const ROLE_TERMS: readonly RoleTerm[] = [
   // Both offsets move the mid point the reading is taken from: true offsets, which a two-point calibration removes.
@@ -185,9 +216,10 @@ function display(d: Derived, n: LevelShiftNetwork, low: number, high: number): D
       title: "Level-shift network",
       rows: [
         { label: "R1 from the signal", value: si(n.r1_ohm, "Ω") },
+        { label: "In series with R1: source and protection resistance Rs", value: si(n.source_ohm, "Ω") },
         { label: "R2 from the ADC reference", value: si(n.r2_ohm, "Ω") },
         { label: "R3 to ground", value: n.r3_ohm === null ? "none (a = 1/2)" : si(n.r3_ohm, "Ω") },
-        { label: "Gain a = G / R1, G = R1 ‖ R2 ‖ R3 (Millman)", value: ratio(n.gain) },
+        { label: "Gain a = G / (R1 + Rs), G = (R1 + Rs) ‖ R2 ‖ R3 (Millman)", value: ratio(n.gain) },
         { label: "Output at zero signal b = V_ref · G / R2", value: formatVolts(n.offset_v) },
         { label: "Output span for ±peak", value: `${formatVolts(low)} … ${formatVolts(high)}` },
       ],
@@ -196,7 +228,7 @@ function display(d: Derived, n: LevelShiftNetwork, low: number, high: number): D
       title: "Signal at the ADC side",
       rows: [
         { label: "Swing about mid-rail a · peak", value: `±${formatVolts(d.window_v)}` },
-        { label: "Resistance seen by the level shifter R1 ‖ R2 ‖ R3", value: si(d.thevenin_ohm, "Ω") },
+        { label: "Resistance seen by the level shifter (R1 + Rs) ‖ R2 ‖ R3", value: si(d.thevenin_ohm, "Ω") },
         { label: "One ADC step at the input", value: si(d.adc_step_at_input_v, "V") },
       ],
     },
@@ -218,12 +250,14 @@ export const offsetToMidRail = defineTopology({
   id: "offset-to-mid-rail",
   title: "Offset to mid-rail",
   description:
-    "The signal through R1, the ADC reference through R2 and R3 to ground meet at a follower's input. By Millman's theorem (Proc. IRE 28(9), 1940) the node is V = (Vin/R1 + V_ref/R2)/(1/R1 + 1/R2 + 1/R3) = a·Vin + b, with G = R1‖R2‖R3, a = G/R1, b = V_ref·G/R2. R1, R2 and R3 are chosen from the E-series so that −peak … +peak lands inside [m, V_ref − m] (m = headroom_margin_v) with the largest a and b nearest V_ref/2; a ≤ 1/2, so a small signal uses only part of the ADC range. One op amp on V+ and ground; no negative rail, no comparator. The level shifter needs b ± a·peak at its input and output; the optional reference buffer needs V_ref at both.",
+    "The signal through R1, the ADC reference through R2 and R3 to ground meet at a follower's input. By Millman's theorem (Proc. IRE 28(9), 1940) the node is V = (Vin/R1 + V_ref/R2)/(1/R1 + 1/R2 + 1/R3) = a·Vin + b, with G = R1‖R2‖R3, a = G/R1, b = V_ref·G/R2; the source's resistance (and any protection resistor) sits in series with R1 and is counted in it (Thevenin), so a and b are those of R1 + Rs. R1, R2 and R3 are chosen from the E-series so that −peak … +peak lands inside [m, V_ref − m] (m = headroom_margin_v) with the largest a and b nearest V_ref/2; a ≤ 1/2, so a small signal uses only part of the ADC range. One op amp on V+ and ground; no negative rail, no comparator. The level shifter needs b ± a·peak at its input and output; the optional reference buffer needs V_ref at both.",
   reading: "volts = (code + 0.5) · (V_ref/2^N)/a − b/a",
   fields: [
     "supply.positive_v",
     "signal.peak_v",
     "signal.max_frequency_hz",
+    "signal.source_ohm",
+    "signal.source_tolerance",
     "front_end.divider_total_ohm",
     "front_end.resistor_tolerance",
     "front_end.series",
@@ -256,6 +290,7 @@ export const offsetToMidRail = defineTopology({
   ],
   roleTerms: ROLE_TERMS,
   appliesTo: singleEndedOnly,
+  checkDesign: (d) => noHeldDivider(d, "offset-to-mid-rail"),
   evaluate,
   simulation: offsetToMidRailChain,
 });

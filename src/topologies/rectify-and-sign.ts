@@ -60,7 +60,7 @@ import {
 import { railRows, ratio, si } from "./display.ts";
 import { rectifyAndSignChain } from "./rectify-and-sign-sim.ts";
 import { converterTerms } from "./converter-terms.ts";
-import { frontEnd } from "./front-end.ts";
+import { frontEnd, heldDividerFits } from "./front-end.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
 import { TIMING_ROLE_TERMS } from "./rectify-and-sign-timing.ts";
 import { loadSum, settlePumpedRail } from "./rectify-and-sign-pump.ts";
@@ -650,18 +650,28 @@ function totalAgainstAsk(got: number, asked: number): string {
 /** Derived values as the design page, the try page and the CLI print them. */
 function display(design: Design, d: Derived): DisplayGroup[] {
   const series = design.front_end.series;
+  const held = d.divider?.chosen_by === "held";
+  // Held resistors are the design's own values, not members of the series: say which, and why.
+  const from = held ? "held" : series;
   const divider: DisplayRow[] = d.divider
     ? [
         { label: "Target ratio = window ÷ peak", value: ratio(d.target_ratio) },
-        { label: `Top resistor R1 (${series})`, value: si(d.divider.top_ohm, "Ω") },
-        { label: `Bottom resistor R2 (${series})`, value: si(d.divider.bottom_ohm, "Ω") },
+        { label: `Top resistor R1 (${from})`, value: si(d.divider.top_ohm, "Ω") },
+        { label: `Bottom resistor R2 (${from})`, value: si(d.divider.bottom_ohm, "Ω") },
         { label: "Source resistance Rs, in series with R1", value: si(d.divider.source_ohm, "Ω") },
         { label: "Ratio k = R2 / (Rs + R1 + R2)", value: ratio(d.divider.ratio) },
-        { label: "Total R1 + R2", value: totalAgainstAsk(d.divider.total_ohm, design.front_end.divider_total_ohm) },
-        {
-          label: "Why this total",
-          value: `the ${series} pair with the largest ratio not above the target, among totals from half to twice the ${si(design.front_end.divider_total_ohm, "Ω")} asked for (a larger ratio uses more of the ADC, so it wins over a total nearer the ask; ties go to the nearer total)`,
-        },
+        held
+          ? { label: "Total R1 + R2", value: si(d.divider.total_ohm, "Ω") }
+          : { label: "Total R1 + R2", value: totalAgainstAsk(d.divider.total_ohm, design.front_end.divider_total_ohm) },
+        held
+          ? {
+              label: "Why these resistors",
+              value: `held by the design (front_end.divider_r1_ohm and divider_r2_ohm): used as given, no search; the ${si(design.front_end.divider_total_ohm, "Ω")} total asked for is not used`,
+            }
+          : {
+              label: "Why this total",
+              value: `chosen by search: the ${series} pair with the largest ratio not above the target, among totals from half to twice the ${si(design.front_end.divider_total_ohm, "Ω")} asked for (a larger ratio uses more of the ADC, so it wins over a total nearer the ask; ties go to the nearer total)`,
+            },
       ]
     : [{ label: "Divider", value: "none: the peak already fits the window (k = 1)" }];
   const signal: DisplayRow[] = [
@@ -709,6 +719,8 @@ export const rectifyAndSign = defineTopology({
     "signal.source_ohm",
     "front_end.window_v",
     "front_end.divider_total_ohm",
+    "front_end.divider_r1_ohm",
+    "front_end.divider_r2_ohm",
     "front_end.resistor_tolerance",
     "front_end.series",
     "front_end.rectifier_load_ohm",
@@ -817,12 +829,14 @@ export const rectifyAndSign = defineTopology({
   roleTerms: ROLE_TERMS,
   appliesTo: singleEndedOnly,
   checkDesign(d) {
-    if (d.front_end.window_v <= d.adc.reference_v) return [];
+    const held = heldDividerFits(d);
+    if (d.front_end.window_v <= d.adc.reference_v) return held;
     return [
       {
         path: "front_end.window_v",
         message: `window is wider than the ADC range (got ${d.front_end.window_v} V, expected at most adc.reference_v ${d.adc.reference_v} V)`,
       },
+      ...held,
     ];
   },
   evaluate,

@@ -106,6 +106,14 @@ export function inputGroups(design: Design): ValueGroup[] {
       rows: [
         { label: "ADC window asked for", value: given(design.front_end.window_v, "V") },
         { label: "Divider total asked for", value: given(design.front_end.divider_total_ohm, "Ω") },
+        ...(design.front_end.divider_r1_ohm !== undefined && design.front_end.divider_r2_ohm !== undefined
+          ? [
+              {
+                label: "Divider resistors held (R1 over R2)",
+                value: `${given(design.front_end.divider_r1_ohm, "Ω")} over ${given(design.front_end.divider_r2_ohm, "Ω")}`,
+              },
+            ]
+          : []),
         { label: "Resistor tolerance", value: percent(design.front_end.resistor_tolerance) },
         { label: "Resistor series", value: design.front_end.series },
         { label: "Rectifier resistors", value: given(design.front_end.rectifier_load_ohm, "Ω") },

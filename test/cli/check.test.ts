@@ -86,6 +86,7 @@ describe("issue 3 acceptance", () => {
       bottom_ohm: 16000,
       source_ohm: 1000,
       ratio: 0.25,
+      chosen_by: "search",
     });
   });
 
@@ -104,6 +105,28 @@ describe("issue 3 acceptance", () => {
 });
 
 describe("check, text and csv", () => {
+  it("says the divider is held when the design holds R1 and R2, and chosen by search when not", async () => {
+    const held = tempDesign((d) => {
+      d.id = "held-divider";
+      Object.assign(d.front_end as Record<string, unknown>, { divider_r1_ohm: "39k", divider_r2_ohm: "13k" });
+    });
+    const flat = (await run("check", held)).out.replace(/\n\s+/g, " ");
+    // SPEC §11.1: 13k/(1k + 39k + 13k) = 0.2453.
+    expect(flat).toContain("Top resistor R1 (held): 39 kΩ");
+    expect(flat).toContain("Ratio k = R2 / (Rs + R1 + R2): 0.2453");
+    expect(flat).toMatch(
+      /Why these resistors: held by the design \(front_end\.divider_r1_ohm and divider_r2_ohm\): used as given, no search/,
+    );
+    const searched = (
+      await run(
+        "check",
+        tempDesign(() => undefined),
+      )
+    ).out.replace(/\n\s+/g, " ");
+    expect(searched).toContain("Top resistor R1 (E24): 47 kΩ");
+    expect(searched).toContain("Why this total: chosen by search: the E24 pair");
+  });
+
   it("keeps text within 80 columns", async () => {
     const { out } = await run("check", "data/designs/bridge-10v-5v-adc.json");
     for (const line of out.split("\n")) expect(line.length, line).toBeLessThanOrEqual(80);
@@ -179,16 +202,17 @@ describe("check --topology offset-to-mid-rail (issue 14)", () => {
           V+: +5.00 V
           V− (ground): 0.00 V
         Level-shift network
-          R1 from the signal: 1.07 MΩ
-          R2 from the ADC reference: 86.6 kΩ
-          R3 to ground: 93.1 kΩ
-          Gain a = G / R1, G = R1 ‖ R2 ‖ R3 (Millman): 0.04024
+          R1 from the signal: 1.02 MΩ
+          In series with R1: source and protection resistance Rs: 100 Ω
+          R2 from the ADC reference: 82.5 kΩ
+          R3 to ground: 88.7 kΩ
+          Gain a = G / (R1 + Rs), G = (R1 + Rs) ‖ R2 ‖ R3 (Millman): 0.04022
           Output at zero signal b = V_ref · G / R2: 2.04 V
-          Output span for ±peak: 0.10 V … 3.97 V
+          Output span for ±peak: 0.11 V … 3.97 V
         Signal at the ADC side
           Swing about mid-rail a · peak: ±1.93 V
-          Resistance seen by the level shifter R1 ‖ R2 ‖ R3: 43.1 kΩ
-          One ADC step at the input: 24.8 mV
+          Resistance seen by the level shifter (R1 + Rs) ‖ R2 ‖ R3: 41 kΩ
+          One ADC step at the input: 24.9 mV
         Converter drive and input protection
           Settling to ½ LSB: unrated: fill in adc.sample_cap_f, adc.switch_ohm,
               adc.acquisition_s
@@ -196,15 +220,18 @@ describe("check --topology offset-to-mid-rail (issue 14)", () => {
           Input fault: unrated: fill in signal.fault_v (and front_end.protection_ohm)
       "
     `);
-    // Millman's theorem (J. Millman, Proc. IRE 28(9), 1940): node = (Vin/R1 + Vref/R2) · G,
-    // G = R1 ‖ R2 ‖ R3, so a = G/R1 and b = Vref·G/R2; checked by hand from the printed resistors.
+    // Millman's theorem (J. Millman, Proc. IRE 28(9), 1940): node = (Vin/(R1 + Rs) + Vref/R2) · G,
+    // G = (R1 + Rs) ‖ R2 ‖ R3, so a = G/(R1 + Rs) and b = Vref·G/R2, the source in series with R1
+    // (Thevenin); checked by hand from the printed resistors.
     const ohms = (label: string) => {
       const m = new RegExp(`${label}: ([\\d.]+) (k|M)Ω`).exec(head);
       return Number(m?.[1]) * (m?.[2] === "M" ? 1e6 : 1e3);
     };
     const [r1, r2, r3] = [ohms("R1 from the signal"), ohms("R2 from the ADC reference"), ohms("R3 to ground")];
-    const g = 1 / (1 / r1 + 1 / r2 + 1 / r3);
-    expect(Number(/Gain a = [^:]*: ([\d.]+)/.exec(head)?.[1])).toBeCloseTo(g / r1, 4);
+    const rs = Number(/resistance Rs: ([\d.]+) Ω/.exec(head)?.[1]);
+    expect(rs).toBe(100);
+    const g = 1 / (1 / (r1 + rs) + 1 / r2 + 1 / r3);
+    expect(Number(/Gain a = [^:]*: ([\d.]+)/.exec(head)?.[1])).toBeCloseTo(g / (r1 + rs), 4);
   });
 });
 

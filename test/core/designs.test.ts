@@ -175,7 +175,7 @@ describe("parseDesignValue", () => {
     ).toMatchInlineSnapshot(`
       {
         "far from any": [
-          "designs/test-design.json: front_end.colour: unknown key (got 'colour', expected one of 'window_v', 'divider_total_ohm', 'resistor_tolerance', 'series', 'rectifier_load_ohm', 'rectifier_tolerance', 'sign_series_ohm', 'protection_ohm')",
+          "designs/test-design.json: front_end.colour: unknown key (got 'colour', expected one of 'window_v', 'divider_total_ohm', 'resistor_tolerance', 'series', 'rectifier_load_ohm', 'rectifier_tolerance', 'sign_series_ohm', 'protection_ohm', 'divider_r1_ohm', 'divider_r2_ohm')",
         ],
         "inside a charge pump": [
           "designs/test-design.json: supply.negative.flying_cap_f: required value is missing (got nothing, expected a number (or a string such as "100k"), greater than 0)",

@@ -56,7 +56,7 @@ describe("every demo design and topology, simulated", () => {
     expect(table).toMatchInlineSnapshot(`
       [
         "audio-1v5-20k rectify-and-sign: not simulated",
-        "audio-1v5-20k offset-to-mid-rail: BEYOND 167 / 19",
+        "audio-1v5-20k offset-to-mid-rail: BEYOND 21 / 18",
         "audio-1v5-20k gained-level-shift: BEYOND 50 / 16",
         "audio-1v5-20k difference-to-mid: within 11 / 14",
         "bridge-10v-5v-adc rectify-and-sign: within 45 / 164",

@@ -44,7 +44,7 @@ describe("derivedGroups", () => {
       "Ratio k = R2 / (Rs + R1 + R2)": "0.25",
       "Total R1 + R2": "40 kΩ, as asked",
       "Why this total":
-        "the E24 pair with the largest ratio not above the target, among totals from half to twice the 40 kΩ asked for (a larger ratio uses more of the ADC, so it wins over a total nearer the ask; ties go to the nearer total)",
+        "chosen by search: the E24 pair with the largest ratio not above the target, among totals from half to twice the 40 kΩ asked for (a larger ratio uses more of the ADC, so it wins over a total nearer the ask; ties go to the nearer total)",
     });
     // IEEE Std 1241-2010: Q = 5 V / 2^10 = 4.8828 mV, ÷ k 0.25 = 19.53 mV at the input.
     expect(rows(groups, "Signal at the ADC side")).toEqual({
@@ -61,6 +61,29 @@ describe("derivedGroups", () => {
       design({ signal: { peak_v: 10, source_ohm: 0 }, front_end: { divider_total_ohm: 100000 } }),
     );
     expect(rows(derivedGroups(result), "Divider")["Total R1 + R2"]).toBe("52 kΩ, asked 100 kΩ (0.52 × the ask)");
+  });
+
+  it("says a held divider is held: 39k over 13k behind 1 kΩ, k = 13/53 = 0.2453 (SPEC §11.1), the total asked for unused", () => {
+    const result = evaluate(
+      design({
+        signal: { peak_v: 10, source_ohm: 1000 },
+        front_end: { divider_total_ohm: 100000, divider_r1_ohm: 39000, divider_r2_ohm: 13000 },
+      }),
+    );
+    expect(rows(derivedGroups(result), "Divider")).toMatchInlineSnapshot(`
+      {
+        "Bottom resistor R2 (held)": "13 kΩ",
+        "Ratio k = R2 / (Rs + R1 + R2)": "0.2453",
+        "Source resistance Rs, in series with R1": "1 kΩ",
+        "Target ratio = window ÷ peak": "0.25",
+        "Top resistor R1 (held)": "39 kΩ",
+        "Total R1 + R2": "52 kΩ",
+        "Why these resistors": "held by the design (front_end.divider_r1_ohm and divider_r2_ohm): used as given, no search; the 100 kΩ total asked for is not used",
+      }
+    `);
+    expect(rows(inputGroups(result.design), "Front end")["Divider resistors held (R1 over R2)"]).toBe(
+      "39 kΩ over 13 kΩ",
+    );
   });
 
   it("says there is no divider when the peak already fits the window", () => {

@@ -54,6 +54,9 @@ const isFixed = (d: Readonly<Record<string, string>>) => d["supply.negative.kind
 const isNpn = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] === "npn-inverter";
 const isDifferential = (d: Readonly<Record<string, string>>) => d["signal.kind"] === "differential";
 const pulledUp = (d: Readonly<Record<string, string>>) => d["logic.level_shift"] !== "diode-clamp";
+// Only rectify-and-sign has an R1/R2 divider to hold (src/topologies/front-end.ts).
+const hasDivider = (d: Readonly<Record<string, string>>) =>
+  d["topology"] === "rectify-and-sign" || d["topology"] === ALL_TOPOLOGIES;
 
 /**
  * A role's BOM box shows when the chosen topology has the role (any topology
@@ -195,6 +198,16 @@ export const FIELDS: readonly Field[] = [
   }),
   num("front_end.sign_series_ohm", "front_end", "Series resistor into the sign input", "Ω", { optional: true }),
   num("front_end.protection_ohm", "front_end", "Series protection resistor at the input", "Ω", { optional: true }),
+  num("front_end.divider_r1_ohm", "front_end", "Divider top resistor R1, held", "Ω", {
+    optional: true,
+    when: hasDivider,
+    hint: "optional; with R2, used as given instead of the search; both or neither",
+  }),
+  num("front_end.divider_r2_ohm", "front_end", "Divider bottom resistor R2, held", "Ω", {
+    optional: true,
+    when: hasDivider,
+    hint: "optional; with R1, used as given instead of the search; both or neither",
+  }),
 
   num("adc.bits", "adc", "ADC resolution", "bits", plain),
   num("adc.reference_v", "adc", "ADC reference", "V"),

@@ -11,6 +11,8 @@ export type Divider = {
   total_ohm: number;
   /** Rs, the source resistance the ratio includes. */
   source_ohm: number;
+  /** "search": picked from the series by `chooseDivider`; "held": the design's own R1 and R2, used as given. */
+  chosen_by: "search" | "held";
 };
 
 /** The loaded ratio R2/(Rs + R1 + R2). */
@@ -51,7 +53,7 @@ export function chooseDivider(
       if (k > target * (1 + RATIO_EPSILON)) continue;
       const sameRatio = best !== undefined && Math.abs(k - best.ratio) <= best.ratio * RATIO_EPSILON;
       if (!best || (!sameRatio && k > best.ratio) || (sameRatio && closer(sum, best.total_ohm, total))) {
-        best = { top_ohm: r1, bottom_ohm: r2, ratio: k, total_ohm: sum, source_ohm: sourceOhm };
+        best = { top_ohm: r1, bottom_ohm: r2, ratio: k, total_ohm: sum, source_ohm: sourceOhm, chosen_by: "search" };
       }
       break;
     }
@@ -62,6 +64,18 @@ export function chooseDivider(
 }
 
 const memo = new Map<string, Divider | undefined>();
+
+/** The divider a design holds (front_end.divider_r1_ohm and divider_r2_ohm): no search, the loaded ratio of SPEC §11.1. */
+export function heldDivider(topOhm: number, bottomOhm: number, sourceOhm: number): Divider {
+  return {
+    top_ohm: topOhm,
+    bottom_ohm: bottomOhm,
+    ratio: loadedRatio(topOhm, bottomOhm, sourceOhm),
+    total_ohm: topOhm + bottomOhm,
+    source_ohm: sourceOhm,
+    chosen_by: "held",
+  };
+}
 
 function lowerBound(values: readonly number[], x: number): number {
   let lo = 0;

@@ -35,8 +35,8 @@ export function gainedOf(
   vref: number,
   peak: number,
 ): GainedLevelShift {
-  const full = networkOf(r1 + sourceOhm, r2, r3, vref);
-  const network = { ...full, r1_ohm: r1 };
+  const network = networkOf(r1, r2, r3, vref, sourceOhm);
+  const full = network;
   const stage = 1 + rf / rg;
   const gain = stage * full.gain;
   const offset = stage * full.offset_v;

@@ -1,7 +1,7 @@
 // Design files (SPEC §5). Numbers are SI; a string with an SI prefix ("1u",
 // "100k") is accepted wherever a number is. DesignInput is what a user writes,
 // Design the cleaned value with policy defaults filled in.
-import { z } from "zod";
+import * as z from "zod/mini";
 import { firstUnsafe, unsafeTextMessage } from "../text-safety.ts";
 import { ID_PATTERN } from "./cells.ts";
 import { closest } from "../problems.ts";
@@ -34,9 +34,22 @@ export function shown(value: unknown): string {
   return json === undefined ? String(value) : json.length > 40 ? `${json.slice(0, 37)}…` : json;
 }
 
+type Payload = z.core.ParsePayload;
+
+/** Any JSON value, read by `fn` (zod/mini has no `.transform` method; see DEVELOPERS.md). */
+function read<T>(fn: (value: unknown, ctx: Payload) => T) {
+  return z.pipe(z.unknown(), z.transform(fn));
+}
+
+/** Reports why a value cannot be read; what a transform returns after it is ignored. */
+function fail(ctx: Payload, message: string): never {
+  ctx.issues.push({ code: "custom", message, input: ctx.value });
+  return z.NEVER;
+}
+
 /** A number in SI units, given as a JSON number or an SI-prefixed string. */
 export function si(range: Range = {}) {
-  return z.unknown().transform((value, ctx): number => {
+  return read((value, ctx): number => {
     const expected = describe(range);
     let n: number | undefined;
     if (typeof value === "number") n = value;
@@ -47,8 +60,7 @@ export function si(range: Range = {}) {
     if (n === undefined || !Number.isFinite(n)) {
       const what =
         value === undefined ? "required value is missing" : typeof value === "number" ? "out of range" : "not a number";
-      ctx.addIssue({ code: "custom", message: `${what} (got ${shown(value)}, expected ${expected})` });
-      return z.NEVER;
+      return fail(ctx, `${what} (got ${shown(value)}, expected ${expected})`);
     }
     const bad =
       (range.integer === true && !Number.isInteger(n)) ||
@@ -57,22 +69,17 @@ export function si(range: Range = {}) {
       (range.below !== undefined && n >= range.below) ||
       (range.max !== undefined && n > range.max);
     if (bad) {
-      ctx.addIssue({ code: "custom", message: `out of range (got ${shown(value)}, expected ${expected})` });
-      return z.NEVER;
+      return fail(ctx, `out of range (got ${shown(value)}, expected ${expected})`);
     }
     return n;
   });
 }
 
 function oneOf<const T extends readonly [string, ...string[]]>(values: T) {
-  return z.unknown().transform((value, ctx): T[number] => {
+  return read((value, ctx): T[number] => {
     if (typeof value === "string" && (values as readonly string[]).includes(value)) return value as T[number];
     const what = value === undefined ? "required value is missing" : "unknown value";
-    ctx.addIssue({
-      code: "custom",
-      message: `${what} (got ${shown(value)}, expected ${values.map((v) => `'${v}'`).join(" or ")})`,
-    });
-    return z.NEVER;
+    return fail(ctx, `${what} (got ${shown(value)}, expected ${values.map((v) => `'${v}'`).join(" or ")})`);
   });
 }
 
@@ -102,88 +109,81 @@ const chargePump = z.strictObject({
   reservoir_cap_f: si({ above: 0 }),
   load_a: si({ min: 0 }),
   // Optional (issue 16): output resistance of the pin that drives the pump.
-  drive_ohm: si({ min: 0, max: 1e6 }).optional(),
+  drive_ohm: z.optional(si({ min: 0, max: 1e6 })),
 });
 
-const negativeSupply = z
-  .unknown()
-  .pipe(
-    z.discriminatedUnion(
-      "kind",
-      [
-        z.strictObject({ kind: z.literal("ground") }),
-        z.strictObject({ kind: z.literal("fixed"), v: si({ below: 0, min: -100 }) }),
-        chargePump,
-      ],
-      { error: (iss) => negativeKindMessage(iss.input) },
-    ),
-  );
+const negativeSupply = z.pipe(
+  z.unknown(),
+  z.discriminatedUnion(
+    "kind",
+    [
+      z.strictObject({ kind: z.literal("ground") }),
+      z.strictObject({ kind: z.literal("fixed"), v: si({ below: 0, min: -100 }) }),
+      chargePump,
+    ],
+    { error: (iss) => negativeKindMessage(iss.input) },
+  ),
+);
 
 function negativeKindMessage(input: unknown): string {
   const kind = typeof input === "object" && input !== null ? (input as { kind?: unknown }).kind : input;
   return `unknown negative supply (got kind ${shown(kind)}, expected 'ground', 'fixed' or 'charge-pump')`;
 }
 
-const policy = z
-  .strictObject({
-    headroom_margin_v: si({ min: 0, max: 10 }).optional(),
-    marginal_fraction: si({ min: 0, max: 1 }).optional(),
-    offset_share: si({ above: 0, max: 1 }).optional(),
-    speed_share: si({ above: 0, max: 1 }).optional(),
-    sign_share: si({ above: 0, max: 1 }).optional(),
-    timing_fraction: si({ above: 0, max: 1 }).optional(),
-    timing_share: si({ above: 0, max: 1 }).optional(),
-    allow_unrated: z
-      .boolean({ error: (i) => `not true or false (got ${shown(i.input)}, expected true or false)` })
-      .optional(),
-  })
-  .optional()
-  .transform((p) => ({ ...POLICY_DEFAULTS, ...stripUndefined(p ?? {}) }));
+const trueOrFalse = () =>
+  z.boolean({ error: (i) => `not true or false (got ${shown(i.input)}, expected true or false)` });
+
+const policy = z.pipe(
+  z.optional(
+    z.strictObject({
+      headroom_margin_v: z.optional(si({ min: 0, max: 10 })),
+      marginal_fraction: z.optional(si({ min: 0, max: 1 })),
+      offset_share: z.optional(si({ above: 0, max: 1 })),
+      speed_share: z.optional(si({ above: 0, max: 1 })),
+      sign_share: z.optional(si({ above: 0, max: 1 })),
+      timing_fraction: z.optional(si({ above: 0, max: 1 })),
+      timing_share: z.optional(si({ above: 0, max: 1 })),
+      allow_unrated: z.optional(trueOrFalse()),
+    }),
+  ),
+  z.transform((p) => ({ ...POLICY_DEFAULTS, ...stripUndefined(p ?? {}) })),
+);
 
 function stripUndefined<T extends object>(o: T): Partial<T> {
   return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
 }
 
 const text = (what: string, max: number) =>
-  z.unknown().transform((value, ctx): string => {
+  read((value, ctx): string => {
     if (typeof value === "string" && value.trim() !== "" && value.length <= max) {
       const unsafe = firstUnsafe(value);
       if (unsafe === undefined) return value;
-      ctx.addIssue({ code: "custom", message: `not a valid ${what}: ${unsafeTextMessage(unsafe)}` });
-      return z.NEVER;
+      return fail(ctx, `not a valid ${what}: ${unsafeTextMessage(unsafe)}`);
     }
-    ctx.addIssue({
-      code: "custom",
-      message: `not a valid ${what} (got ${shown(value)}, expected text of 1 to ${max} characters)`,
-    });
-    return z.NEVER;
+    return fail(ctx, `not a valid ${what} (got ${shown(value)}, expected text of 1 to ${max} characters)`);
   });
 
-const designId = z.unknown().transform((value, ctx): string => {
+const designId = read((value, ctx): string => {
   if (typeof value === "string" && ID_PATTERN.test(value) && value.length <= 80) return value;
-  ctx.addIssue({
-    code: "custom",
-    message: `not a valid id (got ${shown(value)}, expected lower-case letters, digits and '-', starting with a letter or digit, at most 80 characters)`,
-  });
-  return z.NEVER;
+  return fail(
+    ctx,
+    `not a valid id (got ${shown(value)}, expected lower-case letters, digits and '-', starting with a letter or digit, at most 80 characters)`,
+  );
 });
 
 function bomOf(roles: readonly string[]) {
-  return z
-    .record(
-      z.string().transform((key, ctx): Role => {
-        if (roles.includes(key)) return key;
-        const guess = closest(key, roles);
-        ctx.addIssue({
-          code: "custom",
-          message: `unknown role (got '${key}', expected ${guess ? `'${guess}'` : `one of ${roles.join(", ")}`})`,
-        });
-        return z.NEVER;
-      }),
-      designId,
-    )
-    .optional()
-    .transform((b): Partial<Record<Role, string>> => b ?? {});
+  const role = z.pipe(
+    z.string(),
+    z.transform((key: string, ctx: Payload): Role => {
+      if (roles.includes(key)) return key;
+      const guess = closest(key, roles);
+      return fail(ctx, `unknown role (got '${key}', expected ${guess ? `'${guess}'` : `one of ${roles.join(", ")}`})`);
+    }),
+  );
+  return z.pipe(
+    z.optional(z.record(role, designId)),
+    z.transform((b): Partial<Record<Role, string>> => b ?? {}),
+  );
 }
 
 /**
@@ -214,17 +214,17 @@ function designObject(names: DesignNames) {
       source_ohm: si({ min: 0 }),
       // Optional (issue 17, SPEC §12.2): a differential source and the range its common mode moves over.
       /** "single-ended" when absent. */
-      kind: oneOf(SIGNAL_KINDS).optional(),
+      kind: z.optional(oneOf(SIGNAL_KINDS)),
       /** Lowest common-mode voltage of a differential source (both inputs' mean). */
-      common_mode_min_v: si({ min: -100, max: 100 }).optional(),
+      common_mode_min_v: z.optional(si({ min: -100, max: 100 })),
       /** Highest common-mode voltage of a differential source. */
-      common_mode_max_v: si({ min: -100, max: 100 }).optional(),
+      common_mode_max_v: z.optional(si({ min: -100, max: 100 })),
       // Optional (issue 17, SPEC §12.4): the largest voltage the input may see in a fault, either sign.
-      fault_v: si({ above: 0, max: 100000 }).optional(),
+      fault_v: z.optional(si({ above: 0, max: 100000 })),
       /** Largest content above the band (pickup, noise) at the input, volts peak; the alias term takes peak_v when absent (issue 17). */
-      out_of_band_v: si({ min: 0, max: 100000 }).optional(),
+      out_of_band_v: z.optional(si({ min: 0, max: 100000 })),
       /** Optional (SPEC §11.1): the source resistance's tolerance, a budget term of its own. */
-      source_tolerance: si({ min: 0, max: 1 }).optional(),
+      source_tolerance: z.optional(si({ min: 0, max: 1 })),
     }),
     front_end: z.strictObject({
       window_v: si({ above: 0 }),
@@ -233,11 +233,16 @@ function designObject(names: DesignNames) {
       series: oneOf(SERIES),
       rectifier_load_ohm: si({ above: 0 }),
       /** Optional (SPEC §11.2): the rectifier's resistors' tolerance; resistor_tolerance when absent. */
-      rectifier_tolerance: si({ min: 0, max: 0.2 }).optional(),
+      rectifier_tolerance: z.optional(si({ min: 0, max: 0.2 })),
       /** Series resistor into the sign input: limits the current when its input clamps conduct (issue 21). */
-      sign_series_ohm: si({ above: 0 }).optional(),
+      sign_series_ohm: z.optional(si({ above: 0 })),
       /** Series resistor between the input connector and the front end: limits the fault current into clamps (issue 17). */
-      protection_ohm: si({ above: 0 }).optional(),
+      protection_ohm: z.optional(si({ above: 0 })),
+      // Optional (issue 16, SPEC §11.1): the divider's resistors held as given, both or neither; the E-series search is skipped.
+      /** Top resistor R1, in series with the source. */
+      divider_r1_ohm: z.optional(si({ above: 0, max: 1e9 })),
+      /** Bottom resistor R2, across which the buffer reads. */
+      divider_r2_ohm: z.optional(si({ above: 0, max: 1e9 })),
     }),
     adc: z.strictObject({
       bits: si({ integer: true, min: 1, max: 32 }),
@@ -245,22 +250,22 @@ function designObject(names: DesignNames) {
       reference_tolerance: si({ min: 0, max: 0.2 }),
       // Optional (issue 17, SPEC §12.3): the converter's sampling input; settling is unrated without them.
       /** Sampling capacitor. */
-      sample_cap_f: si({ above: 0, max: 1e-6 }).optional(),
+      sample_cap_f: z.optional(si({ above: 0, max: 1e-6 })),
       /** Resistance of the sampling switch. */
-      switch_ohm: si({ min: 0, max: 1e6 }).optional(),
+      switch_ohm: z.optional(si({ min: 0, max: 1e6 })),
       /** Acquisition (tracking) time the converter allows. */
-      acquisition_s: si({ above: 0, max: 1 }).optional(),
+      acquisition_s: z.optional(si({ above: 0, max: 1 })),
       /** Conversions per second. */
-      sample_rate_hz: si({ above: 0 }).optional(),
+      sample_rate_hz: z.optional(si({ above: 0 })),
       /** Optional series resistor between the driving stage and the pin. */
-      pin_r_ohm: si({ min: 0, max: 1e7 }).optional(),
+      pin_r_ohm: z.optional(si({ min: 0, max: 1e7 })),
       /** Optional capacitor from the pin to ground (the charge reservoir). */
-      pin_c_f: si({ min: 0, max: 1e-3 }).optional(),
+      pin_c_f: z.optional(si({ min: 0, max: 1e-3 })),
       // Optional (SPEC §11.10): the reference's tempco and the converter's own errors.
-      reference_tempco_ppm_per_c: si({ min: 0, max: 10000 }).optional(),
-      offset_lsb: si({ min: 0, max: 1e6 }).optional(),
-      gain_error: si({ min: 0, max: 0.5 }).optional(),
-      inl_lsb: si({ min: 0, max: 1e6 }).optional(),
+      reference_tempco_ppm_per_c: z.optional(si({ min: 0, max: 10000 })),
+      offset_lsb: z.optional(si({ min: 0, max: 1e6 })),
+      gain_error: z.optional(si({ min: 0, max: 0.5 })),
+      inl_lsb: z.optional(si({ min: 0, max: 1e6 })),
     }),
     logic: z.strictObject({
       vdd_v: si({ above: 0, max: 100 }),
@@ -269,24 +274,22 @@ function designObject(names: DesignNames) {
       level_shift: oneOf(LEVEL_SHIFTS),
       pull_down_ohm: si({ above: 0 }),
       // Optional (issue 16): the lowest level the logic input tolerates; −0.3 V when absent.
-      pin_min_v: si({ min: -100, max: 0 }).optional(),
+      pin_min_v: z.optional(si({ min: -100, max: 0 })),
       // Sign-path fields (issue 21), all optional; defaults live in math/rc-edge.ts and math/npn-inverter.ts, marked there.
       /** Capacitance of the logic pin and its trace (default 10 pF, common practice). */
-      pin_cap_f: si({ above: 0 }).optional(),
+      pin_cap_f: z.optional(si({ above: 0 })),
       /** Pull-up of the pull-up level shift and the NPN inverter's collector. */
-      pull_up_ohm: si({ above: 0 }).optional(),
+      pull_up_ohm: z.optional(si({ above: 0 })),
       /** NPN inverter: resistor from the sign output to the base. */
-      npn_base_ohm: si({ above: 0 }).optional(),
+      npn_base_ohm: z.optional(si({ above: 0 })),
       /** NPN inverter: a diode across base and emitter that stops a negative output reverse-biasing the base. */
-      npn_base_clamp: z
-        .boolean({ error: (i) => `not true or false (got ${shown(i.input)}, expected true or false)` })
-        .optional(),
+      npn_base_clamp: z.optional(trueOrFalse()),
       /** NPN inverter: the transistor's emitter-base reverse rating V_EBO (default 5 V, common practice). */
-      npn_vebo_v: si({ above: 0, max: 100 }).optional(),
+      npn_vebo_v: z.optional(si({ above: 0, max: 100 })),
       /** NPN inverter: the transistor's storage time when it leaves saturation (default 300 ns, common practice). */
-      npn_storage_s: si({ min: 0, max: 1 }).optional(),
+      npn_storage_s: z.optional(si({ min: 0, max: 1 })),
       /** Current a logic or converter pin's clamps may carry, mA (default 5 mA, common practice: math/clamp-current.ts). */
-      injection_ma: si({ above: 0, max: 1000 }).optional(),
+      injection_ma: z.optional(si({ above: 0, max: 1000 })),
     }),
     accuracy: z.strictObject({ required_v: si({ above: 0 }) }),
     temperature: z.strictObject({ min_c: si({ min: -273.15 }), max_c: si({ max: 500 }) }),
@@ -299,12 +302,22 @@ function designObject(names: DesignNames) {
 export type DesignShape = z.output<ReturnType<typeof designObject>>;
 
 export function designSchemaFor(names: DesignNames) {
-  return designObject(names).superRefine((d, ctx) => {
+  // Checks across fields, once every field has been read.
+  const crossCheck = (d: DesignShape, ctx: z.core.$RefinementCtx<DesignShape>): void => {
     const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: "custom", path, message });
     if (d.front_end.window_v >= d.supply.positive_v) {
       issue(
         ["front_end", "window_v"],
         `window can never fit inside the positive rail (got ${d.front_end.window_v} V, expected less than supply.positive_v ${d.supply.positive_v} V)`,
+      );
+    }
+    const { divider_r1_ohm: r1, divider_r2_ohm: r2 } = d.front_end;
+    if ((r1 === undefined) !== (r2 === undefined)) {
+      const [missing, given, what] =
+        r1 === undefined ? ["divider_r1_ohm", "divider_r2_ohm", "top"] : ["divider_r2_ohm", "divider_r1_ohm", "bottom"];
+      issue(
+        ["front_end", missing],
+        `required value is missing (got nothing, expected the divider's ${what} resistor in ohms: front_end.${given} holds the divider, so hold both of its resistors or neither)`,
       );
     }
     for (const p of names.check?.(d) ?? []) issue(p.path, p.message);
@@ -367,7 +380,8 @@ export function designSchemaFor(names: DesignNames) {
         `pump drive is above the positive rail it is made from (got ${d.supply.negative.drive_v} V, expected at most supply.positive_v ${d.supply.positive_v} V)`,
       );
     }
-  });
+  };
+  return designObject(names).check(z.superRefine(crossCheck));
 }
 
 export type DesignSchema = ReturnType<typeof designSchemaFor>;

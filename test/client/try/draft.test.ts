@@ -142,6 +142,8 @@ describe("draftFromInput / rawFromDraft", () => {
       "signal.fault_v",
       "signal.out_of_band_v",
       "front_end.protection_ohm",
+      "front_end.divider_r1_ohm", // optional (issue 16): a held divider
+      "front_end.divider_r2_ohm",
       "adc.sample_cap_f",
       "adc.switch_ohm",
       "adc.acquisition_s",

@@ -7,7 +7,14 @@ import { design as designFor } from "../../helpers/designs.ts";
 const term = (name: string, v: number, calibrates_out = false): BudgetTerm =>
   budgetTerm(name, name, v, `${name} = ${v} V`, calibrates_out ? "one-point" : "none");
 
-const divider = { top_ohm: 30000, bottom_ohm: 10000, ratio: 0.25, total_ohm: 40000, source_ohm: 0 };
+const divider = {
+  top_ohm: 30000,
+  bottom_ohm: 10000,
+  ratio: 0.25,
+  total_ohm: 40000,
+  source_ohm: 0,
+  chosen_by: "search" as const,
+};
 
 const design = () => designFor({ id: "budget-case", signal: { peak_v: 10 } });
 
@@ -122,6 +129,7 @@ describe("every term carries a formula with its numbers and what removes it (SPE
       ratio: 13 / 53,
       total_ohm: 52000,
       source_ohm: 1000,
+      chosen_by: "search",
     }).map((t) => [t.name, t]),
   );
 

@@ -194,6 +194,7 @@ describe("evaluateDesign: issue 3 acceptance", () => {
       ratio: 0.25,
       total_ohm: 63000,
       source_ohm: 1000,
+      chosen_by: "search",
     });
     expect(r.derived.ratio).toBe(0.25);
     expect(r.derived.window_v).toBe(2.5);
@@ -212,7 +213,41 @@ describe("evaluateDesign: issue 3 acceptance", () => {
       ratio: 0.25,
       total_ohm: 52000,
       source_ohm: 0,
+      chosen_by: "search",
     });
+  });
+
+  it("a held 39 kΩ over 13 kΩ behind 1 kΩ is used as given: k = 13/53 = 0.24528 in the window, budget and firmware constant", () => {
+    // SPEC §11.1, the voltage divider with the source in series with R1: k = R2/(Rs + R1 + R2)
+    // = 13k/(1k + 39k + 13k) = 0.245283. The search would pick 47k/16k here (the test above).
+    const r = evaluate({
+      signal: { peak_v: 10, source_ohm: 1000 },
+      front_end: { divider_r1_ohm: 39000, divider_r2_ohm: 13000 },
+    });
+    expect(r.derived.divider).toEqual({
+      top_ohm: 39000,
+      bottom_ohm: 13000,
+      ratio: 13 / 53,
+      total_ohm: 52000,
+      source_ohm: 1000,
+      chosen_by: "held",
+    });
+    expect(r.derived.ratio).toBeCloseTo(0.245283, 6);
+    // W = k · peak = 2.45283 V; (Rs + R1) ‖ R2 = 40k · 13k / 53k = 9811.32 Ω.
+    expect(r.derived.window_v).toBeCloseTo(2.45283, 6);
+    expect(r.derived.thevenin_ohm).toBeCloseTo(9811.3208, 3);
+    // IEEE Std 1241-2010 Q = V_ref/2^N = 4.8828 mV, ÷ k = 19.907 mV per code at the input.
+    expect(r.conversion.volts_per_code).toBeCloseTo(0.0199069, 7);
+    // The divider's budget term at its worst corner, R1 −1 %, R2 +1 % (divider arithmetic, SPEC §11.1):
+    // 13.13/(1 + 38.61 + 13.13) ÷ k − 1 = +1.4979 %, × 10 V = 149.79 mV.
+    const term = r.budget.terms.find((t) => t.name === "divider-ratio");
+    expect(term?.v).toBeCloseTo(0.14979, 5);
+    expect(term?.formula).toMatch(/^k = 13 kΩ \/ \(1 kΩ \+ 39 kΩ \+ 13 kΩ\) = 0\.2453;/);
+  });
+
+  it("a held divider is used even where the peak needs none: 10k over 10k halves a 2.5 V peak", () => {
+    const r = evaluate({ front_end: { divider_r1_ohm: 10000, divider_r2_ohm: 10000 } });
+    expect([r.derived.divider?.chosen_by, r.derived.ratio, r.derived.window_v]).toEqual(["held", 0.5, 1.25]);
   });
 
   it("needs no divider when the peak fits the window", () => {

@@ -1,17 +1,19 @@
 import { describe, expect, it } from "vitest";
 import {
   chooseDivider,
+  heldDivider,
   loadedRatio,
   loadedRatioDeviation,
   ratioDeviation,
   sourceRatioDeviation,
   theveninOhm,
+  type Divider,
 } from "../../../src/core/math/divider.ts";
 import { seriesValues, type SeriesName } from "../../../src/core/math/e-series.ts";
 
 // Brute force over every pair, written straight from SPEC §6 and §11.1 (k loaded by Rs), to check the search.
 function bruteForce(target: number, total: number, series: SeriesName, rs = 0) {
-  let best: { top_ohm: number; bottom_ohm: number; ratio: number; total_ohm: number; source_ohm: number } | undefined;
+  let best: Divider | undefined;
   const values = seriesValues(series);
   for (const r1 of values) {
     for (const r2 of values) {
@@ -25,7 +27,7 @@ function bruteForce(target: number, total: number, series: SeriesName, rs = 0) {
         k > best.ratio * (1 + 1e-12) ||
         (Math.abs(k - best.ratio) <= best.ratio * 1e-12 && dist < Math.abs(Math.log(best.total_ohm / total)))
       ) {
-        best = { top_ohm: r1, bottom_ohm: r2, ratio: k, total_ohm: sum, source_ohm: rs };
+        best = { top_ohm: r1, bottom_ohm: r2, ratio: k, total_ohm: sum, source_ohm: rs, chosen_by: "search" };
       }
     }
   }
@@ -41,6 +43,7 @@ describe("chooseDivider (SPEC §6, IEC 60063 values)", () => {
       ratio: 0.25,
       total_ohm: 52000,
       source_ohm: 0,
+      chosen_by: "search",
     });
   });
 
@@ -92,6 +95,7 @@ describe("chooseDivider (SPEC §6, IEC 60063 values)", () => {
       ratio: 0.25,
       total_ohm: 63000,
       source_ohm: 1000,
+      chosen_by: "search",
     });
   });
 });
@@ -107,18 +111,36 @@ describe("loadedRatio (SPEC §11.1, k = R2/(Rs + R1 + R2); issue 15's hand check
   });
 });
 
+describe("heldDivider (front_end.divider_r1_ohm and divider_r2_ohm, SPEC §11.1)", () => {
+  it("uses the resistors as given: 39k over 13k behind 1 kΩ is 13/53 = 0.24528, total 52 kΩ, marked held", () => {
+    // Voltage divider with Rs in series with R1: k = R2/(Rs + R1 + R2) = 13/53.
+    expect(heldDivider(39000, 13000, 1000)).toEqual({
+      top_ohm: 39000,
+      bottom_ohm: 13000,
+      ratio: 13 / 53,
+      total_ohm: 52000,
+      source_ohm: 1000,
+      chosen_by: "held",
+    });
+  });
+
+  it("keeps values off every series: 40.2k over 12.7k behind none is 12.7/52.9 = 0.24008", () => {
+    expect(heldDivider(40200, 12700, 0).ratio).toBeCloseTo(0.240076, 6);
+  });
+});
+
 describe("theveninOhm ((Rs + R1) ‖ R2; REFERENCES.md, Divider)", () => {
   it.each([
     // REFERENCES.md, Divider: 30k/10k gives R_th = 7.5 kΩ.
-    [0, { top_ohm: 30000, bottom_ohm: 10000, ratio: 0.25, total_ohm: 40000, source_ohm: 0 }, 7500],
+    [0, { top_ohm: 30000, bottom_ohm: 10000, ratio: 0.25, total_ohm: 40000, source_ohm: 0, chosen_by: "search" }, 7500],
     // (Rs + R1) ‖ R2 = 40k · 13k / 53k
     [
       1000,
-      { top_ohm: 39000, bottom_ohm: 13000, ratio: 13 / 53, total_ohm: 52000, source_ohm: 1000 },
+      { top_ohm: 39000, bottom_ohm: 13000, ratio: 13 / 53, total_ohm: 52000, source_ohm: 1000, chosen_by: "held" },
       (40000 * 13000) / 53000,
     ],
     [600, null, 600],
-  ])("Rs = %d Ω, divider %j → %d Ω", (rs, divider, expected) => {
+  ] as const)("Rs = %d Ω, divider %j → %d Ω", (rs, divider, expected) => {
     expect(theveninOhm(rs, divider)).toBeCloseTo(expected, 9);
   });
 });
@@ -151,6 +173,7 @@ describe("loadedRatioDeviation and sourceRatioDeviation (SPEC §11.1)", () => {
     ratio: loadedRatio(r1, r2, rs),
     total_ohm: r1 + r2,
     source_ohm: rs,
+    chosen_by: "held" as const,
   });
 
   it("with Rs = 0 it is the exact two-resistor worst case (30k/10k at 1 %: +1.5075 % / −1.4925 %, REFERENCES.md)", () => {
