@@ -3,6 +3,7 @@
 // a hotter range never lowers a diode's leakage; a colder range never deepens the
 // pumped rail (drops grow as it cools, −2 mV/°C, Sedra & Smith); more supply current
 // on the pumped rail never deepens it (droop I/(f·C), Winder).
+// The held divider's source-resistance property is in budget.property.test.ts.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { deadTime } from "../../src/core/math/dead-time.ts";
