@@ -2,8 +2,8 @@
 // the rules of their roles) from src/topologies/, the design schema built from
 // their names. Everything that evaluates or reads a design imports it from here.
 import { designReader } from "./core/designs.ts";
-import { ALL_TOPOLOGIES, createEngine, roleApplies, valueAt } from "./core/engine/engine.ts";
-import { designSchemaFor, type Design } from "./core/schemas/design.ts";
+import { ALL_TOPOLOGIES, createEngine, roleApplies, topologyDesignChecks, valueAt } from "./core/engine/engine.ts";
+import { designSchemaFor } from "./core/schemas/design.ts";
 import { TOPOLOGIES } from "./topologies/index.ts";
 
 export const engine = createEngine(TOPOLOGIES);
@@ -18,12 +18,9 @@ export const ROLE_IDS: readonly string[] = engine.roles.map((r) => r.id);
 export const designSchema = designSchemaFor({
   topologies: TOPOLOGY_IDS,
   roles: ROLE_IDS,
-  // Each topology's own checks, for the designs that name it or "all".
-  check: (d) =>
-    engine.topologies
-      .filter((t) => d.topology === t.id || d.topology === ALL_TOPOLOGIES)
-      .flatMap((t) => t.checkDesign?.(d as Design) ?? [])
-      .map((p) => ({ path: p.path.split("."), message: p.message })),
+  check: topologyDesignChecks((d) =>
+    engine.topologies.filter((t) => d.topology === t.id || d.topology === ALL_TOPOLOGIES),
+  ),
 });
 
 export const { parseDesignText, parseDesignValue } = designReader(designSchema);

@@ -3,6 +3,7 @@
 // src/core/sim/report.ts.
 import { csvLine } from "../core/csv-escape.ts";
 import {
+  delayWords,
   describeConditions,
   whyBeyond,
   type RunSummary,
@@ -36,6 +37,7 @@ function runLines(label: string, s: RunSummary): string[] {
   const lines = [
     `  ${label} ${formatSI(s.frequency_hz, "Hz")}: largest error ${v(s.max_error_v)} at ${formatSI(s.max_error_at_s, "s")} into the period, rms ${v(s.rms_error_v)}`,
   ];
+  if (s.reference_delay_s > 0) lines.push(`    ${delayWords(s.reference_delay_s)}`);
   if (s.at_max_error.length > 0) lines.push(`    then ${describeConditions(s.at_max_error)}`);
   if (s.dead_time_s !== null)
     lines.push(`    rectifier dead time ${formatSI(s.dead_time_s, "s")} at each zero crossing`);
@@ -73,6 +75,7 @@ export function simulationJson(r: SimulationReport | SimulationSkip) {
     rms_error_v: s.rms_error_v,
     at_max_error: s.at_max_error,
     dead_time_s: s.dead_time_s,
+    reference_delay_s: s.reference_delay_s,
     slewing: s.slewing,
     clipped: s.clipped,
   });

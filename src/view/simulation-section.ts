@@ -3,7 +3,7 @@
 // static worst case (and which model to distrust when they disagree), and the
 // two pictures with their tables. Pure: a string of HTML, every text escaped.
 import type { DesignSimulation } from "../core/engine/simulate-result.ts";
-import { describeConditions, whyBeyond, type RunSummary } from "../core/sim/report.ts";
+import { delayWords, describeConditions, whyBeyond, type RunSummary } from "../core/sim/report.ts";
 import type { Trace } from "../core/sim/simulate.ts";
 import { formatSI } from "../core/units.ts";
 import { escapeHtml } from "./escape.ts";
@@ -67,6 +67,7 @@ export function renderSimulationSection(sim: DesignSimulation, o: SimulationSect
 
 function facts(at: string, s: RunSummary): string {
   const bits = [`largest error ${v(s.max_error_v)}, rms ${v(s.rms_error_v)}`];
+  if (s.reference_delay_s > 0) bits.push(delayWords(s.reference_delay_s));
   if (s.at_max_error.length > 0) bits.push(`at the largest, ${describeConditions(s.at_max_error)}`);
   if (s.dead_time_s !== null) bits.push(`rectifier dead time ${formatSI(s.dead_time_s, "s")}`);
   if (s.slewing.length > 0) bits.push(`slewing: ${s.slewing.join(", ")}`);

@@ -10,13 +10,13 @@ const run = simulateChain(chain, 200);
 describe("simulationLine", () => {
   it("within the worst case", () => {
     expect(simulationLine(reportOf("rectify-and-sign", run, 0.5))).toMatchInlineSnapshot(
-      `"simulation: largest error 176 mV at 200 Hz (rms 19.8 mV), 38.1 mV at 2.00 Hz; inside the static worst case 500 mV by 324 mV"`,
+      `"simulation: largest error 174 mV at 200 Hz (rms 19.1 mV), 38.1 mV at 2.00 Hz; inside the static worst case 500 mV by 326 mV"`,
     );
   });
 
   it("beyond it, naming the model to distrust and why", () => {
     expect(simulationLine(reportOf("rectify-and-sign", run, 0.1))).toMatchInlineSnapshot(
-      `"simulation: largest error 176 mV at 200 Hz (rms 19.8 mV), 38.1 mV at 2.00 Hz; BEYOND the static worst case 100 mV by 75.6 mV: distrust the budget, which leaves out what happened while rectifier-1 was crossing its diode drops at a zero crossing (dead time)"`,
+      `"simulation: largest error 174 mV at 200 Hz (rms 19.1 mV), 38.1 mV at 2.00 Hz; BEYOND the static worst case 100 mV by 73.6 mV: distrust the budget, which leaves out what happened while rectifier-1 was crossing its diode drops at a zero crossing (dead time)"`,
     );
   });
 
@@ -32,13 +32,14 @@ describe("simulationText", () => {
     expect(simulationText("demo", [reportOf("rectify-and-sign", run, 0.5)], ["buffer=oa-x"])).toMatchInlineSnapshot(`
       "demo
       topology rectify-and-sign with buffer=oa-x
-        at 200 Hz: largest error 176 mV at 14.8 µs into the period, rms 19.8 mV
+        at 200 Hz: largest error 174 mV at 14.8 µs into the period, rms 19.1 mV
+          measured against the input 159 ns earlier, the chain's phase delay at this frequency (a fixed latency, not an error)
           then rectifier-1 was crossing its diode drops at a zero crossing (dead time)
           rectifier dead time 13.0 µs at each zero crossing
-        at 2.00 Hz: largest error 38.1 mV at 250 ms into the period, rms 15.7 mV
-          then rectifier-1 was crossing its diode drops at a zero crossing (dead time); sign had not yet switched (the sign was wrong)
+        at 2.00 Hz: largest error 38.1 mV at 500 ms into the period, rms 15.7 mV
+          measured against the input 159 ns earlier, the chain's phase delay at this frequency (a fixed latency, not an error)
           rectifier dead time 131 µs at each zero crossing
-        inside the static worst case 500 mV by 324 mV
+        inside the static worst case 500 mV by 326 mV
       "
     `);
   });
@@ -58,7 +59,7 @@ describe("simulationCsv", () => {
     const csv = simulationCsv([{ topology: "rectify-and-sign", trace }]);
     const lines = csv.trimEnd().split("\n");
     expect(lines[0]).toBe(
-      "topology,frequency_hz,time_s,input_v,front_v,buffer_v,rectifier-1_v,rectifier-1.amp_v,rectifier-2_v,sign,code,reading_v,error_v",
+      "topology,frequency_hz,time_s,input_v,front_v,buffer_v,rectifier-1_v,rectifier-1.amp_v,rectifier-2_v,sign,code,reading_v,error_v,reference_v",
     );
     expect(lines.length).toBe(1 + (trace.values[0]?.length ?? 0));
     const first = lines[1]?.split(",") ?? [];

@@ -12,17 +12,19 @@ describe("railsieve simulate", () => {
     expect([0, 1]).toContain(code);
     const [header, ...rows] = out.trimEnd().split("\n");
     expect(header).toBe(
-      "topology,frequency_hz,time_s,input_v,front_v,buffer_v,rectifier-1_v,rectifier-1.amp_v,rectifier-2_v,sign,code,reading_v,error_v",
+      "topology,frequency_hz,time_s,input_v,front_v,buffer_v,rectifier-1_v,rectifier-1.amp_v,rectifier-2_v,sign,code,reading_v,error_v,reference_v",
     );
     // Both frequencies: 200 Hz (the design's highest) and 2 Hz, each at least 513 points of one period.
     const freqs = new Set(rows.map((r) => r.split(",")[1]));
     expect([...freqs]).toEqual(["200", "2"]);
     expect(rows.length).toBeGreaterThanOrEqual(2 * 513);
-    for (const r of rows) expect(r.split(",")).toHaveLength(13);
-    // The reading is sign·(code + 0.5)·volts_per_code (SPEC §8) on every row.
+    for (const r of rows) expect(r.split(",")).toHaveLength(14);
+    // The reading is sign·(code + 0.5)·volts_per_code (SPEC §8) on every row, and the error is the
+    // reading less the input one shared phase delay earlier (the reference column).
     const first = rows[10]?.split(",").map(Number) ?? [];
-    const [, , , , , , , , , sign, c, reading] = first;
+    const [, , , , , , , , , sign, c, reading, error, reference] = first;
     expect(reading).toBeCloseTo((sign ?? 0) * ((c ?? 0) + 0.5) * 0.01953125, 6);
+    expect(error).toBeCloseTo((reading ?? 0) - (reference ?? 0), 6);
   });
 
   it("text names the parts, both frequencies and the comparison with the worst case", async () => {

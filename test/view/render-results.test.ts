@@ -3,6 +3,7 @@ import { catalogueFromParts, type Part } from "../../src/core/catalogue.ts";
 import { evaluateDesign } from "../../src/engine.ts";
 import type { DesignResult } from "../../src/core/engine/result.ts";
 import { loadCatalogue } from "../../src/node/load-data.ts";
+import "../client/try/all-topologies.ts";
 import { DEFAULT_DRAFT } from "../../src/client/try/defaults.ts";
 import { checkDraft } from "../../src/client/try/draft.ts";
 import { pieceHtml, type Piece } from "../../src/view/pieces.ts";

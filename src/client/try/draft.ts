@@ -1,7 +1,7 @@
 // The form's text ↔ a design object as a file would hold it. The draft keeps
 // what the visitor typed ("4.7u"); the design schema does all the checking, so
 // a draft turns into a raw object and never into a Design on its own.
-import { parseDesignValue } from "../../engine.ts";
+import { parseDesignValue } from "./engine.ts";
 import type { Problem } from "../../core/problems.ts";
 import type { Design } from "../../core/schemas/design.ts";
 import { parseSI } from "../../core/units.ts";

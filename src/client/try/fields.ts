@@ -1,9 +1,10 @@
 // Every editable field of a design file (SPEC §5), in file order. One table
 // serves the page's markup (built at build time), the URL codec and the form
 // script, so a field's name, label and unit are written once.
-import type { RoleDef } from "../../core/engine/topology.ts";
+import { ALL_TOPOLOGIES, roleApplies } from "../../core/engine/engine.ts";
 import { LEVEL_SHIFTS, POLICY_DEFAULTS, SERIES, SIGNAL_KINDS, type Role } from "../../core/schemas/design.ts";
-import { ALL_TOPOLOGIES, engine, roleApplies, TOPOLOGY_IDS } from "../../engine.ts";
+import { ROLE_META, TOPOLOGY_META, type RoleMeta } from "../../topologies/meta.ts";
+import { TOPOLOGY_IDS } from "./engine.ts";
 
 export type FieldGroup = { id: string; legend: string; hint?: string };
 
@@ -63,9 +64,9 @@ const hasDivider = (d: Readonly<Record<string, string>>) =>
  * for "all") and the role's own conditions hold, as the engine's rolesOf has it.
  */
 const hasRole =
-  (role: RoleDef) =>
+  (role: RoleMeta) =>
   (d: Readonly<Record<string, string>>): boolean =>
-    engine.topologies.some(
+    TOPOLOGY_META.some(
       (t) => (d["topology"] === t.id || d["topology"] === ALL_TOPOLOGIES) && t.roles.some((r) => r.id === role.id),
     ) && roleApplies(role, (path) => d[path]);
 
@@ -305,7 +306,7 @@ export const FIELDS: readonly Field[] = [
     ],
   },
 
-  ...engine.roles.map((role) => bomRole(role.id, role.field, hasRole(role))),
+  ...ROLE_META.map((role) => bomRole(role.id, role.field, hasRole(role))),
 ];
 
 export const FIELD_BY_PATH: ReadonlyMap<string, Field> = new Map(FIELDS.map((f) => [f.path, f]));

@@ -5,8 +5,8 @@
 import type { Part } from "../../core/catalogue.ts";
 import type { Problem } from "../../core/problems.ts";
 import { parseSI, formatSI, formatPercent } from "../../core/units.ts";
-import { kindWords } from "../../core/kinds.ts";
-import { engine } from "../../engine.ts";
+import { kindsThatCan, kindWords } from "../../core/kinds.ts";
+import { ROLE_META } from "../../topologies/meta.ts";
 import { applies, FIELDS, messageId, parsedId, type Draft, type Field } from "./fields.ts";
 
 type Box = HTMLInputElement | HTMLSelectElement;
@@ -118,9 +118,9 @@ export function fillPartLists(doc: Document, parts: readonly Part[]): void {
   for (const f of FIELDS) {
     if (f.type !== "part") continue;
     const select = box(doc, f.path);
-    const role = engine.roles.find((r) => r.id === f.role);
+    const role = ROLE_META.find((r) => r.id === f.role);
     if (!(select instanceof HTMLSelectElement) || !role) continue;
-    const groups = engine.kindsOf(role).map((kind) => {
+    const groups = kindsThatCan(role.wants).map((kind) => {
       const group = doc.createElement("optgroup");
       group.label = kindWords(kind).heading;
       for (const p of parts) {

@@ -3,7 +3,6 @@
 // in the address bar. Nothing here throws to the console: a failed fetch or a
 // bad link becomes a message on the page.
 import { indexCatalogue, type Catalogue } from "../../core/catalogue-index.ts";
-import { evaluateDesign } from "../../engine.ts";
 import type { DesignResult, Evaluation } from "../../core/engine/result.ts";
 import { formatProblem, type Problem } from "../../core/problems.ts";
 import type { Design } from "../../core/schemas/design.ts";
@@ -13,12 +12,14 @@ import { shortlistCsv, shortlistCsvName } from "./csv-export.ts";
 import { DEFAULT_DRAFT } from "./defaults.ts";
 import { designFileFromDraft } from "./design-file.ts";
 import { checkDraft, draftFromInput } from "./draft.ts";
+import { areLoaded, evaluateDesign, loadTopologies, topologiesFor } from "./engine.ts";
 import { FIELD_BY_PATH, type Draft } from "./fields.ts";
 import { fillPartLists, readField, showApplicable, showParsed, showProblems, writeDraft } from "./form.ts";
 import { renderTry } from "./render.ts";
 import { holdsLine } from "../../view/render-results.ts";
 import { readTryData, TRY_DATA_PATH, type TryData } from "./try-data.ts";
-import { encodeDraft, stateFromUrl, type UrlState } from "./url-state.ts";
+import { decodeQuery, encodeDraft, stateFromUrl, type UrlState } from "./url-state.ts";
+import { TOPOLOGY_META } from "../../topologies/meta.ts";
 
 type Page = {
   root: HTMLElement;
@@ -84,6 +85,11 @@ async function fetchData(url: string): Promise<TryData | string> {
   }
 }
 
+/** Colours the status by the design's verdict; none while nothing is evaluated. */
+function setOutcome(status: HTMLElement, state: string | undefined): void {
+  for (const s of ["holds", "marginal", "fails"]) status.classList.toggle(`try-${s}`, state === s);
+}
+
 /** Edits closer together than this share one simulation. */
 const SIMULATION_PAUSE_MS = 150;
 
@@ -106,6 +112,8 @@ class TryPage {
   simulationTimer = 0;
   // The link check evaluates a design once; the update that follows reuses that evaluation.
   cached: { key: string; evaluation: Evaluation } | undefined;
+  /** Counts topology loads, so only the latest one's outcome is acted on. */
+  loadCount = 0;
 
   constructor(doc: Document, page: Page, data: TryData) {
     this.doc = doc;
@@ -122,7 +130,7 @@ class TryPage {
     return evaluation;
   }
 
-  start(): void {
+  async start(): Promise<void> {
     const { page, doc } = this;
     fillPartLists(doc, this.data.parts);
     for (const d of this.data.designs) {
@@ -150,15 +158,31 @@ class TryPage {
     window.addEventListener("popstate", () => {
       // The address now belongs to another history entry; a pending write would overwrite it.
       this.cancelAddress();
-      this.fromUrl(false);
+      void this.fromUrl(false);
     });
-    this.fromUrl(true);
+    await this.fromUrl(true);
     page.root.removeAttribute("aria-busy");
     page.form.querySelectorAll("fieldset").forEach((f) => (f.disabled = false));
   }
 
-  /** Reads the address; a repaired or replaced link is written back so address and page agree. */
-  fromUrl(first: boolean): void {
+  /**
+   * Reads the address; a repaired or replaced link is written back so address
+   * and page agree. The topologies the link and the defaults name are fetched
+   * first, since reading a link evaluates it.
+   */
+  async fromUrl(first: boolean): Promise<void> {
+    const search = this.doc.location.search;
+    const named = [decodeQuery(search).values["topology"], DEFAULT_DRAFT["topology"]];
+    const ids = [...new Set(named.flatMap((t) => topologiesFor(t)))];
+    if (!areLoaded(ids)) {
+      if (!(await this.loadFor(ids))) {
+        // Nothing can be evaluated without it: the form shows the design, the status says why.
+        writeDraft(this.doc, this.draft);
+        return;
+      }
+      // Another address came meanwhile (back, then back again); its own read wins.
+      if (this.doc.location.search !== search) return;
+    }
     const state = stateFromUrl(this.doc.location.search, DEFAULT_DRAFT, (design) => {
       const evaluation = this.evaluate(design);
       return evaluation.ok ? [] : evaluation.problems;
@@ -236,8 +260,50 @@ class TryPage {
     renderTry(this.page.results, this.result, { expanded: this.expanded });
   }
 
+  /**
+   * Fetches topology modules with the results marked busy and the status
+   * saying so; true once they are in. A failure is said in the status, and
+   * the next edit tries again. Only the latest call's outcome shows.
+   */
+  async loadFor(ids: readonly string[]): Promise<boolean> {
+    const { page } = this;
+    const count = ++this.loadCount;
+    const names = ids.map((id) => TOPOLOGY_META.find((t) => t.id === id)?.title ?? id);
+    const what = names.length === 1 ? `the ${names[0]} topology` : `the ${names.length} topologies`;
+    page.results.setAttribute("aria-busy", "true");
+    page.results.classList.add("try-stale");
+    say(page.status, `Loading ${what}…`);
+    setOutcome(page.status, undefined);
+    try {
+      await loadTopologies(ids);
+      return count === this.loadCount;
+    } catch (e) {
+      if (count !== this.loadCount) return false;
+      say(
+        page.status,
+        `The page could not load ${what} (${e instanceof Error ? e.message : String(e)}). Edit any field, or choose the topology again, to try once more.`,
+      );
+      page.downloadCsv.disabled = true;
+      return false;
+    } finally {
+      if (count === this.loadCount) page.results.removeAttribute("aria-busy");
+    }
+  }
+
   /** Checks the draft, evaluates it, redraws, and (when valid) moves the address along. */
   update({ writeUrl }: { writeUrl: "auto" | "after-frame" | "replace" | "none" }): void {
+    const wanted = topologiesFor(this.draft["topology"]);
+    if (!areLoaded(wanted)) {
+      void this.loadFor(wanted).then((ready) => {
+        if (ready) this.update({ writeUrl });
+      });
+      return;
+    }
+    // A load still running is for a topology no longer chosen.
+    if (this.page.results.hasAttribute("aria-busy")) {
+      this.loadCount++;
+      this.page.results.removeAttribute("aria-busy");
+    }
     const started = performance.now();
     const { page, doc } = this;
     const checked = checkDraft(this.draft);
@@ -270,9 +336,7 @@ class TryPage {
     page.caution.hidden = !needsCaution(result.design);
     const { state, line } = holdsLine(result);
     say(page.status, `${line} ${this.catalogue.parts.length} parts checked.`);
-    page.status.classList.toggle("try-holds", state === "holds");
-    page.status.classList.toggle("try-marginal", state === "marginal");
-    page.status.classList.toggle("try-fails", state === "fails");
+    setOutcome(page.status, state);
     if (writeUrl === "after-frame") this.queueAddress();
     else if (writeUrl !== "none") this.writeUrl(writeUrl === "replace");
     if (this.simulating) this.queueSimulation(SIMULATION_PAUSE_MS);
@@ -341,6 +405,10 @@ class TryPage {
   }
 
   downloadDesign(): void {
+    if (!areLoaded(topologiesFor(this.draft["topology"]))) {
+      say(this.page.downloadMessage, "The design file can be written once its topology has loaded.");
+      return;
+    }
     const out = designFileFromDraft(this.draft);
     if (!out.ok) {
       say(
@@ -376,7 +444,7 @@ export async function startTry(doc: Document = document): Promise<void> {
     return;
   }
   try {
-    new TryPage(doc, page, data).start();
+    await new TryPage(doc, page, data).start();
   } catch (e) {
     // A bug must not leave a half-working page that looks fine.
     say(

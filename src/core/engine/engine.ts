@@ -4,7 +4,7 @@
 import type { Catalogue, Part } from "../catalogue-index.ts";
 import { kindsThatCan, kindWords, type PartKind } from "../kinds.ts";
 import type { Rails, Stage } from "../rule-kit/types.ts";
-import type { Design, Role } from "../schemas/design.ts";
+import type { Design, DesignShape, Role } from "../schemas/design.ts";
 import { buildBudget } from "./budget.ts";
 import { compare } from "./compare.ts";
 import { designVerdict } from "./design-verdict.ts";
@@ -41,8 +41,20 @@ export function valueAt(design: unknown, path: string): string | undefined {
 }
 
 /** Whether a role's conditions hold for a value lookup (a Design or a form's draft). */
-export function roleApplies(role: RoleDef, lookup: (path: string) => string | undefined): boolean {
+export function roleApplies(role: Pick<RoleDef, "when">, lookup: (path: string) => string | undefined): boolean {
   return (role.when ?? []).every((c: RoleCondition) => c.is.includes(lookup(c.path) ?? ""));
+}
+
+/**
+ * The checks topologies add to the design schema (DesignNames.check): each
+ * topology's own, for the topologies `among` gives for a design (the one it
+ * names, or every one for "all"), in registry order.
+ */
+export function topologyDesignChecks(among: (design: DesignShape) => readonly TopologyDef[]) {
+  return (design: DesignShape) =>
+    among(design)
+      .flatMap((t) => t.checkDesign?.(design as Design) ?? [])
+      .map((p) => ({ path: p.path.split("."), message: p.message }));
 }
 
 /** Checks the registries once: a role's rules must measure every kind that can fill it. */

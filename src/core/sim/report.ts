@@ -18,6 +18,8 @@ export type RunSummary = {
   clipped: string[];
   /** Least-squares line through the error against the input: a gain error (share) and a zero error (V). */
   fit: { gain_error: number; offset_v: number };
+  /** The reading was compared with the input this much earlier (the chain's shared phase delay), s. */
+  reference_delay_s: number;
 };
 
 export type Comparison = {
@@ -62,12 +64,14 @@ export function summarizeRun(t: Trace): RunSummary {
     dead_time_s: dead,
     slewing,
     clipped,
+    reference_delay_s: t.reference_delay_s,
   };
 }
 
 /** error ≈ gain_error·input + offset, by least squares over the recorded points. */
 export function fitError(t: Trace): { gain_error: number; offset_v: number } {
-  const x = t.values[t.columns.indexOf("input")];
+  // Against what the error was measured from: the delayed input where the trace has one.
+  const x = t.values[t.columns.indexOf("reference")] ?? t.values[t.columns.indexOf("input")];
   const e = t.values[t.columns.indexOf("error")];
   if (!x || !e || x.length < 2) return { gain_error: 0, offset_v: 0 };
   let sx = 0;
@@ -116,6 +120,11 @@ export function reportOf(topology: string, run: ChainRun, worstCaseV: number | n
     slow: summarizeRun(run.slow),
     comparison: compareWithBudget(run, worstCaseV),
   };
+}
+
+/** "measured against the input 234 ns earlier, the chain's phase delay (a fixed latency, not an error)". */
+export function delayWords(delayS: number): string {
+  return `measured against the input ${formatSI(delayS, "s")} earlier, the chain's phase delay at this frequency (a fixed latency, not an error)`;
 }
 
 const STATE_WORDS: Record<Condition["state"], string> = {

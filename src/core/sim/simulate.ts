@@ -16,6 +16,7 @@ import { quantize, reading } from "./converter.ts";
 import { ErrorMeter } from "./error-meter.ts";
 import { HalfWaveRunner } from "./half-wave.ts";
 import { Columns } from "./columns.ts";
+import { chainDelay } from "./chain-delay.ts";
 import { advancePole, type PoleStats } from "./pole.ts";
 
 export type RunOptions = {
@@ -24,6 +25,8 @@ export type RunOptions = {
   warmup_periods?: number;
   /** The source's open-circuit voltage at time t; a sine of the chain's peak when absent. */
   waveform?: (t: number) => number;
+  /** The latency the reading is compared after (chain-delay.ts); 0 compares at the same instant. */
+  reference_delay_s?: number;
 };
 
 export type StageStats = {
@@ -40,7 +43,7 @@ export type Condition = { stage: string; state: "clipped" | "slewing" | "dead-ti
 
 export type Trace = {
   frequency_hz: number;
-  /** Column names: time, input, front, each stage's node(s), sign, code, reading, error. */
+  /** Column names: time, input, front, each stage's node(s), sign, code, reading, error, reference. */
   columns: string[];
   /** One array per column, all the same length (the recorded points of the measured period). */
   values: Float64Array[];
@@ -51,6 +54,8 @@ export type Trace = {
   at_max_error: Condition[];
   rms_error_v: number;
   stages: StageStats[];
+  /** The reading is compared with the input this much earlier: the chain's shared phase delay, s. */
+  reference_delay_s: number;
 };
 
 export const STEPS_PER_PERIOD = 512;
@@ -283,6 +288,9 @@ export function runChain(chain: Chain, options: RunOptions): Trace {
   const peak = chain.source.peak_v;
   const w = 2 * Math.PI * f;
   const wave = options.waveform ?? ((t: number) => peak * Math.sin(w * t));
+  const delay = options.reference_delay_s ?? chainDelay(chain, f);
+  /** What the reading is compared with: the input as it was one shared delay earlier. */
+  const ref = (t: number) => wave(t - delay);
   const names = nodeNames(chain);
   const runners = buildRunners(chain, names);
   const n = names.length;
@@ -301,8 +309,8 @@ export function runChain(chain: Chain, options: RunOptions): Trace {
   for (const r of runners) r.init(cur);
   sign?.init(cur[signIndex] ?? 0);
 
-  // Recorded columns: time, nodes, sign, code, reading, error.
-  const columns = ["time", ...names, "sign", "code", "reading", "error"];
+  // Recorded columns: time, nodes, sign, code, reading, error, the delayed input it is measured against.
+  const columns = ["time", ...names, "sign", "code", "reading", "error", "reference"];
   const store = new Columns(columns.length, steps + 256);
   const meter = new ErrorMeter(chain.adc, chain.reading);
   let counted = 0;
@@ -318,7 +326,7 @@ export function runChain(chain: Chain, options: RunOptions): Trace {
     if (meter.max === before) return;
     atMax = [];
     for (let i = 0; i < runners.length; i++) (runners[i] as Runner).conditions(atMax);
-    const x = wave(meter.maxAt + start);
+    const x = ref(meter.maxAt + start);
     if (sign && chain.reading.signed && x !== 0 && signThen !== (x > 0 ? 1 : -1))
       atMax.push({ stage: "sign", state: "sign-wrong" });
   };
@@ -327,7 +335,8 @@ export function runChain(chain: Chain, options: RunOptions): Trace {
   const emit = (t: number, values: Float64Array, s: number): number => {
     const code = quantize(values[adcIndex] ?? 0, chain.adc);
     const read = reading(code, s, chain.reading);
-    const err = read - (values[0] ?? 0);
+    const against = delay === 0 ? (values[0] ?? 0) : ref(t);
+    const err = read - against;
     if (counted++ % stride !== 0) return err;
     const at = store.append();
     const c = store.columns;
@@ -337,6 +346,7 @@ export function runChain(chain: Chain, options: RunOptions): Trace {
     (c[n + 2] as Float64Array)[at] = code;
     (c[n + 3] as Float64Array)[at] = read;
     (c[n + 4] as Float64Array)[at] = err;
+    (c[n + 5] as Float64Array)[at] = against;
     return err;
   };
 
@@ -349,8 +359,8 @@ export function runChain(chain: Chain, options: RunOptions): Trace {
       const s1 = sign ? sign.at(t1) : 1;
       const va = a[adcIndex] ?? 0;
       const vb = b[adcIndex] ?? 0;
-      const xa = a[0] ?? 0;
-      const xb = b[0] ?? 0;
+      const xa = delay === 0 ? (a[0] ?? 0) : ref(t0);
+      const xb = delay === 0 ? (b[0] ?? 0) : ref(t1);
       if (s1 === lastSign) meter.stretch(t0 - start, t1 - start, va, vb, xa, xb, s1);
       else {
         // The sign changed inside the step: measure either side of the instant.
@@ -442,6 +452,7 @@ export function runChain(chain: Chain, options: RunOptions): Trace {
     at_max_error: atMax,
     rms_error_v: meter.rms,
     stages: runners.map((r) => r.stats()),
+    reference_delay_s: delay,
   };
 }
 

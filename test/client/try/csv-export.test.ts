@@ -1,5 +1,6 @@
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
+import "./all-topologies.ts";
 import { catalogueFromParts, type Part } from "../../../src/core/catalogue.ts";
 import { evaluateDesign } from "../../../src/engine.ts";
 import type { DesignResult } from "../../../src/core/engine/result.ts";

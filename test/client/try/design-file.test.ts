@@ -2,6 +2,7 @@ import { copyFileSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from "nod
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
+import "./all-topologies.ts";
 import { parseDesignText, parseDesignValue } from "../../../src/engine.ts";
 import { formatProblem } from "../../../src/core/problems.ts";
 import { main } from "../../../src/cli/main.ts";

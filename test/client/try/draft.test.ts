@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import "./all-topologies.ts";
 import { parseDesignValue } from "../../../src/engine.ts";
 import { parseSI } from "../../../src/core/units.ts";
 import { DEFAULT_DRAFT, DEFAULT_INPUT } from "../../../src/client/try/defaults.ts";

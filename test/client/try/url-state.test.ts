@@ -1,5 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import "./all-topologies.ts";
 import { parseDesignValue } from "../../../src/engine.ts";
 import { evaluateDesign } from "../../../src/engine.ts";
 import { formatProblem } from "../../../src/core/problems.ts";
