@@ -19,8 +19,10 @@ import {
   REVERSE_DERATING,
 } from "../src/core/math/npn-inverter.ts";
 import { clampSourceCurrent } from "../src/core/math/output-current.ts";
+import { loadSiemens } from "../src/core/math/stage-load.ts";
 import { DEFAULT_PIN_CAP_F, pullUpEdge } from "../src/core/math/rc-edge.ts";
 import { signTimeLimit } from "../rules/sign-path.ts";
+import { LOAD_SAME } from "../rules/output-load.ts";
 import type { Design } from "../src/core/schemas/design.ts";
 import { ALL_TOPOLOGIES, engine, evaluateDesign } from "../src/engine.ts";
 import type { RuleId } from "../rules/index.ts";
@@ -67,6 +69,7 @@ const COLUMNS = [
   "icm_pos_headroom_v",
   "out_neg_headroom_v",
   "out_pos_headroom_v",
+  "out_load_ohm",
   "vos_max_mv",
   "vos_drift_uv_per_c",
   "ib_max_na",
@@ -333,6 +336,18 @@ function runRule(
         const high = P - (pos[i] as number) - want.high;
         const needed = low <= high ? want.low : want.high;
         voltage(i, Math.min(low, high), Math.max(Math.abs(needed), headroom));
+      }
+      return;
+    }
+    case "output-load": {
+      if (stage.stage !== "op-amp") return;
+      // rules/output-load.ts: Σ 1/R against 1/out_load_ohm; marginal when heavier, never fail.
+      const g = stage.load === undefined ? NaN : loadSiemens(stage.load.branches);
+      for (let i = 0; i < n; i++) {
+        const allowed = 1 / (c.out_load_ohm[i] as number);
+        if (allowed !== allowed) unrated(i);
+        else if (g !== g) put(i, 0, 0, UNRATED);
+        else put(i, allowed - g, 0, g <= allowed * (1 + LOAD_SAME) ? PASS : MARGINAL);
       }
       return;
     }
@@ -720,6 +735,7 @@ const CASES: Record<Benchmarked, true> = {
   "supply-range": true,
   "input-common-mode": true,
   "output-swing": true,
+  "output-load": true,
   "unity-gain-stable": true,
   "phase-reversal": true,
   offset: true,

@@ -16,6 +16,7 @@ import { logicHigh } from "./logic-high.ts";
 import { logicLow } from "./logic-low.ts";
 import { offset } from "./offset.ts";
 import { outputCurrent } from "./output-current.ts";
+import { outputLoad } from "./output-load.ts";
 import { outputSwing } from "./output-swing.ts";
 import { overloadRecoveryRule } from "./overload-recovery.ts";
 import { phaseReversal } from "./phase-reversal.ts";
@@ -34,6 +35,7 @@ export const RULES = [
   supplyRange,
   inputCommonMode,
   outputSwing,
+  outputLoad,
   unityGainStable,
   phaseReversal,
   offset,

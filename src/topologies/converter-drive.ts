@@ -7,7 +7,8 @@ import { budgetTerm, type BudgetTerm } from "../core/engine/budget.ts";
 import type { DisplayGroup, DisplayRow } from "../core/engine/result.ts";
 import { DEFAULT_INJECTION_A } from "../core/math/clamp-current.ts";
 import { rcAttenuation } from "../core/math/settling.ts";
-import type { AnyRule, FaultPath } from "../core/rule-kit/index.ts";
+import { switchedCapOhm, type LoadBranch } from "../core/math/stage-load.ts";
+import type { AnyRule, FaultPath, StageLoad } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
 import { formatSI } from "../core/units.ts";
 
@@ -51,6 +52,29 @@ export function seriesInOhm(design: Design): number {
 /** The fault path straight into an input through `ohm` of resistance, scaled by `gain` (a divider's ratio). */
 export function faultPath(gain: number, offsetV: number, ohm: number, what: string): FaultPath {
   return { gain, offset_v: offsetV, ohm, what };
+}
+
+/**
+ * The load of the stage that drives the converter (SPEC §11.8), with its own
+ * branches: the pin draws the sampling capacitor's charge each conversion,
+ * 1/(f_s·C_s) through any pin resistor in series (the pin capacitor only
+ * stores that charge). Without the sample rate or capacitor the draw is
+ * unknown and left out, and the reason says so.
+ */
+export function drivingPin(design: Design, branches: LoadBranch[]): StageLoad {
+  const { sample_rate_hz: fs, sample_cap_f: cs, pin_r_ohm: rPin } = design.adc;
+  if (fs === undefined || cs === undefined) {
+    const missing = [fs === undefined ? "adc.sample_rate_hz" : null, cs === undefined ? "adc.sample_cap_f" : null]
+      .filter((x) => x !== null)
+      .join(" and ");
+    return { branches, left_out: `the converter pin's sampling draw (no ${missing})` };
+  }
+  const pin = switchedCapOhm(fs, cs) + (rPin ?? 0);
+  const what =
+    rPin !== undefined && rPin > 0
+      ? `the converter pin, R_pin + 1/(f_s·C_s) = ${formatSI(rPin, "Ω")} + ${formatSI(switchedCapOhm(fs, cs), "Ω")}`
+      : "the converter pin, 1/(f_s·C_s)";
+  return { branches: [...branches, { what, ohm: pin }] };
 }
 
 /** The pin RC's corner, when the design gives both parts. */

@@ -24,7 +24,15 @@ import type { FaultPath, OpAmpStage, Rails } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
 import { formatSI, formatVolts } from "../core/units.ts";
 import { converterTerms } from "./converter-terms.ts";
-import { pinTerms, driveDisplay, DRIVE_FIELDS, faultPath, rulesFor, seriesInOhm } from "./converter-drive.ts";
+import {
+  pinTerms,
+  driveDisplay,
+  DRIVE_FIELDS,
+  drivingPin,
+  faultPath,
+  rulesFor,
+  seriesInOhm,
+} from "./converter-drive.ts";
 import { differenceToMidChain } from "./difference-to-mid-sim.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
@@ -110,6 +118,9 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     bandwidth_peak_v: peak,
     slew_amplitude_v: G * peak,
     fault: worstFaultPath(design, amp, ref, rails),
+    // The output drives R2 into the − input, which feedback holds at the + input's level (the far side of R1
+    // is the V−in source): R2 alone, as Rf of an inverting stage to its virtual ground. And the converter pin.
+    load: drivingPin(design, [{ what: "feedback R2 to the − input", ohm: amp.r_fb_ohm }]),
   };
   role("difference", [{ stage, rules: rulesFor(design, ROLE_RULES) }], rails);
   const cmrr = worstCaseCmrr(G, t);

@@ -25,6 +25,7 @@ import {
   pinTerms,
   driveDisplay,
   DRIVE_FIELDS,
+  drivingPin,
   faultPath,
   rulesFor,
   seriesInOhm,
@@ -81,6 +82,8 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     bandwidth_peak_v: peak,
     slew_amplitude_v: x.gain * peak,
     fault: faultPath(n.gain, n.offset_v, n.parallel_ohm, "the gain stage's non-inverting input"),
+    // Non-inverting: the output drives Rf into Rg to ground (the − input draws nothing), and the converter pin.
+    load: drivingPin(design, [{ what: "Rf + Rg to ground", ohm: x.rf_ohm + x.rg_ohm }]),
   };
   role("gain-stage", [{ stage, rules: rulesFor(design, ROLE_RULES) }], rails);
   const derived: Derived = {

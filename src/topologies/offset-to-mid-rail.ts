@@ -7,6 +7,7 @@ import { bandwidth } from "../../rules/bandwidth.ts";
 import { inputFault } from "../../rules/input-fault.ts";
 import { inputCommonMode } from "../../rules/input-common-mode.ts";
 import { offset } from "../../rules/offset.ts";
+import { outputLoad } from "../../rules/output-load.ts";
 import { outputSwing } from "../../rules/output-swing.ts";
 import { supplyRange } from "../../rules/supply-range.ts";
 import { unityGainStable } from "../../rules/unity-gain-stable.ts";
@@ -25,6 +26,7 @@ import {
   pinTerms,
   driveDisplay,
   DRIVE_FIELDS,
+  drivingPin,
   faultPath,
   rulesFor,
   seriesInOhm,
@@ -93,6 +95,8 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     output_per_input: a,
     bandwidth_peak_v: peak,
     slew_amplitude_v: a * peak,
+    // A follower: its output drives the converter pin alone.
+    load: drivingPin(design, []),
   };
   // A fault reaches the follower's input through R1 with the source and any series resistor in front of it.
   levelShift.fault = faultPath(network.gain, network.offset_v, network.parallel_ohm, "the level shifter's input");
@@ -108,6 +112,9 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     output_per_input: a,
     bandwidth_peak_v: 0,
     slew_amplitude_v: 0,
+    // It drives R2 into the node, and from there R1 to the signal (a source, 0 V at rest) and R3 to ground;
+    // the follower's input draws nothing. The signal's own resistance would only lighten it and is left out.
+    load: { branches: [{ what: "R2 + R1 ‖ R3 of the level-shift network", ohm: referenceLoadOhm(network) }] },
   };
   role("level-shift", [{ stage: levelShift, rules: rulesFor(design, LEVEL_SHIFT_RULES) }], rails);
   role("reference-buffer", referenceBuffer, rails);
@@ -167,6 +174,12 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
       display: [...display(derived, network, low, high), driveDisplay(design)],
     },
   };
+}
+
+/** What the reference buffer drives: R2 in series with R1 ‖ R3 (R1 alone when there is no R3). */
+export function referenceLoadOhm(n: LevelShiftNetwork): number {
+  const rest = n.r3_ohm === null ? n.r1_ohm : (n.r1_ohm * n.r3_ohm) / (n.r1_ohm + n.r3_ohm);
+  return n.r2_ohm + rest;
 }
 
 const pct = (x: number) => `${Number((x * 100).toPrecision(4))} %`;
@@ -271,7 +284,7 @@ export const offsetToMidRail = defineTopology({
       field: "Reference buffer op amp",
       label: "optional follower driving the network from the ADC reference (in = out = V_ref)",
       wants: "amplify",
-      rules: [supplyRange, inputCommonMode, outputSwing, unityGainStable, offset],
+      rules: [supplyRange, inputCommonMode, outputSwing, outputLoad, unityGainStable, offset],
       optional: true,
     },
   ],

@@ -2,6 +2,7 @@
 import { bandwidth } from "../../rules/bandwidth.ts";
 import { inputCommonMode } from "../../rules/input-common-mode.ts";
 import { offset } from "../../rules/offset.ts";
+import { outputLoad } from "../../rules/output-load.ts";
 import { outputSwing } from "../../rules/output-swing.ts";
 import { phaseReversal } from "../../rules/phase-reversal.ts";
 import { slewRate } from "../../rules/slew-rate.ts";
@@ -13,6 +14,7 @@ export const OP_AMP_STAGE_RULES: readonly AnyRule[] = [
   supplyRange,
   inputCommonMode,
   outputSwing,
+  outputLoad,
   unityGainStable,
   phaseReversal,
   offset,

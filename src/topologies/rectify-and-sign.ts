@@ -50,6 +50,7 @@ import {
   pinTerms,
   driveDisplay,
   DRIVE_FIELDS,
+  drivingPin,
   faultPath,
   rulesFor,
   seriesInOhm,
@@ -312,6 +313,7 @@ function evaluateWith({ design, catalogue, role }: TopologyRun, draws: readonly 
     output_per_input: k,
     bandwidth_peak_v: design.signal.peak_v,
     slew_amplitude_v: W,
+    load: { branches: [] },
   };
   // The two-op-amp full-wave rectifier (SPEC §11.2): both stages are inverting
   // with the + input grounded, so both inputs sit at 0 V. Stage 1's output errors
@@ -319,6 +321,14 @@ function evaluateWith({ design, catalogue, role }: TopologyRun, draws: readonly 
   // its bandwidth error scales with twice the peak.
   const R = design.front_end.rectifier_load_ohm;
   const peak = design.signal.peak_v;
+  // The buffer drives stage 1's input R and the summer's input R, both into virtual grounds; the sign
+  // comparator's input draws nothing.
+  buffer.load = {
+    branches: [
+      { what: "stage 1's input R to its virtual ground", ohm: R },
+      { what: "the summer's input R to its virtual ground", ohm: R },
+    ],
+  };
   const halfWave: OpAmpStage = {
     stage: "op-amp",
     label: "the rectifier's stage 1 (half-wave)",
@@ -338,6 +348,14 @@ function evaluateWith({ design, catalogue, role }: TopologyRun, draws: readonly 
     zero_crossing_peak_v: peak,
     // While stage 1 is dead the summer's output is −x, below 0 V, and the single-supply converter reads 0: off by x.
     zero_crossing_error: "clips",
+    // Through the conducting diode the output drives the feedback R and the summer's R/2, both into virtual
+    // grounds: R/3, the 3·W/R the diode carries. The diode's own drop only lightens it and is left out.
+    load: {
+      branches: [
+        { what: "feedback R (through the diode) to the virtual ground", ohm: R },
+        { what: "the summer's input R/2 to its virtual ground", ohm: R / 2 },
+      ],
+    },
   };
   const summer: OpAmpStage = {
     stage: "op-amp",
@@ -351,6 +369,7 @@ function evaluateWith({ design, catalogue, role }: TopologyRun, draws: readonly 
     output_per_input: k,
     bandwidth_peak_v: peak,
     slew_amplitude_v: W,
+    load: drivingPin(design, [{ what: "feedback R to the virtual ground", ohm: R }]),
   };
   const sign: SignStage = {
     stage: "sign",

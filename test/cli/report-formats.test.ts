@@ -145,7 +145,7 @@ describe("check --format markdown", () => {
       "# railsieve check
       ## bridge-10v-5v-adc: marginal
       | Role | Part | Verdict | Fits | Deciding finding |
-      | \`buffer\` | \`oa-cmos-rro-limited\` | pass | 12 of 35 | closest: \`pump-load\` (pass): with this part the pumped rail carries 7.10 mA (the stated load and the other roles' parts) + 2 × 200 µA = 7.50 mA and sits at −3.98 V, no shallower than the −3.98 V the other checks used |
+      | \`buffer\` | \`oa-cmos-rro-limited\` | marginal | 12 of 35 | \`output-load\` (marginal): drives stage 1's input R to its virtual ground (10.0 kΩ) ‖ the summer's input R to its virtual ground (10.0 kΩ) = 5.00 kΩ: heavier than the 10.0 kΩ its swing is rated at (2× its current at the same output), so the rated swing may not hold (an output's headroom grows with its current) |
       Accuracy budget: worst case 164 mV, root-sum-square 52.4 mV, required 100 mV: marginal (largest term: rectifier stage 1 offset and bias current, through the summer's weight 2 (oa-cmos-rrio-150m-12v))."
     `);
   });

@@ -30,7 +30,9 @@ export const OP_AMP_CELLS: Record<string, string> = {
   icm_pos_headroom_v: "1.5",
   out_neg_headroom_v: "0.02",
   out_pos_headroom_v: "1.5",
-  out_load_ohm: "10k",
+  // The class's swing is commonly also given at 2 kΩ (common practice [M]); at 2 kΩ the default
+  // rectify-and-sign stages (R = 10 kΩ: buffer R/2, stage 1 R/3) are within it.
+  out_load_ohm: "2k",
   vos_max_mv: "7",
   vos_drift_uv_per_c: "",
   ib_max_na: "250",

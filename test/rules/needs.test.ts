@@ -31,11 +31,12 @@ describe("rules with an empty needed column", () => {
     expect(f.reason).toBe(`not rated: needs '${column}', which is empty for this part`);
   });
 
-  it("the optional columns some rule needs are exactly phase_reversal, overload_recovery_us and trr_ns", () => {
+  it("the optional columns some rule needs are exactly phase_reversal, out_load_ohm, overload_recovery_us and trr_ns", () => {
     const optional = needs
       .filter(([, kind, column]) => rowProblems(kind, { [column]: "" }).length === 0)
       .map(([rule, , column]) => `${rule}:${column}`);
     expect(optional).toEqual([
+      "output-load:out_load_ohm",
       "phase-reversal:phase_reversal",
       "overload-recovery:overload_recovery_us",
       "recovery:trr_ns",

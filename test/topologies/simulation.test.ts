@@ -58,15 +58,15 @@ describe("every demo design and topology, simulated", () => {
         "audio-1v5-20k rectify-and-sign: not simulated",
         "audio-1v5-20k offset-to-mid-rail: within 12 / 18",
         "audio-1v5-20k gained-level-shift: within 7 / 16",
-        "audio-1v5-20k difference-to-mid: within 8 / 16",
+        "audio-1v5-20k difference-to-mid: within 5 / 14",
         "bridge-10v-5v-adc rectify-and-sign: within 43 / 164",
         "bridge-20mv-on-3v3 difference-to-mid: within 0 / 0",
-        "bus-48v rectify-and-sign: within 186 / 815",
+        "bus-48v rectify-and-sign: within 132 / 760",
         "hub-generator-15v rectify-and-sign: within 69 / 301",
         "pickup-0v2-on-1v8 gained-level-shift: within 0 / 2",
         "probe-0v5-10meg rectify-and-sign: within 1 / 8",
         "thermoelectric-3v-on-3v3 rectify-and-sign: within 7 / 34",
-        "vibration-2v-split-2v5 rectify-and-sign: within 17 / 325",
+        "vibration-2v-split-2v5 rectify-and-sign: within 13 / 321",
         "wave-flume-6v-npn rectify-and-sign: within 10 / 57",
       ]
     `);

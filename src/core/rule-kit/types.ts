@@ -1,6 +1,7 @@
 // The rule kit's data: findings, verdicts, stages (what a role asks of a
 // part) and the shape of a rule. Rules and the engine both read these.
 import type { PartKind, PartOf } from "../catalogue-index.ts";
+import type { LoadBranch } from "../math/stage-load.ts";
 import type { Design, Policy, Role } from "../schemas/design.ts";
 
 /** In order of severity: verdict.ts ranks by this index. */
@@ -69,7 +70,17 @@ export type OpAmpStage = {
   zero_crossing_error?: "inverts" | "clips";
   /** Where the jump's diode drops are taken, for the reason ("at −20 °C (the cold end)"). */
   zero_crossing_at?: string;
+  /** What the output drives (SPEC §11.8); absent, the output-load rule cannot judge the stage and says unrated. */
+  load?: StageLoad;
 };
+
+/**
+ * The resistive load an op-amp stage's output drives: each branch to the node
+ * it returns to (a virtual ground, ground, an input held by feedback), all in
+ * parallel; `left_out` names a load the design does not state (the converter
+ * pin's sampling draw without its fields), for the reason.
+ */
+export type StageLoad = { branches: LoadBranch[]; left_out?: string };
 
 /**
  * The Thévenin source a fault meets at a stage's input pins, as a function of

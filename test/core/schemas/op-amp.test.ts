@@ -20,7 +20,7 @@ describe("opAmpRow", () => {
       icm_pos_headroom_v: 1.5,
       out_neg_headroom_v: 0.02,
       out_pos_headroom_v: 1.5,
-      out_load_ohm: 10000,
+      out_load_ohm: 2000,
       vos_max_mv: 7,
       vos_drift_uv_per_c: 7,
       ib_max_na: 250,
