@@ -173,8 +173,16 @@ export const BUDGET_TERM_INFO: readonly TermInfo[] = [
     source: "Millman network arithmetic",
   },
   {
+    name: "source-resistance-legs",
+    what: "source resistance tolerance in each leg of a difference amplifier",
+    formula:
+      "max |out − (G·Vd + REF)|/G over Rs(1 ± t_s) in each leg independently, at ±peak and the largest common mode",
+    removed_by: "none",
+    source: "difference amplifier superposition (SPEC §12.2) with the source in series with R1 and R3",
+  },
+  {
     name: "source-resistance-network",
-    what: "source resistance tolerance through the level-shift network",
+    what: "source resistance tolerance through the level-shift network (with or without gain)",
     formula: "max |Δa|/a · peak + max |Δb|/a over Rs(1 ± t_s), Rs in series with R1",
     removed_by: "two-point",
     source: "Millman network arithmetic with the source in series with R1 (SPEC §11.1)",

@@ -13,6 +13,7 @@ import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../co
 import { worstClampCurrent } from "../core/math/clamp-current.ts";
 import {
   chooseDifferenceAmp,
+  differenceSourceError,
   differenceToleranceError,
   pinCommonMode,
   toDecibels,
@@ -154,6 +155,19 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
       "none",
     ),
   ];
+  const ts = design.signal.source_tolerance;
+  if (ts !== undefined && amp.source_ohm > 0) {
+    const srcErr = differenceSourceError(amp, ts, peak, ref, plus.cm_max_abs);
+    terms.push(
+      budgetTerm(
+        "source-resistance-legs",
+        "source resistance tolerance, each leg on its own",
+        srcErr,
+        `Rs = ${formatSI(amp.source_ohm, "Ω")} ± ${Number((ts * 100).toPrecision(4))} % in each leg independently, at ±${formatVolts(peak)} and a common mode of ±${formatVolts(plus.cm_max_abs)}: ${formatSI(srcErr, "V")}`,
+        "none",
+      ),
+    );
+  }
   terms.push(...pinTerms(design));
   const perCode = vref / 2 ** bits / G;
   const offsetIn = ref / G;
@@ -250,6 +264,7 @@ export const differenceToMid = defineTopology({
     "signal.peak_v",
     "signal.max_frequency_hz",
     "signal.source_ohm",
+    "signal.source_tolerance",
     "front_end.divider_total_ohm",
     "front_end.resistor_tolerance",
     "front_end.series",

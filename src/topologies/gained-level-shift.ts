@@ -14,6 +14,7 @@ import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../co
 import {
   chooseGainedLevelShift,
   fillGain,
+  gainedSourceError,
   gainedToleranceError,
   type GainedLevelShift,
 } from "../core/math/gained-level-shift.ts";
@@ -118,6 +119,19 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
       "two-point",
     ),
   ];
+  const ts = design.signal.source_tolerance;
+  if (ts !== undefined && x.source_ohm > 0) {
+    const src = gainedSourceError(x, ts, peak, vref);
+    terms.push(
+      budgetTerm(
+        "source-resistance-network",
+        "source resistance tolerance, through the network",
+        src.gain_v + src.offset_v,
+        `Rs = ${formatSI(x.source_ohm, "Ω")} ± ${Number((ts * 100).toPrecision(4))} % in series with R1: |ΔA|/A × peak + |Δ(Gs·b)|/A = ${formatSI(src.gain_v, "V")} + ${formatSI(src.offset_v, "V")}`,
+        "two-point",
+      ),
+    );
+  }
   terms.push(...pinTerms(design));
   const perCode = vref / 2 ** bits / x.gain;
   const offsetIn = x.offset_v / x.gain;
@@ -199,6 +213,7 @@ export const gainedLevelShift = defineTopology({
     "signal.peak_v",
     "signal.max_frequency_hz",
     "signal.source_ohm",
+    "signal.source_tolerance",
     "front_end.divider_total_ohm",
     "front_end.resistor_tolerance",
     "front_end.series",

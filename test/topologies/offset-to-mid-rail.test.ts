@@ -53,3 +53,39 @@ describe("offset-to-mid-rail counts the source in R1", () => {
     expect(src?.v).toBeGreaterThan(0);
   });
 });
+
+describe("signal.source_tolerance gives a budget term on every front end with a source in its network (SPEC §11.1)", () => {
+  it.each([
+    { topology: "offset-to-mid-rail", name: "source-resistance-network" },
+    { topology: "gained-level-shift", name: "source-resistance-network" },
+    { topology: "difference-to-mid", name: "source-resistance-legs" },
+  ] as const)("$topology: $name, present with the tolerance and absent without it", ({ topology, name }) => {
+    const base = {
+      topology,
+      supply: { positive_v: 5, negative: { kind: "ground" as const } },
+      front_end: { window_v: 1, divider_total_ohm: 10e3, resistor_tolerance: 0.001, series: "E24" as const },
+      adc: { bits: 12, reference_v: 2.5, reference_tolerance: 0.001 },
+      accuracy: { required_v: 0.05 },
+    };
+    const term = (tolerance?: number) => {
+      const d = design({
+        ...base,
+        signal: {
+          peak_v: 1,
+          max_frequency_hz: 100,
+          source_ohm: 1000,
+          ...(tolerance === undefined ? {} : { source_tolerance: tolerance }),
+        },
+      });
+      const e = evaluateDesign(d, demo.catalogue);
+      if (!e.ok) throw new Error(JSON.stringify(e.problems));
+      return e.result.budget.terms.find((t) => t.name === name);
+    };
+    expect(term()).toBeUndefined();
+    expect(term(0.1)?.v).toBeGreaterThan(0);
+    // Ten times the tolerance, about ten times the term (first order in Rs·t).
+    const ratio = (term(0.1)?.v ?? 0) / (term(0.01)?.v ?? 1);
+    expect(ratio).toBeGreaterThan(9);
+    expect(ratio).toBeLessThan(11);
+  });
+});

@@ -109,3 +109,26 @@ export function worstCommonModeGain(amp: DifferenceAmp, t: number): number {
   }
   return worst;
 }
+
+/**
+ * Worst input-referred error from each leg's source resistance at Rs·(1 ± t),
+ * independently (a bridge's two arms), the four resistors nominal, at ±peak and
+ * at the largest common mode `cm` (SPEC §11.1): unequal legs change the gain and
+ * let the common mode through.
+ */
+export function differenceSourceError(amp: DifferenceAmp, t: number, peak: number, ref: number, cm: number): number {
+  let worst = 0;
+  for (const s1 of [1 - t, 1 + t]) {
+    for (const s3 of [1 - t, 1 + t]) {
+      const r1 = amp.r_in_ohm + amp.source_ohm * s1;
+      const r3 = amp.r_in_ohm + amp.source_ohm * s3;
+      for (const vcm of [-cm, cm]) {
+        for (const vd of [-peak, peak]) {
+          const out = differenceOut(r1, amp.r_fb_ohm, r3, amp.r_fb_ohm, vcm + vd / 2, vcm - vd / 2, ref);
+          worst = Math.max(worst, Math.abs(out - (amp.gain * vd + ref)) / amp.gain);
+        }
+      }
+    }
+  }
+  return worst;
+}

@@ -142,3 +142,16 @@ export function gainedToleranceError(x: GainedLevelShift, t: number, peak: numbe
   }
   return { gain_v: gain, offset_v: offset };
 }
+
+/** The same split for the source resistance at Rs·(1 ± t), the five resistors nominal (SPEC §11.1). */
+export function gainedSourceError(x: GainedLevelShift, t: number, peak: number, vref: number) {
+  const n = x.network;
+  let gain = 0;
+  let offset = 0;
+  for (const s of [1 - t, 1 + t]) {
+    const c = gainedOf(n.r1_ohm, n.r2_ohm, n.r3_ohm ?? Infinity, x.rf_ohm, x.rg_ohm, x.source_ohm * s, vref, peak);
+    gain = Math.max(gain, (Math.abs(c.gain - x.gain) / x.gain) * peak);
+    offset = Math.max(offset, Math.abs(c.offset_v - x.offset_v) / x.gain);
+  }
+  return { gain_v: gain, offset_v: offset };
+}

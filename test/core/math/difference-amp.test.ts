@@ -5,6 +5,7 @@ import { describe, expect, it } from "vitest";
 import {
   chooseDifferenceAmp,
   differenceOut,
+  differenceSourceError,
   differenceToleranceError,
   pinCommonMode,
   toDecibels,
@@ -61,5 +62,20 @@ describe("differenceToleranceError", () => {
     const e = differenceToleranceError(amp, 0.001, 0.1, 1.65);
     expect(e).toBeGreaterThan(2 * 0.001 * 0.1 * 0.99);
     expect(e).toBeLessThan(4 * 0.001 * (0.1 + 1.65));
+  });
+});
+
+describe("differenceSourceError (SPEC §11.1: the source's tolerance, each leg on its own)", () => {
+  // R1 = R3 = 10 kΩ, R2 = R4 = 10 kΩ, 1 kΩ ± 10 % in each leg, ±1 V, common mode ±2 V, REF 1.25 V.
+  // Nominal G = R2/(R1 + Rs) = 10/11. The expected value is the worst of the 16 corners of
+  // Franco's superposition (ch. 2), out = V+·R4/(R3+R4)·(1 + R2/R1) + REF·R3/(R3+R4)·(1 + R2/R1) − V−·R2/R1,
+  // worked out separately (a short script re-implementing that formula): 35.480 mV.
+  const amp = { r_in_ohm: 10e3, r_fb_ohm: 10e3, source_ohm: 1e3, gain: 10 / 11 };
+  it("is 35.480 mV at the worst corner, and zero without a source tolerance", () => {
+    expect(differenceSourceError(amp, 0.1, 1, 1.25, 2) * 1e3).toBeCloseTo(35.48, 2);
+    expect(differenceSourceError(amp, 0, 1, 1.25, 2)).toBeCloseTo(0, 12);
+  });
+  it("grows with the common mode: unequal legs let it through", () => {
+    expect(differenceSourceError(amp, 0.1, 1, 1.25, 4)).toBeGreaterThan(differenceSourceError(amp, 0.1, 1, 1.25, 2));
   });
 });

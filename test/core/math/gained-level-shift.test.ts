@@ -5,6 +5,7 @@ import {
   chooseGainedLevelShift,
   fillGain,
   gainedOf,
+  gainedSourceError,
   gainedToleranceError,
 } from "../../../src/core/math/gained-level-shift.ts";
 
@@ -35,5 +36,26 @@ describe("chooseGainedLevelShift", () => {
     const e = gainedToleranceError(x, 0.01, 0.2, 1.8);
     expect(e.gain_v).toBeGreaterThan(0);
     expect(e.offset_v).toBeGreaterThan(0);
+  });
+});
+
+describe("gainedSourceError (SPEC §11.1: the source in series with R1)", () => {
+  // Millman's node (Proc. IRE 28(9), 1940) with R1 + Rs in the signal branch, times Gs = 1 + Rf/Rg.
+  const transfer = (rs: number) => {
+    const [r1, r2, r3, rf, rg, vref] = [20e3, 30e3, 15e3, 10e3, 10e3, 3.3];
+    const den = 1 / (r1 + rs) + 1 / r2 + 1 / r3;
+    const gs = 1 + rf / rg;
+    return { a: gs / (r1 + rs) / den, b: (gs * vref) / r2 / den };
+  };
+  it("matches the hand transfer at Rs = 1 kΩ ± 20 %: |ΔA|/A·peak and |Δb|/A at the worse end", () => {
+    const x = gainedOf(20e3, 30e3, 15e3, 10e3, 10e3, 1e3, 3.3, 0.5);
+    const nominal = transfer(1e3);
+    const ends = [transfer(800), transfer(1200)];
+    const gain = Math.max(...ends.map((e) => (Math.abs(e.a - nominal.a) / nominal.a) * 0.5));
+    const offset = Math.max(...ends.map((e) => Math.abs(e.b - nominal.b) / nominal.a));
+    const got = gainedSourceError(x, 0.2, 0.5, 3.3);
+    expect(got.gain_v).toBeCloseTo(gain, 12);
+    expect(got.offset_v).toBeCloseTo(offset, 12);
+    expect(got.gain_v).toBeGreaterThan(0);
   });
 });
