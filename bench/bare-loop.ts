@@ -569,9 +569,11 @@ function runRule(
       const junctionScale = 2 ** (rise / 10);
       const limit = -(design.logic.pin_min_v ?? -0.3);
       const blocks = -stage.reverse_v < 0;
+      // The pin goes no lower than the comparator's lowest low level (math/clamp-leakage.ts).
+      const deepest = Math.max(stage.reverse_v, -(stage.floor_v ?? -stage.reverse_v));
       for (let i = 0; i < n; i++) {
         const ir = (c.ir_na[i] as number) * 1e-9 * (c.schottky[i] === 1 ? schottkyScale : junctionScale);
-        share(i, limit - (blocks ? ir * design.logic.pull_down_ohm : 0), limit);
+        share(i, limit - (blocks ? Math.min(ir * design.logic.pull_down_ohm, deepest) : 0), limit);
       }
       return;
     }

@@ -265,6 +265,8 @@ function evaluateWith({ design, catalogue, role }: TopologyRun, draws: readonly 
         label: "the clamp diode",
         reverse_v: Math.max(0, -negative_v),
         reverse_what: "|V−|, when the comparator output sits low",
+        // The comparator's low output goes no lower than the rail's deepest point (no load, or ripple's trough).
+        floor_v: Math.min(0, deepest_v),
         leakage_ohm: design.logic.pull_down_ohm,
         leakage_limit_v: design.logic.vil_v,
         leakage_what: "V_IL of the logic input",

@@ -132,6 +132,11 @@ export type DiodeStage = {
   /** Divisor that refers the leakage error to the input (1 when it is compared as is). */
   leakage_per_input?: number;
   leakage_what?: string;
+  /**
+   * The lowest level the other end of a blocking diode reaches (the clamp: the comparator's low
+   * output at the deepest V−). Leakage cannot pull the node past it; clamp-leakage clips there.
+   */
+  floor_v?: number;
 };
 
 export type Stage = OpAmpStage | SignStage | DiodeStage;

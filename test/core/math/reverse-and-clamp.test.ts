@@ -39,6 +39,24 @@ describe("clampLowLevel (the reverse-biased clamp's leakage pulls the pin below 
     expect(low.level_v).toBeLessThan(PIN_MIN_DEFAULT_V);
   });
 
+  it("500 µA × 10 kΩ would be −5.00 V, but the node stops at the −2.50 V low level (a diode carries nothing at zero bias)", () => {
+    // Shockley diode equation (Sedra & Smith ch. 4): I = Is·(e^(V/nV_T) − 1) is 0 at V = 0, so the
+    // leakage cannot pull the node past the level at the diode's other end.
+    expect(clampLowLevel(-2.5, 500e-6, 10e3)).toEqual({
+      level_v: -2.5,
+      reverse_biased: true,
+      pulled_v: -5,
+      floor_v: -2.5,
+      clipped: true,
+    });
+  });
+
+  it("clips at the deepest low level given (a pumped rail's trough), never at one above the low level", () => {
+    expect(clampLowLevel(-2.42, 500e-6, 10e3, -2.63).level_v).toBe(-2.63);
+    expect(clampLowLevel(-2.5, 500e-6, 10e3, -1).level_v).toBe(-2.5);
+    expect(clampLowLevel(-2.5, 4e-6, 100e3, -2.63)).toMatchObject({ clipped: false, floor_v: -2.63 });
+  });
+
   it("a comparator low at or above ground does not reverse-bias the diode: the node is at most that level", () => {
     expect(clampLowLevel(0.05, 4e-6, 100e3)).toEqual({ level_v: 0.05, reverse_biased: false });
   });
