@@ -47,6 +47,29 @@ const NO_PIN = "the converter pin's sampling draw (no adc.sample_rate_hz and adc
 // 1 MHz and 10 pF: 1/(f_s·C_s) = 100 kΩ, and 1 kΩ at the pin in series: 101 kΩ.
 const PIN = { sample_rate_hz: 1e6, sample_cap_f: 10e-12, pin_r_ohm: 1000 };
 
+const OFFSET = design({ topology: "offset-to-mid-rail", supply: { positive_v: 5, negative: { kind: "ground" } } });
+const GAINED = design({
+  topology: "gained-level-shift",
+  supply: { positive_v: 3.3, negative: { kind: "ground" } },
+  signal: { peak_v: 0.2, max_frequency_hz: 500, source_ohm: 0 },
+  front_end: { divider_total_ohm: 10e3 },
+  adc: { bits: 12, reference_v: 1.8 },
+});
+const DIFFERENCE = design({
+  topology: "difference-to-mid",
+  supply: { positive_v: 3.3, negative: { kind: "ground" } },
+  signal: {
+    peak_v: 0.02,
+    max_frequency_hz: 50,
+    source_ohm: 0,
+    kind: "differential",
+    common_mode_min_v: 1.6,
+    common_mode_max_v: 1.7,
+  },
+  front_end: { divider_total_ohm: 10e3 },
+  adc: { bits: 12, reference_v: 2.5 },
+});
+
 function verdictOf(r: DesignResult, role: string, stage?: string): string | undefined {
   const fit = r.roles.find((x) => x.role === role)?.resultOf("oa-10k");
   return fit?.findings.find((f) => f.rule === "output-load" && f.stage === stage)?.verdict;
@@ -89,7 +112,7 @@ describe("offset-to-mid-rail", () => {
   // ±2.5 V into a 5 V reference with a 100 kΩ scale: R1 = R2 = 75 kΩ, no R3 (a = ½, b = 2.5 V, the
   // network's own choice, shown on the design page). The level shifter is a follower into the pin
   // alone; the reference buffer drives R2 and, beyond the node, R1 to the signal: 75k + 75k = 150 kΩ.
-  const d = design({ topology: "offset-to-mid-rail", supply: { positive_v: 5, negative: { kind: "ground" } } });
+  const d = OFFSET;
   const r = run(d);
 
   it("hands the level shifter no branch but the pin, and the reference buffer R2 + R1", () => {
@@ -112,15 +135,7 @@ describe("offset-to-mid-rail", () => {
 describe("gained-level-shift", () => {
   // ±0.2 V into a 1.8 V, 12-bit converter on 3.3 V with a 10 kΩ scale: the search picks Rf = 36 kΩ and
   // Rg = 8.2 kΩ (Gs = 5.39). Non-inverting: the output drives Rf + Rg = 44.2 kΩ to ground.
-  const r = run(
-    design({
-      topology: "gained-level-shift",
-      supply: { positive_v: 3.3, negative: { kind: "ground" } },
-      signal: { peak_v: 0.2, max_frequency_hz: 500, source_ohm: 0 },
-      front_end: { divider_total_ohm: 10e3 },
-      adc: { bits: 12, reference_v: 1.8 },
-    }),
-  );
+  const r = run(GAINED);
 
   it("hands the gain stage Rf + Rg and the pin", () => {
     const rows = Object.fromEntries(r.display.flatMap((g) => g.rows.map((x) => [x.label, x.value])));
@@ -133,26 +148,38 @@ describe("difference-to-mid", () => {
   // A bridge of ±20 mV on 1.6–1.7 V into a 2.5 V converter, 10 kΩ scale: R1 = R3 = 8.2 kΩ,
   // R2 = R4 = 470 kΩ (G = 57.3). The output drives R2 into the − input, which feedback holds at the
   // + input's level: 470 kΩ, as Rf of an inverting stage into its virtual ground.
-  const r = run(
-    design({
-      topology: "difference-to-mid",
-      supply: { positive_v: 3.3, negative: { kind: "ground" } },
-      signal: {
-        peak_v: 0.02,
-        max_frequency_hz: 50,
-        source_ohm: 0,
-        kind: "differential",
-        common_mode_min_v: 1.6,
-        common_mode_max_v: 1.7,
-      },
-      front_end: { divider_total_ohm: 10e3 },
-      adc: { bits: 12, reference_v: 2.5 },
-    }),
-  );
+  const r = run(DIFFERENCE);
 
   it("hands the difference amplifier R2 and the pin", () => {
     const rows = Object.fromEntries(r.display.flatMap((g) => g.rows.map((x) => [x.label, x.value])));
     expect(rows["R2 = R4, feedback and to REF"]).toBe("470 kΩ");
     expect(loads(r)).toEqual({ difference: { ohms: [470_000], total: 470_000, left_out: NO_PIN } });
+  });
+});
+
+describe("every topology", () => {
+  // A stage without a load would leave every part unrated; one without the rule would let a heavy load pass.
+  it.each([
+    ["rectify-and-sign", design()],
+    ["offset-to-mid-rail", OFFSET],
+    ["gained-level-shift", GAINED],
+    ["difference-to-mid", DIFFERENCE],
+  ] as const)("%s: every op-amp stage states its load and runs output-load", (_t, d) => {
+    const stages = run(d).roles.flatMap((role) =>
+      role.stages
+        .filter((s) => s.stage.stage === "op-amp")
+        .map((s) => ({
+          who: `${role.role}/${s.id ?? ""}`,
+          load: s.stage.stage === "op-amp" && !!s.stage.load,
+          rules: s.rules,
+        })),
+    );
+    expect(stages.length).toBeGreaterThan(0);
+    for (const s of stages)
+      expect({ who: s.who, load: s.load, rule: s.rules.includes("output-load") }).toEqual({
+        who: s.who,
+        load: true,
+        rule: true,
+      });
   });
 });
