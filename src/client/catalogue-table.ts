@@ -1,8 +1,11 @@
-// Catalogue page behaviour: sort buttons in every column header, filters by
-// kind, status and tag, and fuzzy search as you type. The tables are complete
-// without it; this script only hides and reorders rows. The filter state is
-// kept in the address (?q=…&kind=…) so a filtered view can be shared.
-import { orderRows, parseSortKey, type SortDirection } from "../view/catalogue-order.ts";
+// Catalogue pages' behaviour (the index and each kind's page): sort buttons in
+// every column header, filters by kind, status and tag, and fuzzy search as you
+// type. The tables are complete without it; this script only hides and
+// reorders rows. The filter state is kept in the address (?q=…&kind=…) so a
+// filtered view can be shared. A row's search words are read from its cells
+// (src/components/CatalogueTable.astro keeps the markup lean), its notes from
+// the row.
+import { cellSortKey, orderRows, type SortDirection } from "../view/catalogue-order.ts";
 import { buildSearchIndex, type SearchDoc } from "../view/search-index.ts";
 
 type Row = { el: HTMLTableRowElement; position: number; doc: SearchDoc; status: string };
@@ -11,6 +14,8 @@ type Table = {
   body: HTMLTableSectionElement;
   section: HTMLElement;
   rows: Row[];
+  /** Each column's key (th data-column), by position. */
+  columns: string[];
   sort?: { column: number; direction: SortDirection };
 };
 
@@ -21,12 +26,22 @@ function field(form: HTMLFormElement, name: string): HTMLInputElement | HTMLSele
   return el;
 }
 
+/** A field the form may leave out (a kind's page has no kind choice): an empty stand-in. */
+function optionalField(form: HTMLFormElement, name: string): HTMLInputElement | HTMLSelectElement {
+  return form.elements.namedItem(name) === null
+    ? Object.assign(document.createElement("select"), { value: "" })
+    : field(form, name);
+}
+
+const rated = (cell: HTMLTableCellElement | undefined) => cell !== undefined && !cell.classList.contains("nr");
+const textOf = (cell: HTMLTableCellElement | undefined) => (rated(cell) ? (cell?.textContent ?? "").trim() : "");
+
 function setup(): void {
   const form = document.getElementById("catalogue-filters");
   const status = document.getElementById("catalogue-status-line");
   if (!(form instanceof HTMLFormElement) || !status) return;
   const q = field(form, "q");
-  const kind = field(form, "kind");
+  const kind = optionalField(form, "kind");
   const partStatus = field(form, "status");
   const tag = field(form, "tag");
 
@@ -35,20 +50,26 @@ function setup(): void {
     const body = el.tBodies[0];
     const section = el.closest("section");
     if (!body || !section) throw new Error("catalogue table without body or section");
-    const rows = [...body.rows].map((tr) => ({
-      el: tr,
-      position: position++,
-      status: tr.dataset.status ?? "",
-      doc: {
-        id: tr.dataset.id ?? "",
-        kind: tr.dataset.kind ?? "",
-        name: tr.dataset.name ?? "",
-        tags: (tr.dataset.tags ?? "").split(";").filter((t) => t !== ""),
-        notes: tr.dataset.notes ?? "",
-        status: tr.dataset.status ?? "",
-      },
-    }));
-    return { el, body, section, rows };
+    const columns = [...(el.tHead?.rows[0]?.cells ?? [])].map((th) => th.dataset.column ?? "");
+    const at = (tr: HTMLTableRowElement, key: string) => tr.cells[columns.indexOf(key)];
+    const rows = [...body.rows].map((tr) => {
+      const status = textOf(at(tr, "status"));
+      const tags = tr.dataset.tags?.split(";") ?? textOf(at(tr, "tags")).split(", ");
+      return {
+        el: tr,
+        position: position++,
+        status,
+        doc: {
+          id: textOf(at(tr, "id")),
+          kind: el.dataset.kind ?? "",
+          name: textOf(at(tr, "name")),
+          tags: tags.filter((t) => t !== ""),
+          notes: tr.dataset.notes ?? "",
+          status,
+        },
+      };
+    });
+    return { el, body, section, rows, columns };
   });
   const all = tables.flatMap((t) => t.rows);
   const index = buildSearchIndex(all.map((r) => r.doc));
@@ -96,12 +117,24 @@ function setup(): void {
       if (none) none.hidden = visible > 0 || kindHidden;
       table.el.hidden = visible === 0;
       const sort = table.sort;
+      // Each row's key read once per ordering, not once per comparison.
+      const keys = new Map(
+        sort
+          ? table.rows.map((r) => {
+              const cell = r.el.cells[sort.column];
+              const text = cell?.textContent ?? "";
+              const key = cellSortKey(
+                { sort: cell?.dataset.sort, text, rated: rated(cell) },
+                table.columns[sort.column] ?? "",
+              );
+              return [r, key] as const;
+            })
+          : [],
+      );
       const ordered = orderRows({
         items: table.rows,
         position: (r) => r.position,
-        ...(sort
-          ? { key: (r: Row) => parseSortKey(r.el.cells[sort.column]?.dataset.sort), direction: sort.direction }
-          : {}),
+        ...(sort ? { key: (r: Row) => keys.get(r) ?? null, direction: sort.direction } : {}),
         ...(hits ? { score: (r: Row) => hits.get(r.doc.id) } : {}),
       });
       table.body.append(...ordered.map((r) => r.el));

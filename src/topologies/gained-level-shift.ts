@@ -22,6 +22,7 @@ import type { OpAmpStage, Rails } from "../core/rule-kit/index.ts";
 import type { Design } from "../core/schemas/design.ts";
 import { formatSI, formatVolts } from "../core/units.ts";
 import { converterTerms } from "./converter-terms.ts";
+import { sourceNetworkTerms } from "./source-term.ts";
 import {
   pinTerms,
   driveDisplay,
@@ -119,19 +120,12 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
       "two-point",
     ),
   ];
-  const ts = design.signal.source_tolerance;
-  if (ts !== undefined && x.source_ohm > 0) {
-    const src = gainedSourceError(x, ts, peak, vref);
-    terms.push(
-      budgetTerm(
-        "source-resistance-network",
-        "source resistance tolerance, through the network",
-        src.gain_v + src.offset_v,
-        `Rs = ${formatSI(x.source_ohm, "Ω")} ± ${Number((ts * 100).toPrecision(4))} % in series with R1: |ΔA|/A × peak + |Δ(Gs·b)|/A = ${formatSI(src.gain_v, "V")} + ${formatSI(src.offset_v, "V")}`,
-        "two-point",
-      ),
-    );
-  }
+  terms.push(
+    ...sourceNetworkTerms(design, x.source_ohm, (ts) => gainedSourceError(x, ts, peak, vref), {
+      gain: "|ΔA|/A",
+      zero: "|Δ(Gs·b)|/A",
+    }),
+  );
   terms.push(...pinTerms(design));
   const perCode = vref / 2 ** bits / x.gain;
   const offsetIn = x.offset_v / x.gain;

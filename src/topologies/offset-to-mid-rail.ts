@@ -35,6 +35,7 @@ import {
 } from "./converter-drive.ts";
 import { formatSI, formatVolts } from "../core/units.ts";
 import { converterTerms } from "./converter-terms.ts";
+import { sourceNetworkTerms } from "./source-term.ts";
 import { railRows, ratio, si } from "./display.ts";
 import { offsetToMidRailChain } from "./offset-to-mid-rail-sim.ts";
 import { OP_AMP_STAGE_RULES } from "./op-amp-stage.ts";
@@ -149,19 +150,12 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
       "two-point",
     ),
   ];
-  const ts = design.signal.source_tolerance;
-  if (ts !== undefined && network.source_ohm > 0) {
-    const srcErr = sourceToleranceError(network, ts, peak, vref);
-    fixed.push(
-      budgetTerm(
-        "source-resistance-network",
-        "source resistance tolerance, through the network",
-        srcErr.gain_v + srcErr.offset_v,
-        `Rs = ${formatSI(network.source_ohm, "Ω")} ± ${pct(ts)} in series with R1: |Δa|/a × ${formatVolts(peak)} + |Δb|/a = ${formatSI(srcErr.gain_v, "V")} + ${formatSI(srcErr.offset_v, "V")}`,
-        "two-point",
-      ),
-    );
-  }
+  fixed.push(
+    ...sourceNetworkTerms(design, network.source_ohm, (ts) => sourceToleranceError(network, ts, peak, vref), {
+      gain: "|Δa|/a",
+      zero: "|Δb|/a",
+    }),
+  );
   fixed.push(...pinTerms(design));
   return {
     ok: true,

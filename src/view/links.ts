@@ -1,5 +1,6 @@
 // Every internal link goes through here, so the site works from any base path
 // (RAILSIEVE_BASE=/tools/railsieve/ serves it from a subfolder).
+import { kindSpec, type PartKind } from "../core/kinds.ts";
 import type { Role } from "../core/schemas/design.ts";
 
 /** Joins a base ("/", "/sub", "/sub/") and a site path ("parts/x/") into one absolute path. */
@@ -12,6 +13,7 @@ export type SiteLinks = {
   url: (path: string) => string;
   homeUrl: () => string;
   catalogueUrl: () => string;
+  kindUrl: (kind: PartKind) => string;
   partUrl: (id: string) => string;
   designUrl: (id: string, anchor?: string) => string;
   rulesUrl: (rule?: string) => string;
@@ -24,12 +26,16 @@ export function linksFor(base: string): SiteLinks {
     url,
     homeUrl: () => url(""),
     catalogueUrl: () => url("catalogue/"),
+    kindUrl: (kind) => url(`catalogue/${kindPath(kind)}/`),
     partUrl: (id) => url(`parts/${id}/`),
     designUrl: (id, anchor) => url(`designs/${id}/`) + (anchor ? `#${anchor}` : ""),
     rulesUrl: (rule) => url("rules/") + (rule ? `#rule-${rule}` : ""),
     tryUrl: () => url("try/"),
   };
 }
+
+/** The folder of a kind's catalogue page: its catalogue file's name ("op-amps"), plural as the file is. */
+export const kindPath = (kind: PartKind) => kindSpec(kind).file.replace(/\.csv$/, "");
 
 /** Id of one part's entry in a role on a design page; ids and roles are [a-z0-9-]. */
 export const resultAnchor = (role: Role, partId: string) => `${role}--${partId}`;
@@ -52,6 +58,7 @@ export function setSiteBase(base: string): void {
 export const url = (path: string) => joinBase(siteBase, path);
 export const homeUrl = () => linksFor(siteBase).homeUrl();
 export const catalogueUrl = () => linksFor(siteBase).catalogueUrl();
+export const kindUrl = (kind: PartKind) => linksFor(siteBase).kindUrl(kind);
 export const partUrl = (id: string) => linksFor(siteBase).partUrl(id);
 export const designUrl = (id: string, anchor?: string) => linksFor(siteBase).designUrl(id, anchor);
 export const rulesUrl = (rule?: string) => linksFor(siteBase).rulesUrl(rule);

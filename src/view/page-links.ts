@@ -11,6 +11,8 @@ export {
   catalogueUrl,
   designUrl,
   homeUrl,
+  kindPath,
+  kindUrl,
   partUrl,
   placeAnchor,
   resultAnchor,

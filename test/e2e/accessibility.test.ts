@@ -19,6 +19,7 @@ function pageTypes(): PageType[] {
   return [
     { type: "home", path: "" },
     { type: "catalogue", path: "catalogue/" },
+    { type: "catalogue kind", path: "catalogue/op-amps/" },
     { type: "op-amp part", path: `parts/${first("op-amp")}/` },
     { type: "comparator part", path: `parts/${first("comparator")}/` },
     { type: "diode part", path: `parts/${first("diode")}/` },

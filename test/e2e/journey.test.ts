@@ -16,7 +16,7 @@ import { buildSearchIndex } from "../../src/view/search-index.ts";
 import { rejectionGroups } from "../../src/view/role-lists.ts";
 import { projectNode, ROOT } from "./harness/build-site.ts";
 import { browserReady, openBrowser, openTracked, site, troubles, type Tracked } from "./harness/session.ts";
-import { screenshot, tryPageReady, visibleCatalogueRows } from "./harness/steps.ts";
+import { catalogueRow, screenshot, tryPageReady, visibleCatalogueRows } from "./harness/steps.ts";
 
 const TYPO = "rial to rial";
 const DESIGN = "bridge-10v-5v-adc";
@@ -76,7 +76,7 @@ describe.skipIf(!browserReady)("a reader's journey through the demo site", () =>
 
   it("opens the best match's part page with its parameters in SI units and its fit in each design", async () => {
     const part = data.catalogue.byId.get(firstHit)!;
-    await page.locator(`tr[data-id="${firstHit}"]`).getByRole("link", { name: part.name }).click();
+    await catalogueRow(page, firstHit).getByRole("link", { name: part.name }).click();
     await page.waitForURL(t.url(`parts/${firstHit}/index.html`));
     expect(await h1()).toBe(part.name);
     const value = (column: string) => page.locator(`dl.values dt:has(code:text-is("${column}")) + dd`).textContent();

@@ -28,6 +28,22 @@ describe.skipIf(!browserReady)("the demo site with JavaScript off", () => {
     expect(visible).toBe(catalogue.parts.length);
   });
 
+  it.each([
+    ["op-amps", "op-amp"],
+    ["comparators", "comparator"],
+    ["diodes", "diode"],
+  ])("shows every class of catalogue/%s/ with its parameters", async (path, kind) => {
+    const { catalogue } = loadDataSet(site("demo").dataDir);
+    await page.goto(url(`catalogue/${path}/`));
+    const rows = page.locator("table.catalogue-table tbody tr");
+    const expected = catalogue.parts.filter((p) => p.kind === kind).length;
+    expect(await rows.count()).toBe(expected);
+    const visible = await rows.evaluateAll((trs) => trs.filter((tr) => (tr as HTMLElement).checkVisibility()).length);
+    expect(visible).toBe(expected);
+    // The search form stays hidden: without its script it would do nothing.
+    expect(await page.locator("#catalogue-filters").isHidden()).toBe(true);
+  });
+
   it("shows a design's shortlist and rail diagrams, drawn at build time", async () => {
     await page.goto(url("designs/bridge-10v-5v-adc/"));
     expect(await page.locator("#role-buffer ol.results > li").count()).toBeGreaterThan(0);

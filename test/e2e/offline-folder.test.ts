@@ -132,7 +132,7 @@ describe.skipIf(!browserReady)("the guide opened from a folder", () => {
     await box.fill(query);
     await page.locator("#catalogue-status-line", { hasText: "matching" }).waitFor();
     const first = page.locator("table.catalogue-table tbody tr:not([hidden])").first();
-    expect(await first.getAttribute("data-id")).toBe(best);
+    expect((await first.locator("td:first-child").textContent())?.trim()).toBe(best);
     expect(watch.errors).toEqual([]);
     expect(watch.csp).toEqual([]);
     await context.close();

@@ -18,7 +18,17 @@ const ALL_DESIGNS = [
   "thermoelectric-3v-on-3v3",
   "vibration-2v-split-2v5",
 ];
-const PAGES = ["", "catalogue/", "rules/", "try/", "parts/oa-cmos-rrio-3m/", ...DESIGNS.map((d) => `designs/${d}/`)];
+const PAGES = [
+  "",
+  "catalogue/",
+  "catalogue/op-amps/",
+  "catalogue/comparators/",
+  "catalogue/diodes/",
+  "rules/",
+  "try/",
+  "parts/oa-cmos-rrio-3m/",
+  ...DESIGNS.map((d) => `designs/${d}/`),
+];
 
 /** How far the page reaches past the viewport's right edge, in CSS px (0 when it does not scroll sideways). */
 const sideways = (page: Page) =>
@@ -62,7 +72,13 @@ describe.skipIf(!browserReady)("on a phone and on paper", () => {
   });
 
   it("keeps the hostile catalogue's long unbroken text and the catalogue's hidden words inside 390 px", async () => {
-    for (const path of ["catalogue/", ...(await partPages(hostile))]) {
+    for (const path of [
+      "catalogue/",
+      "catalogue/op-amps/",
+      "catalogue/comparators/",
+      "catalogue/diodes/",
+      ...(await partPages(hostile)),
+    ]) {
       await hostile.page.goto(hostile.url(path));
       expect(await sideways(hostile.page), path).toBe(0);
     }

@@ -22,7 +22,7 @@ import {
   troubles,
   type Tracked,
 } from "./harness/session.ts";
-import { tryPageReady, visibleCatalogueRows } from "./harness/steps.ts";
+import { catalogueRow, tryPageReady, visibleCatalogueRows } from "./harness/steps.ts";
 
 // Payloads typed by a visitor rather than read from the catalogue.
 const TYPED = `<img src=x onerror="window.__pwned='typed'">"><script>window.__pwned='typed2'</script>`;
@@ -106,9 +106,16 @@ describe.skipIf(!browserReady)("hostile catalogue and designs", () => {
     await page.goto(t.url("catalogue/"));
     expect(await missingText(data.catalogue.parts.map((p) => p.name))).toEqual([]);
     for (const part of data.catalogue.parts) {
-      expect(await page.locator(`tr[data-id="${part.id}"] td.name a`).textContent()).toBe(part.name);
+      expect(await catalogueRow(page, part.id).locator("td.name a").textContent()).toBe(part.name);
     }
     await expectNothingRan("catalogue/");
+    for (const kind of ["op-amps", "comparators", "diodes"]) {
+      await page.goto(t.url(`catalogue/${kind}/`));
+      const names = await page.locator("table.catalogue-table td.name a").allTextContents();
+      const kindOf = { "op-amps": "op-amp", comparators: "comparator", diodes: "diode" }[kind];
+      expect(names).toEqual(data.catalogue.parts.filter((p) => p.kind === kindOf).map((p) => p.name));
+      await expectNothingRan(`catalogue/${kind}/`);
+    }
   });
 
   it.each([
@@ -121,7 +128,7 @@ describe.skipIf(!browserReady)("hostile catalogue and designs", () => {
     await page.getByRole("searchbox", { name: "Search" }).fill(query);
     await page.locator("#catalogue-status-line", { hasText: "matching" }).waitFor();
     expect(await visibleCatalogueRows(page)).toContain(id);
-    expect(await page.locator(`tr[data-id="${id}"] td.name a`).textContent()).toBe(nameOf(id));
+    expect(await catalogueRow(page, id).locator("td.name a").textContent()).toBe(nameOf(id));
     await expectNothingRan(`catalogue/ searching ${query}`);
   });
 

@@ -51,7 +51,9 @@ describe.skipIf(!browserReady).each<SiteName>(["demo", "hostile"])("every page o
     const expected = [
       ...data.catalogue.parts.map((p) => `${t.site.base}parts/${p.id}/`),
       ...data.designs.flatMap((d) => (d.design ? [`${t.site.base}designs/${d.design.id}/`] : [])),
-      ...["", "catalogue/", "rules/", "try/"].map((p) => `${t.site.base}${p}`),
+      ...["", "catalogue/", "catalogue/op-amps/", "catalogue/comparators/", "catalogue/diodes/", "rules/", "try/"].map(
+        (p) => `${t.site.base}${p}`,
+      ),
     ];
     expect(expected.filter((p) => !paths.has(p))).toEqual([]);
   });

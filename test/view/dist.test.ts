@@ -105,10 +105,11 @@ afterAll(() => {
 });
 
 describe("the built site", () => {
-  it("has a page for every part class and every design, the catalogue, the rules and the home page", () => {
+  it("has a page for every part class and every design, the catalogue and each kind's, the rules and the home page", () => {
     const expected = [
       BASE,
       `${BASE}catalogue/`,
+      ...["op-amps", "comparators", "diodes"].map((k) => `${BASE}catalogue/${k}/`),
       `${BASE}rules/`,
       ...data.catalogue.parts.map((p) => `${BASE}parts/${p.id}/`),
       ...data.designs.map((d) => `${BASE}designs/${d.design?.id}/`),
@@ -365,22 +366,35 @@ describe("a long shortlist: vibration-2v-split-2v5's buffer", () => {
 });
 
 describe("the other pages", () => {
-  it("lists every class in the catalogue tables, units in the headers, with JavaScript off", () => {
+  it("lists every class on the catalogue's front page, one line each, with JavaScript off", () => {
     const html = page(`${BASE}catalogue/`);
-    expect(html.match(/<tr data-id="/g)?.length).toBe(data.catalogue.parts.length);
-    for (const header of [
-      "Offset max (mV)",
-      "Bias current max (nA)",
-      "Gain-bandwidth (MHz)",
-      "Slew rate (V/µs)",
-      "Propagation delay (ns)",
-      "Reverse leakage (nA)",
-    ]) {
-      expect(html).toContain(`>${header}</th>`);
-    }
+    const rows = (html.match(/<tbody>.*?<\/tbody>/gs) ?? []).join("").match(/<tr[ >]/g) ?? [];
+    expect(rows.length).toBe(data.catalogue.parts.length);
+    for (const header of ["Id", "Name", "Status", "Tags"]) expect(html).toContain(`>${header}</th>`);
+    // The parameters are on each kind's page, linked from here.
+    expect(html).not.toContain(">Gain-bandwidth (MHz)</th>");
+    for (const k of ["op-amps", "comparators", "diodes"]) expect(html).toContain(`href="${k}/index.html"`);
     expect(html).toMatch(/<form class="filters" id="catalogue-filters"[^>]*hidden/);
     // A classic script (it also runs from a folder opened from disk), linked relative to the page.
     expect(html).toMatch(/<script defer src="\.\.\/scripts\/catalogue\.js"><\/script>/);
+  });
+
+  it.each([
+    ["op-amps", "op-amp", ["Offset max (mV)", "Bias current max (nA)", "Gain-bandwidth (MHz)", "Slew rate (V/µs)"]],
+    ["comparators", "comparator", ["Propagation delay (ns)"]],
+    ["diodes", "diode", ["Reverse leakage (nA)"]],
+  ])("lists every %s class with every parameter, units in the headers, with JavaScript off", (path, kind, headers) => {
+    const html = page(`${BASE}catalogue/${path}/`);
+    const rows = (html.match(/<tbody>.*?<\/tbody>/gs) ?? []).join("").match(/<tr[ >]/g) ?? [];
+    expect(rows.length).toBe(data.catalogue.parts.filter((p) => p.kind === kind).length);
+    for (const header of headers) expect(html).toContain(`>${header}</th>`);
+    expect(html).toMatch(/<form class="filters" id="catalogue-filters"[^>]*hidden/);
+    expect(html).not.toContain('id="catalogue-kind"');
+    expect(html).toMatch(/<script defer src="\.\.\/\.\.\/scripts\/catalogue\.js"><\/script>/);
+    // An empty cell says so to a screen reader, and sorts last (class nr).
+    expect(html).toContain(
+      '<td class="nr"><span aria-hidden="true">—</span><span class="visually-hidden">not rated</span></td>',
+    );
   });
 
   it("shows a part's parameters in SI and its verdict in every design", () => {

@@ -45,6 +45,30 @@ describe("the try page's engine", () => {
     await expect(page.loadTopologies(["no-such"])).rejects.toThrow("unknown topology no-such");
   });
 
+  // A held divider (issue 16): rectify-and-sign's window check and the other topologies' refusal
+  // come from the topology modules, so the page must give the same problems once they are in.
+  it.each([
+    ["fits the window", 39000, 13000],
+    ["leaves the window", 30000, 13000],
+  ] as const)("reads a held divider that %s in every topology as the CLI does", async (_what, r1, r2) => {
+    await page.loadTopologies(page.topologiesFor("all"));
+    const base = DEMO_DESIGNS[0]!.raw as { signal: object; front_end: object };
+    for (const topology of TOPOLOGIES) {
+      const input = {
+        ...base,
+        topology,
+        signal: { ...base.signal, peak_v: 10, source_ohm: 1000 },
+        front_end: { ...base.front_end, window_v: 2.5, divider_r1_ohm: r1, divider_r2_ohm: r2 },
+      };
+      const theirs = cli.parseDesignValue("d.json", input);
+      expect(page.parseDesignValue("d.json", input), topology).toEqual(theirs);
+      const messages = theirs.problems.map((p) => p.message).join("\n");
+      // Not vacuous: the checks that come from the modules do fire.
+      if (topology === "offset-to-mid-rail") expect(messages).toMatch(/has no R1\/R2 divider to hold/);
+      if (topology === "rectify-and-sign" && r1 === 30000) expect(messages).toMatch(/outside the window/);
+    }
+  });
+
   describe.each(TOPOLOGIES)("in %s", (topology) => {
     it.each(DEMO_DESIGNS.map((d) => [d.file, d.raw] as const))(
       "%s reads and evaluates as the CLI has it",

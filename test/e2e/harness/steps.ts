@@ -20,13 +20,22 @@ export async function tryPageReady(page: Page): Promise<void> {
   await page.locator("#try-results .try-role").first().waitFor();
 }
 
-/** Ids of the catalogue rows a reader can see, table by table, top to bottom. */
+/** Ids of the catalogue rows a reader can see, table by table, top to bottom (a row's id is its first cell). */
 export function visibleCatalogueRows(page: Page): Promise<string[]> {
   return page.evaluate(() =>
     [...document.querySelectorAll<HTMLTableRowElement>("table.catalogue-table tbody tr")]
       .filter((tr) => tr.checkVisibility())
-      .map((tr) => tr.dataset.id ?? ""),
+      .map((tr) => tr.cells[0]?.textContent?.trim() ?? ""),
   );
+}
+
+/** The catalogue row of one class: the row whose first cell is its id. */
+export function catalogueRow(page: Page, id: string): Locator {
+  return page.locator("table.catalogue-table tbody tr").filter({
+    has: page.locator("td:first-child > code", {
+      hasText: new RegExp(`^${id.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}$`),
+    }),
+  });
 }
 
 export type Focused = {
