@@ -3,6 +3,7 @@ import { chooseDivider, heldDivider, loadedRatio, theveninOhm, type Divider } fr
 import type { Design } from "../core/schemas/design.ts";
 import { formatSI } from "../core/units.ts";
 import { si } from "./display.ts";
+import { seriesInOhm } from "./converter-drive.ts";
 import type { DesignProblem } from "../core/engine/result.ts";
 
 export type FrontEnd = {
@@ -18,10 +19,12 @@ export function frontEnd(
   design: Design,
   windowV = design.front_end.window_v,
 ): FrontEnd | { ok: false; problems: DesignProblem[] } {
-  const { peak_v, source_ohm } = design.signal;
+  const { peak_v } = design.signal;
+  // The source resistance, and the protection resistor the signal also passes
+  // through, are in series with R1: the ratio the search, the window, the budget
+  // and the firmware constant use is the loaded one (SPEC §11.1).
+  const source_ohm = seriesInOhm(design);
   const target = Math.min(1, windowV / peak_v);
-  // The source resistance is in series with R1: the ratio the search, the window,
-  // the budget and the firmware constant use is the loaded one (SPEC §11.1).
   // Resistors the design holds are used as given, even where the peak would need no divider:
   // they are on the board (the schema has both or neither, rectify-and-sign's check the window).
   const { divider_r1_ohm: r1, divider_r2_ohm: r2 } = design.front_end;
@@ -59,7 +62,8 @@ export function frontEnd(
 export function heldDividerFits(design: Design): DesignProblem[] {
   const { divider_r1_ohm: r1, divider_r2_ohm: r2, window_v } = design.front_end;
   if (r1 === undefined || r2 === undefined) return [];
-  const { peak_v, source_ohm } = design.signal;
+  const { peak_v } = design.signal;
+  const source_ohm = seriesInOhm(design);
   const k = loadedRatio(r1, r2, source_ohm);
   // The same float allowance as the search's k ≤ target.
   if (k * peak_v <= window_v * (1 + 1e-12)) return [];

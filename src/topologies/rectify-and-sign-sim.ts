@@ -11,6 +11,7 @@ import type { Diode } from "../core/schemas/diode.ts";
 import type { OpAmp } from "../core/schemas/op-amp.ts";
 import type { ChainBuild } from "../core/sim/chain.ts";
 import { comparatorModel, diodeModel, opAmpModel } from "../core/sim/models.ts";
+import { seriesInOhm } from "./converter-drive.ts";
 
 export function rectifyAndSignChain(result: DesignResult, catalogue: Catalogue): ChainBuild {
   const { design, derived } = result;
@@ -35,8 +36,9 @@ export function rectifyAndSignChain(result: DesignResult, catalogue: Catalogue):
   ].filter((r): r is string => r !== null);
   if (missing.length > 0) return { ok: false, reason: `no part fits ${missing.join(", ")}` };
 
-  const rs = design.signal.source_ohm;
   const div = derived.divider;
+  // The source and any protection resistor, as the divider was chosen with (SPEC §11.1).
+  const rs = div ? div.source_ohm : seriesInOhm(design);
   // The loaded ratio (SPEC §11.1): the source's resistance is in series with R1.
   const k = div ? div.bottom_ohm / (rs + div.top_ohm + div.bottom_ohm) : 1;
   const rth = div ? ((rs + div.top_ohm) * div.bottom_ohm) / (rs + div.top_ohm + div.bottom_ohm) : rs;

@@ -611,15 +611,16 @@ export function dividerTerms(design: Design, d: Divider): BudgetTerm[] {
     ),
   ];
   const ts = design.signal.source_tolerance;
-  if (ts !== undefined && d.source_ohm > 0) {
-    const sdev = sourceRatioDeviation(d, ts);
+  const rs = design.signal.source_ohm;
+  if (ts !== undefined && rs > 0) {
+    const sdev = sourceRatioDeviation(d, ts, rs);
     const sworst = Math.max(Math.abs(sdev.high), Math.abs(sdev.low));
     terms.push(
       budgetTerm(
         "source-resistance",
         "source resistance tolerance, through the divider",
         sworst * peak,
-        `${kText}; Rs ± ${pct(ts)}: k changes by +${pct(sdev.high)} / −${pct(-sdev.low)}; ${pct(sworst)} × ${formatSI(peak, "V")} = ${formatSI(sworst * peak, "V")}`,
+        `${kText}; the source's ${si(rs, "Ω")} ± ${pct(ts)}: k changes by +${pct(sdev.high)} / −${pct(-sdev.low)}; ${pct(sworst)} × ${formatSI(peak, "V")} = ${formatSI(sworst * peak, "V")}`,
         "one-point",
       ),
     );
@@ -660,7 +661,7 @@ function display(design: Design, d: Derived): DisplayGroup[] {
         { label: "Target ratio = window ÷ peak", value: ratio(d.target_ratio) },
         { label: `Top resistor R1 (${from})`, value: si(d.divider.top_ohm, "Ω") },
         { label: `Bottom resistor R2 (${from})`, value: si(d.divider.bottom_ohm, "Ω") },
-        { label: "Source resistance Rs, in series with R1", value: si(d.divider.source_ohm, "Ω") },
+        { label: "Source (and protection) resistance Rs, in series with R1", value: si(d.divider.source_ohm, "Ω") },
         { label: "Ratio k = R2 / (Rs + R1 + R2)", value: ratio(d.divider.ratio) },
         held
           ? { label: "Total R1 + R2", value: si(d.divider.total_ohm, "Ω") }

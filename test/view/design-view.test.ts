@@ -40,7 +40,7 @@ describe("derivedGroups", () => {
       "Target ratio = window ÷ peak": "0.25",
       "Top resistor R1 (E24)": "30 kΩ",
       "Bottom resistor R2 (E24)": "10 kΩ",
-      "Source resistance Rs, in series with R1": "0 Ω",
+      "Source (and protection) resistance Rs, in series with R1": "0 Ω",
       "Ratio k = R2 / (Rs + R1 + R2)": "0.25",
       "Total R1 + R2": "40 kΩ, as asked",
       "Why this total":
@@ -74,7 +74,7 @@ describe("derivedGroups", () => {
       {
         "Bottom resistor R2 (held)": "13 kΩ",
         "Ratio k = R2 / (Rs + R1 + R2)": "0.2453",
-        "Source resistance Rs, in series with R1": "1 kΩ",
+        "Source (and protection) resistance Rs, in series with R1": "1 kΩ",
         "Target ratio = window ÷ peak": "0.25",
         "Top resistor R1 (held)": "39 kΩ",
         "Total R1 + R2": "52 kΩ",

@@ -121,11 +121,15 @@ export function loadedRatioDeviation(d: Divider, t: number): { high: number; low
   return { high, low };
 }
 
-/** Worst-case change of the loaded ratio over Rs ± t with R1 and R2 nominal (SPEC §11.1's source term). */
-export function sourceRatioDeviation(d: Divider, t: number): { high: number; low: number } {
+/**
+ * Worst-case change of the loaded ratio over Rs ± t with R1 and R2 nominal
+ * (SPEC §11.1's source term). `varying` is the part of the series resistance
+ * the tolerance applies to (the source's own, not a protection resistor's).
+ */
+export function sourceRatioDeviation(d: Divider, t: number, varying = d.source_ohm): { high: number; low: number } {
   const k = d.ratio;
   return {
-    high: loadedRatio(d.top_ohm, d.bottom_ohm, d.source_ohm * (1 - t)) / k - 1,
-    low: loadedRatio(d.top_ohm, d.bottom_ohm, d.source_ohm * (1 + t)) / k - 1,
+    high: loadedRatio(d.top_ohm, d.bottom_ohm, d.source_ohm - varying * t) / k - 1,
+    low: loadedRatio(d.top_ohm, d.bottom_ohm, d.source_ohm + varying * t) / k - 1,
   };
 }

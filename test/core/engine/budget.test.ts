@@ -118,7 +118,7 @@ describe("GUM combination (JCGM 100:2008)", () => {
 describe("every term carries a formula with its numbers and what removes it (SPEC §11.10)", () => {
   const d = designFor({
     id: "terms-case",
-    signal: { peak_v: 10, source_tolerance: 0.1 },
+    signal: { peak_v: 10, source_ohm: 1000, source_tolerance: 0.1 },
     adc: { reference_tempco_ppm_per_c: 50, offset_lsb: 2, gain_error: 0.001, inl_lsb: 1 },
     temperature: { min_c: 0, max_c: 50 },
   });
