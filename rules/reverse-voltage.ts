@@ -23,7 +23,7 @@ export const reverseVoltage = defineRule({
   unit: "V",
   checks: "The diode blocks the largest reverse voltage its position sees.",
   formula:
-    "two-diode inverting pump: each diode blocks drive_v − Vf (Vf at the hot end, where it is smallest); half-wave rectifier: the off diode sees W + Vf (Vf at the cold end); clamp diode: |V−|; margin = vr_max_v − needed",
+    "two-diode inverting pump: each diode blocks drive_v − Vf (Vf at the hot end, where it is smallest); half-wave rectifier: the off diode sees W + Vf (Vf at the cold end); clamp diode: |V−| at its deepest (no load, or the ripple's trough); margin = vr_max_v − needed",
   source:
     "Node voltages of the diode charge-pump inverter and the inverting half-wave precision rectifier (SPEC §11.12; Vf −2 mV/°C, Sedra & Smith); datasheet maximum reverse voltage.",
   policy: "headroom_margin_v",

@@ -263,8 +263,9 @@ function evaluateWith({ design, catalogue, role }: TopologyRun, draws: readonly 
       {
         stage: "diode",
         label: "the clamp diode",
-        reverse_v: Math.max(0, -negative_v),
-        reverse_what: "|V−|, when the comparator output sits low",
+        // Stress at the rail's deepest point (no load, or the ripple's trough), not its loaded DC level.
+        reverse_v: Math.max(0, -deepest_v),
+        reverse_what: "|V−| at its deepest, when the comparator output sits low",
         // The comparator's low output goes no lower than the rail's deepest point (no load, or ripple's trough).
         floor_v: Math.min(0, deepest_v),
         leakage_ohm: design.logic.pull_down_ohm,

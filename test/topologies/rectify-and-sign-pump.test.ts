@@ -79,3 +79,19 @@ describe("rectify-and-sign: the pump carries the parts (issue 16)", () => {
     expect(f?.reason).toContain("shallower than the");
   });
 });
+
+describe("the clamp diode's reverse stress on a pumped rail (SPEC §11.12)", () => {
+  it("is |V−| at the rail's deepest point (the no-load rail −(V_d − 2V_F) or the ripple's trough), not its loaded level", () => {
+    const r = run("oa-light");
+    const neg = r.derived.negative;
+    if (neg.kind !== "charge-pump") throw new Error("expected a pumped rail");
+    const deepest = Math.min(neg.no_load_v, neg.dc_v - neg.ripple_v / 2);
+    const f = r.roles
+      .find((x) => x.role === "clamp-diode")
+      ?.resultOf("d-pump")
+      ?.findings.find((x) => x.rule === "reverse-voltage");
+    expect(f?.needed).toBeCloseTo(-deepest, 12);
+    // Deeper than the loaded worst level the other checks use, by the droop plus half the ripple at least.
+    expect(-deepest).toBeGreaterThan(-neg.worst_v);
+  });
+});
