@@ -1,11 +1,12 @@
 // `npm run build`: validate the data first, build into a scratch folder, and
 // only then swap it in for dist/, so a failed build never touches the last
-// good site (issue: nothing lost).
-import { spawnSync } from "node:child_process";
+// good site (issue: nothing lost). Astro builds in this process, so the pages
+// reuse the data set validation has read and evaluated (src/node/site-data.ts).
 import { existsSync, mkdirSync, readFileSync, renameSync, rmSync, writeFileSync } from "node:fs";
 import { resolve } from "node:path";
 import { formatProblem } from "../src/core/problems.ts";
 import { loadDataSet } from "../src/node/load-data.ts";
+import { LOADED_DATA } from "../src/node/site-data.ts";
 
 const root = resolve(import.meta.dirname, "..");
 const dataDir = resolve(process.env.RAILSIEVE_DATA ?? resolve(root, "data"));
@@ -13,7 +14,8 @@ const outDir = resolve(root, process.env.RAILSIEVE_DIST ?? "dist");
 const scratch = `${outDir}.building`;
 const old = `${outDir}.old`;
 
-const { problems } = loadDataSet(dataDir);
+const set = loadDataSet(dataDir);
+const { problems } = set;
 if (problems.length > 0) {
   for (const p of problems) console.error(formatProblem(p));
   console.error(
@@ -23,26 +25,33 @@ if (problems.length > 0) {
 }
 
 rmSync(scratch, { recursive: true, force: true });
-const astro = resolve(root, "node_modules/astro/bin/astro.mjs");
 // Astro keeps intermediate files in the project's .astro/ whatever the output
 // folder, so two builds at once (tests build several sites) must take turns.
 const release = acquireLock(resolve(root, ".astro/railsieve-build.lock"));
-const run = spawnSync(process.execPath, [astro, "build", "--silent"], {
-  cwd: root,
-  stdio: "inherit",
-  env: { ...process.env, RAILSIEVE_OUT: scratch, RAILSIEVE_DATA: dataDir, ASTRO_TELEMETRY_DISABLED: "1" },
-});
+// astro.config.mjs reads these when the build loads it.
+Object.assign(process.env, { RAILSIEVE_OUT: scratch, RAILSIEVE_DATA: dataDir, ASTRO_TELEMETRY_DISABLED: "1" });
+(globalThis as { [LOADED_DATA]?: unknown })[LOADED_DATA] = { dataDir, set };
+let failure: unknown;
+try {
+  const { build } = await import("astro");
+  await build({ root, logLevel: "silent" });
+} catch (e) {
+  failure = e;
+}
 release();
-if (run.status !== 0) {
+if (failure !== undefined) {
   rmSync(scratch, { recursive: true, force: true });
+  console.error(failure instanceof Error ? failure.message : String(failure));
   console.error("railsieve: the site build failed; the previous site in dist/ is unchanged");
-  process.exit(run.status ?? 1);
+  process.exit(1);
 }
 rmSync(old, { recursive: true, force: true });
 if (existsSync(outDir)) renameSync(outDir, old);
 renameSync(scratch, outDir);
 rmSync(old, { recursive: true, force: true });
 console.log(`railsieve: site built in ${outDir}`);
+// Astro's build can leave handles open (its file watchers); the work is done.
+process.exit(0);
 
 /** A lock folder holding the owner's pid; a lock whose owner has died is taken over. */
 function acquireLock(lock: string): () => void {

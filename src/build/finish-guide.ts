@@ -30,9 +30,16 @@ export async function finishGuide(
 ): Promise<{ pages: number; reports: number }> {
   await writeClassicScripts(root, dir);
   const sitePath = (path: string) => relative(dir, path).split(sep).join("/");
+  // Thousands of pages name the same few files (styles, scripts): each is looked up once.
+  const folders = new Map<string, boolean>();
   const isFolder = (p: string) => {
-    const path = join(dir, ...p.split("/"));
-    return existsSync(path) && statSync(path).isDirectory();
+    let known = folders.get(p);
+    if (known === undefined) {
+      const path = join(dir, ...p.split("/"));
+      known = existsSync(path) && statSync(path).isDirectory();
+      folders.set(p, known);
+    }
+    return known;
   };
   const pages = htmlFiles(dir).filter((f) => sitePath(f) !== NOT_FOUND_PAGE);
   const left: string[] = [];

@@ -4,7 +4,7 @@
 import { resolve } from "node:path";
 import type { Catalogue } from "../core/catalogue.ts";
 import { formatProblem } from "../core/problems.ts";
-import { loadDataSet } from "./load-data.ts";
+import { loadDataSet, type DataSet } from "./load-data.ts";
 import type { DesignEntry } from "../view/design-entry.ts";
 
 export type SiteData = {
@@ -16,11 +16,25 @@ export type SiteData = {
 
 let cached: SiteData | undefined;
 
+/**
+ * scripts/build.ts reads and evaluates the data folder to validate it before it
+ * builds, in the same process: it leaves the set here so the pages use it
+ * rather than read and evaluate 2,000 parts a second time (issue 18). Astro
+ * bundles this module, so a module variable would not be shared; a global is.
+ */
+export const LOADED_DATA = Symbol.for("railsieve.loaded-data");
+type Loaded = { dataDir: string; set: DataSet };
+
+function loaded(dataDir: string): DataSet {
+  const handed = (globalThis as { [LOADED_DATA]?: Loaded })[LOADED_DATA];
+  return handed && handed.dataDir === dataDir ? handed.set : loadDataSet(dataDir);
+}
+
 /** Reads RAILSIEVE_DATA (default ./data) and evaluates every design, once. */
 export function siteData(): SiteData {
   if (cached) return cached;
   const dataDir = resolve(process.env.RAILSIEVE_DATA ?? "data");
-  const set = loadDataSet(dataDir);
+  const set = loaded(dataDir);
   if (set.problems.length > 0) {
     // scripts/build.ts validates first; this guards `astro dev` and direct `astro build`.
     throw new Error(

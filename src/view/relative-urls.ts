@@ -50,13 +50,60 @@ export type Relativized = {
 };
 
 /**
+ * Candidates for a URL attribute in the page's text: a name, then "=" and a value
+ * in any quoting. In a page as Astro writes it every attribute is lower-case and
+ * double-quoted, and text never holds a bare double quote (Astro and escape.ts
+ * write it as an entity), so each ` name="value"` is an attribute.
+ */
+const CANDIDATE = /\s(href|src|action|poster|data-root)(\s*=\s*)("[^"]*"|'[^']*'|[^\s>]*)/gi;
+
+/**
+ * The quick way for a page as Astro writes it: each URL attribute found by
+ * CANDIDATE and rewritten in place. Undefined, and the page goes through the
+ * full tokenizer, when anything could make that wrong: an inline script or
+ * style (raw text), a double quote in text, or a candidate not written exactly ` name="value"` with no
+ * entity in its value. A build has thousands of pages: this is several times
+ * faster than tokenizing each (issue 18).
+ */
+function quickRelativize(html: string, page: string, base: string, isFolder: IsFolder): Relativized | undefined {
+  // Raw text (inline script or style), or a bare quote in text (">…\"" before the next tag).
+  if (/<style\b|<script\b(?![^>]*\ssrc=)|>[^<>]*"/i.test(html)) return undefined;
+  const pieces: string[] = [];
+  const left: string[] = [];
+  let at = 0;
+  for (const m of html.matchAll(CANDIDATE)) {
+    const [whole, name = "", equals, quoted = ""] = m;
+    if (equals !== "=" || name !== name.toLowerCase() || !quoted.startsWith('"') || quoted.includes("&")) {
+      return undefined;
+    }
+    const value = quoted.slice(1, -1).trim();
+    let relative = relativeUrl(value, page, base, isFolder);
+    if (relative === undefined) {
+      if (value.startsWith("/") && !value.startsWith("//")) left.push(`${name}="${value}"`);
+      continue;
+    }
+    if (name === "data-root") relative = relative.replace(/index\.html$/, "") || "./";
+    const start = (m.index ?? 0) + 1;
+    pieces.push(html.slice(at, start), `${name}="${escapeAttr(relative)}"`);
+    at = start + whole.length - 1;
+  }
+  pieces.push(html.slice(at));
+  return { html: pieces.join(""), left };
+}
+
+/** The page with every site-absolute URL under the base made relative to it. */
+export function relativizePage(html: string, page: string, base: string, isFolder: IsFolder): Relativized {
+  return quickRelativize(html, page, base, isFolder) ?? tokenizedRelativize(html, page, base, isFolder);
+}
+
+/**
  * The page with every site-absolute URL under the base made relative to it.
  * htmlparser2 tokenizes (script and style contents stay text) and reports each
  * attribute with its span (startIndex … endIndex); attributes arrive in
  * document order, so the pieces are joined once (a page has thousands of
  * links, and a build has thousands of pages: this runs in tens of ms a page).
  */
-export function relativizePage(html: string, page: string, base: string, isFolder: IsFolder): Relativized {
+export function tokenizedRelativize(html: string, page: string, base: string, isFolder: IsFolder): Relativized {
   const pieces: string[] = [];
   const left: string[] = [];
   let at = 0;

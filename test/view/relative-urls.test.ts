@@ -3,7 +3,14 @@
 // relative link, resolved against its page, must name the same file as the
 // site-absolute link it replaces, with the folder's index.html.
 import { describe, expect, it } from "vitest";
-import { absoluteUrls, relativePath, relativeUrl, relativizeHtml } from "../../src/view/relative-urls.ts";
+import {
+  absoluteUrls,
+  relativePath,
+  relativeUrl,
+  relativizeHtml,
+  relativizePage,
+  tokenizedRelativize,
+} from "../../src/view/relative-urls.ts";
 
 const folders = new Set(["designs/x", "parts/p-1", "catalogue"]);
 const isFolder = (p: string) => folders.has(p);
@@ -83,5 +90,26 @@ describe("relativizeHtml", () => {
   it("keeps an ampersand in a query escaped", () => {
     const out = relativizeHtml(`<a href="/catalogue/?q=a&amp;kind=op-amp">x</a>`, "index.html", "/", isFolder);
     expect(out).toBe(`<a href="catalogue/index.html?q=a&amp;kind=op-amp">x</a>`);
+  });
+});
+
+describe("relativizePage's quick way and the tokenizer", () => {
+  // The quick way only runs on pages as Astro writes them; everything else must fall back and still agree.
+  it.each([
+    [
+      "a page as Astro writes it",
+      `<html data-root="/"><body><a href="/parts/p-1/">p</a><img src="/x.svg" alt=""></body></html>`,
+    ],
+    ["a single-quoted attribute", `<a href='/catalogue/'>c</a> <a href="/rules/">r</a>`],
+    ["an entity in a URL", `<a href="/catalogue/?q=a&amp;kind=x">c</a>`],
+    ["an upper-case name", `<a HREF="/catalogue/">c</a>`],
+    ["a bare quote in text", `<p>say href="/x/"</p><a href="/rules/">r</a>`],
+    ["an inline script", `<script>var s = ' src="/x/"';</script><a href="/rules/">r</a>`],
+    ["spaces around =", `<a href = "/rules/">r</a>`],
+    ["an attribute that only starts like one", `<img srcset="/a.png 2x" data-href="/b/" src="/c.png">`],
+  ])("agree on %s", (_, html) => {
+    for (const page of ["index.html", "designs/x/index.html"]) {
+      expect(relativizePage(html, page, "/", isFolder)).toEqual(tokenizedRelativize(html, page, "/", isFolder));
+    }
   });
 });
