@@ -14,9 +14,7 @@ import { benchResults, type BenchResults } from "./results.ts";
 import { measureSimulation } from "./simulate.ts";
 import { median } from "./stats.ts";
 import { measureValidation } from "./validate.ts";
-import { siteWeight, tryPageWeight } from "./weight.ts";
-import { DEFAULT_INPUT } from "../src/client/try/defaults.ts";
-import { BUNDLED_TOPOLOGY, topologiesFor } from "../src/client/try/engine.ts";
+import { defaultDesignChunks, siteWeight, tryPageWeight } from "./weight.ts";
 
 const quick = process.argv.includes("--quick");
 // Checked first, so a missing browser costs a line, not a minute of benchmarks.
@@ -107,8 +105,7 @@ try {
   await browser.close();
 
   // The default design's topologies that do not come with the page's script are fetched before its first answer.
-  const firstAnswerChunks = topologiesFor(DEFAULT_INPUT.topology).filter((id) => id !== BUNDLED_TOPOLOGY.id);
-  const weight = tryPageWeight(demoSite, firstAnswerChunks);
+  const weight = tryPageWeight(demoSite, defaultDesignChunks());
   log(
     `weight: try-page JavaScript ${weight.try_js_first_answer_gzip_bytes} B gzipped for the first answer, ${weight.try_js_gzip_bytes} B all chunks; catalogue JSON ${weight.catalogue_json_gzip_bytes} B`,
   );

@@ -10,6 +10,8 @@
 import { existsSync, readdirSync, readFileSync, statSync } from "node:fs";
 import { basename, dirname, join, relative, resolve } from "node:path";
 import { gzipSync } from "node:zlib";
+import { DEFAULT_INPUT } from "../src/client/try/defaults.ts";
+import { BUNDLED_TOPOLOGY, topologiesFor } from "../src/client/try/engine.ts";
 
 function gzipBytes(path: string): number {
   return gzipSync(readFileSync(path), { level: 9 }).length;
@@ -36,6 +38,11 @@ function closure(dist: string, roots: readonly string[], dynamic: boolean): Set<
     if (dynamic) for (const m of code.matchAll(DYNAMIC_IMPORT)) pending.push(fileOf(dist, file, m[1] ?? ""));
   }
   return seen;
+}
+
+/** The chunks the page fetches for the default design besides its script: its topologies not bundled with the page. */
+export function defaultDesignChunks(): string[] {
+  return topologiesFor(DEFAULT_INPUT.topology).filter((id) => id !== BUNDLED_TOPOLOGY.id);
 }
 
 export type TryPageFiles = { firstAnswer: string[]; all: string[] };

@@ -7,7 +7,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { gzipSync } from "node:zlib";
 import { afterAll, describe, expect, it } from "vitest";
-import { tryPageFiles, tryPageWeight } from "../../bench/weight.ts";
+import { defaultDesignChunks, tryPageFiles, tryPageWeight } from "../../bench/weight.ts";
 
 const dist = mkdtempSync(join(tmpdir(), "railsieve-weight-"));
 afterAll(() => rmSync(dist, { recursive: true, force: true }));
@@ -49,6 +49,10 @@ describe("tryPageWeight", () => {
     expect(tryPageWeight(dist, ["topo-x"]).try_js_first_answer_gzip_bytes).toBe(
       gz("_astro/page.js", "_astro/shared.js", "_astro/topo-x.Ab1.js", "_astro/rules.js"),
     );
+  });
+
+  it("adds no chunk for the default design, whose topology comes with the page's script", () => {
+    expect(defaultDesignChunks()).toEqual([]);
   });
 
   it("refuses a chunk name the page does not import, rather than leave it out of the figure", () => {

@@ -8,7 +8,7 @@
 // fails to load is said plainly, with the address kept for a reload.
 import type { Browser, Page, Route } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { tryPageFiles } from "../../bench/weight.ts";
+import { defaultDesignChunks, tryPageFiles } from "../../bench/weight.ts";
 import { DEFAULT_DRAFT } from "../../src/client/try/defaults.ts";
 import { rawFromDraft } from "../../src/client/try/draft.ts";
 import { stateFromUrl } from "../../src/client/try/url-state.ts";
@@ -87,7 +87,7 @@ describe.skipIf(!browserReady)("the try page's topologies", () => {
       .filter((u) => new URL(u).pathname.endsWith(".js"))
       .map((u) => new URL(u).pathname.slice(new URL(t.site.home).pathname.length))
       .sort();
-    expect(fetched).toEqual(tryPageFiles(t.site.dir).firstAnswer);
+    expect(fetched).toEqual(tryPageFiles(t.site.dir, defaultDesignChunks()).firstAnswer);
   });
 
   it.each([...ids.filter((id) => id !== DEFAULT_DRAFT["topology"]), "all", DEFAULT_DRAFT["topology"] ?? ""])(
