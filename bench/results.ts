@@ -30,6 +30,9 @@ export const benchResults = z.strictObject({
     })
     .optional(),
   weight: z.strictObject({
+    /** What the try page fetches for its first answer on the default design (the 60 KB target's figure). */
+    try_js_first_answer_gzip_bytes: z.number().int().positive().optional(),
+    /** Every chunk the try page can fetch, static and dynamic imports alike. */
     try_js_gzip_bytes: z.number().int().positive(),
     catalogue_json_gzip_bytes: z.number().int().positive(),
   }),

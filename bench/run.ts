@@ -14,7 +14,7 @@ import { benchResults, type BenchResults } from "./results.ts";
 import { measureSimulation } from "./simulate.ts";
 import { median } from "./stats.ts";
 import { measureValidation } from "./validate.ts";
-import { siteWeight, tryPageWeight } from "./weight.ts";
+import { defaultDesignChunks, siteWeight, tryPageWeight } from "./weight.ts";
 
 const quick = process.argv.includes("--quick");
 // Checked first, so a missing browser costs a line, not a minute of benchmarks.
@@ -104,9 +104,10 @@ try {
   );
   await browser.close();
 
-  const weight = tryPageWeight(demoSite);
+  // The default design's topologies that do not come with the page's script are fetched before its first answer.
+  const weight = tryPageWeight(demoSite, defaultDesignChunks());
   log(
-    `weight: try-page JavaScript ${weight.try_js_gzip_bytes} B gzipped, catalogue JSON ${weight.catalogue_json_gzip_bytes} B`,
+    `weight: try-page JavaScript ${weight.try_js_first_answer_gzip_bytes} B gzipped for the first answer, ${weight.try_js_gzip_bytes} B all chunks; catalogue JSON ${weight.catalogue_json_gzip_bytes} B`,
   );
 
   results = benchResults.parse({
@@ -181,8 +182,8 @@ const targets: [string, boolean | undefined, string][] = [
   ["try page p95 ≤ 50 ms, 2,000 parts", results.try_page.large_p95_ms <= 50, `${results.try_page.large_p95_ms} ms`],
   [
     "try-page JavaScript ≤ 60 KB gzipped",
-    results.weight.try_js_gzip_bytes <= 60 * 1024,
-    `${(results.weight.try_js_gzip_bytes / 1024).toFixed(1)} KB`,
+    (results.weight.try_js_first_answer_gzip_bytes ?? Infinity) <= 60 * 1024,
+    `${((results.weight.try_js_first_answer_gzip_bytes ?? 0) / 1024).toFixed(1)} KB first answer (${(results.weight.try_js_gzip_bytes / 1024).toFixed(1)} KB all chunks)`,
   ],
 ];
 log("");

@@ -1,6 +1,7 @@
 // The one place that hands the registries to the engine: the topologies (with
 // the rules of their roles) from src/topologies/, the design schema built from
-// their names. Everything that evaluates or reads a design imports it from here.
+// their names. Everything that evaluates or reads a design imports it from here,
+// except the try page, which loads each topology when named (src/client/try/engine.ts).
 import { designReader } from "./core/designs.ts";
 import { ALL_TOPOLOGIES, createEngine, roleApplies, topologyDesignChecks, valueAt } from "./core/engine/engine.ts";
 import { designSchemaFor } from "./core/schemas/design.ts";

@@ -1,6 +1,6 @@
 // The simulator composed with the topology registry (SPEC §13): a result through
-// its topology's chain. Kept out of engine.ts on purpose: the try page's first
-// script imports engine.ts, and the simulator should load only when asked for.
+// its topology's chain. Kept out of engine.ts so what evaluates need not load
+// the simulator. (The try page composes its own: src/client/try/simulation.ts.)
 import type { Catalogue } from "./core/catalogue-index.ts";
 import type { DesignResult } from "./core/engine/result.ts";
 import type { SimulationOutcome } from "./core/sim/report.ts";

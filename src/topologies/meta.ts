@@ -1,12 +1,13 @@
 // What the try page knows of every topology before it has loaded any (its
 // first script carries this and no topology module): ids in registry order,
-// titles and roles without their rules. Each topology's module (rules, budget
+// titles and roles without their rules or labels. Each topology's module (rules, budget
 // terms, simulation) is loaded when a design names it (src/topologies/load.ts).
 // This repeats what the modules declare; test/topologies/meta.test.ts fails
 // when the two drift apart, so a change to a module's roles is made here too.
 import type { RoleDef } from "../core/engine/topology.ts";
 
-export type RoleMeta = Omit<RoleDef, "rules">;
+/** A role as the page needs it before its topology loads: no rules, and no label (the result carries it). */
+export type RoleMeta = Omit<RoleDef, "rules" | "label">;
 export type TopologyMeta = { id: string; title: string; roles: readonly RoleMeta[] };
 
 export const TOPOLOGY_META: readonly TopologyMeta[] = [
@@ -18,15 +19,12 @@ export const TOPOLOGY_META: readonly TopologyMeta[] = [
         id: "buffer",
         name: "Buffer",
         field: "Buffer op amp",
-        label: "follower after the divider (in = out = ±W)",
         wants: "amplify",
       },
       {
         id: "rectifier",
         name: "Rectifier",
         field: "Rectifier op amp",
-        label:
-          "two-op-amp precision rectifier (a dual, or two singles): stage 1 a half-wave inverter (output −(W + Vf) … +Vf, noise gain 2), stage 2 a summer (output 0 … W, noise gain 4); both inputs at 0 V",
         wants: "amplify",
         count: 2,
       },
@@ -34,14 +32,12 @@ export const TOPOLOGY_META: readonly TopologyMeta[] = [
         id: "sign",
         name: "Sign comparator",
         field: "Sign comparator",
-        label: "sign comparator driving a logic input (an op amp may stand in, at best marginal)",
         wants: "compare",
       },
       {
         id: "pump-diode",
         name: "Pump diode",
         field: "Pump diode",
-        label: "charge-pump diode (two per pump)",
         wants: "rectify",
         count: 2,
         when: [{ path: "supply.negative.kind", is: ["charge-pump"] }],
@@ -50,7 +46,6 @@ export const TOPOLOGY_META: readonly TopologyMeta[] = [
         id: "rectifier-diode",
         name: "Rectifier diode",
         field: "Rectifier diode",
-        label: "precision-rectifier feedback diode",
         wants: "rectify",
         count: 2,
       },
@@ -58,7 +53,6 @@ export const TOPOLOGY_META: readonly TopologyMeta[] = [
         id: "clamp-diode",
         name: "Clamp diode",
         field: "Clamp diode",
-        label: "series diode from the comparator to the logic input",
         wants: "clamp",
         when: [{ path: "logic.level_shift", is: ["diode-clamp"] }],
       },
@@ -66,7 +60,6 @@ export const TOPOLOGY_META: readonly TopologyMeta[] = [
         id: "base-clamp-diode",
         name: "Base clamp diode",
         field: "NPN base clamp diode",
-        label: "diode across the NPN's base and emitter, so a negative output cannot reverse-bias the base",
         wants: "clamp",
         when: [
           { path: "logic.level_shift", is: ["npn-inverter"] },
@@ -83,14 +76,12 @@ export const TOPOLOGY_META: readonly TopologyMeta[] = [
         id: "level-shift",
         name: "Level shift",
         field: "Level-shift op amp",
-        label: "follower after the level-shift network, single supply (in = out = b ± a·peak)",
         wants: "amplify",
       },
       {
         id: "reference-buffer",
         name: "Reference buffer",
         field: "Reference buffer op amp",
-        label: "optional follower driving the network from the ADC reference (in = out = V_ref)",
         wants: "amplify",
         optional: true,
       },
@@ -104,8 +95,6 @@ export const TOPOLOGY_META: readonly TopologyMeta[] = [
         id: "gain-stage",
         name: "Gain stage",
         field: "Gain-stage op amp",
-        label:
-          "non-inverting gain stage after the level-shift network, single supply (in ≈ V_ref/(2·Gs), out = m … V_ref − m)",
         wants: "amplify",
       },
     ],
@@ -118,8 +107,6 @@ export const TOPOLOGY_META: readonly TopologyMeta[] = [
         id: "difference",
         name: "Difference amplifier",
         field: "Difference-amplifier op amp",
-        label:
-          "difference amplifier with REF at V_ref/2, single supply (inputs at the divided common mode, out = REF ± G·peak)",
         wants: "amplify",
       },
     ],

@@ -12,7 +12,7 @@ import { closestFinding, decidingFinding } from "./deciding.ts";
 import { escapeHtml } from "./escape.ts";
 import type { SiteLinks } from "./links.ts";
 import type { Container, Leaf, Piece } from "./pieces.ts";
-import { renderVerdict } from "./verdict.ts";
+import { VERDICT_LOOK } from "./verdict.ts";
 
 export type ListLinks = Pick<SiteLinks, "partUrl" | "rulesUrl">;
 
@@ -43,12 +43,17 @@ export type RoleListInput = {
 export const RANKING_KEYS =
   "Fits are ranked by verdict (pass before marginal), then status (stocked, approved, listed), then cost band (1 lowest; not given last), then the least margin relative to its limit (larger first), then id.";
 
-/** Marks a reader needs beside a part's name: BOM, used by the design, a kind standing in for another. */
-export function partMarks(result: PartResult, role: RoleResult): string {
+/**
+ * Marks a reader needs beside a part's name: BOM, used by the design, a kind
+ * standing in for another. A rejection's line leaves the last out: the role
+ * says which kinds it takes, and a role open to stand-ins rejects hundreds of
+ * them at 2,000 parts, each line repeating it (issue 18).
+ */
+export function partMarks(result: PartResult, role: RoleResult, standIn = true): string {
   const marks: string[] = [];
   if (result.bom) marks.push(`<span class="mark mark-bom">in the BOM</span>`);
   else if (role.chosen === result.part.id) marks.push(`<span class="mark mark-chosen">used by the design</span>`);
-  if (result.part.kind !== role.kind)
+  if (standIn && result.part.kind !== role.kind)
     marks.push(`<span class="mark">${escapeHtml(result.part.kind)} standing in</span>`);
   return marks.length === 0 ? "" : ` ${marks.join(" ")}`;
 }
@@ -56,9 +61,9 @@ export function partMarks(result: PartResult, role: RoleResult): string {
 // A list row is the part's id linking to its page, where its name and every
 // design it appears in are one line each: at 2,000 parts a design page lists
 // thousands of rows, so each carries only what the decision needs.
-function partLink(result: PartResult, { role, links }: RoleListInput): string {
+function partLink(result: PartResult, { role, links }: RoleListInput, standIn = true): string {
   const { part } = result;
-  return `<a href="${escapeHtml(links.partUrl(part.id))}">${escapeHtml(part.id)}</a>${partMarks(result, role)}`;
+  return `<a href="${escapeHtml(links.partUrl(part.id))}">${escapeHtml(part.id)}</a>${partMarks(result, role, standIn)}`;
 }
 
 function rowAttributes(result: PartResult, input: RoleListInput): string {
@@ -90,6 +95,19 @@ function moreButton(input: RoleListInput, key: string, total: number, what: stri
   };
 }
 
+// A fits table runs to hundreds of rows at 2,000 parts (issue 18: no page over
+// 1 MB), so a row carries no class it can do without: the rank and margin
+// columns are set right by the table's CSS, and the verdict cell is the word,
+// its glyph and colour drawn by the stylesheet (the glyph not read aloud, as the
+// badge's aria-hidden glyph was not): a pass, most rows, by the column's own
+// style, any other verdict by its class.
+const VERDICT_CELL: Readonly<Record<PartResult["verdict"], string>> = {
+  pass: `<td>${VERDICT_LOOK.pass.word}</td>`,
+  marginal: `<td class="v-marginal">${VERDICT_LOOK.marginal.word}</td>`,
+  unrated: `<td class="v-unrated">${escapeHtml(VERDICT_LOOK.unrated.word)}</td>`,
+  fail: `<td class="v-fail">${VERDICT_LOOK.fail.word}</td>`,
+};
+
 const FIT_COLUMNS =
   `<thead><tr><th scope="col" class="num">Rank</th><th scope="col">Part</th><th scope="col">Verdict</th>` +
   `<th scope="col">Status</th><th scope="col">Cost</th><th scope="col" class="num">Least margin</th>` +
@@ -110,12 +128,12 @@ export function fitsPiece(input: RoleListInput, from: number, caption: string, i
       open: `<tr${rowAttributes(r, input)}>`,
       close: "</tr>",
       children: [
-        { key: "rank", html: `<td class="num">${from + i}</td>` },
+        { key: "rank", html: `<td>${from + i}</td>` },
         { key: "part", html: `<th scope="row">${partLink(r, input)}</th>` },
-        { key: "verdict", html: `<td>${renderVerdict(r.verdict)}</td>` },
+        { key: "verdict", html: VERDICT_CELL[r.verdict] },
         { key: "status", html: `<td>${escapeHtml(k.status)}</td>` },
         { key: "cost", html: `<td>${escapeHtml(k.cost)}</td>` },
-        { key: "margin", html: `<td class="num">${escapeHtml(k.margin)}</td>` },
+        { key: "margin", html: `<td>${escapeHtml(k.margin)}</td>` },
         { key: "closest", html: `<td>${f ? `${escapeHtml(f.rule)}: ${escapeHtml(marginLine(f))}` : ""}</td>` },
       ],
     };
@@ -146,6 +164,23 @@ export function fitsPiece(input: RoleListInput, from: number, caption: string, i
       ...(more ? [more] : []),
     ],
   };
+}
+
+/**
+ * The fits ranked `from` on as numbered lines, each with its ranking keys: a
+ * topology a design page shows only for comparison (its rejections are group
+ * heads), where a table with the closest finding per row would more than double
+ * the page at 2,000 parts (issue 18). The numbers are the ranks (`start`).
+ */
+export function fitLinesPiece(input: RoleListInput, from: number): Container {
+  const lines: Piece[] = input.role.fits.slice(from - 1).map((r) => {
+    const k = rankingKeys(r);
+    return {
+      key: r.part.id,
+      html: `<li>${partLink(r, input)} ${VERDICT_LOOK[r.verdict].word}, ${escapeHtml(k.status)}, cost ${escapeHtml(k.cost)}, least margin ${escapeHtml(k.margin)}</li>`,
+    };
+  });
+  return { key: "fits", open: `<ol class="fit-lines" start="${from}">`, close: "</ol>", children: lines };
 }
 
 /** The rejections that one rule decides. */
@@ -236,7 +271,7 @@ export function rejectionsPiece(input: RoleListInput): Container {
     const count = input.headsOnly ? 0 : shown(input, key, g.parts.length);
     const lines: Piece[] = g.parts.slice(0, count).map(({ result, finding }) => ({
       key: result.part.id,
-      html: `<li${rowAttributes(result, input)}>${partLink(result, input)} ${escapeHtml(shortLine(finding))}</li>`,
+      html: `<li${rowAttributes(result, input)}>${partLink(result, input, false)} ${escapeHtml(shortLine(finding))}</li>`,
     }));
     return {
       key: `${g.verdict}:${g.rule}`,
@@ -268,7 +303,7 @@ function firstRejections(input: RoleListInput, key: string): Container {
     const why = f ? `${escapeHtml(f.rule)}: ${escapeHtml(shortLine(f))}` : "";
     return {
       key: result.part.id,
-      html: `<li${rowAttributes(result, input)}>${partLink(result, input)} ${why}</li>`,
+      html: `<li${rowAttributes(result, input)}>${partLink(result, input, false)} ${why}</li>`,
     };
   });
   const button = {

@@ -9,7 +9,7 @@ import { TOPOLOGY_LOADERS } from "../../src/topologies/load.ts";
 import { ROLE_META, TOPOLOGY_META } from "../../src/topologies/meta.ts";
 import type { RoleDef } from "../../src/core/engine/topology.ts";
 
-const withoutRules = ({ rules: _rules, ...meta }: RoleDef) => meta;
+const withoutRules = ({ rules: _rules, label: _label, ...meta }: RoleDef) => meta;
 
 describe("topology metadata and loaders", () => {
   it("list the registry's topologies, in its order", () => {

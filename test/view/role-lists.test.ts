@@ -7,6 +7,7 @@ import { evaluateDesign } from "../../src/engine.ts";
 import type { RoleResult } from "../../src/core/engine/result.ts";
 import { pieceHtml } from "../../src/view/pieces.ts";
 import {
+  fitLinesPiece,
   fitsPiece,
   RANKING_KEYS,
   rankingKeys,
@@ -118,10 +119,7 @@ describe("fitsPiece", () => {
     const role = buffer();
     const html = pieceHtml(fitsPiece(input(role), 2, "Fits 2 on"));
     expect(
-      [...html.matchAll(/<tr><td class="num">(\d+)<\/td><th scope="row"><a href="[^"]*">([a-z0-9-]+)</g)].map((m) => [
-        m[2],
-        m[1],
-      ]),
+      [...html.matchAll(/<tr><td>(\d+)<\/td><th scope="row"><a href="[^"]*">([a-z0-9-]+)</g)].map((m) => [m[2], m[1]]),
     ).toEqual(role.fits.slice(1).map((r, i) => [r.part.id, String(i + 2)]));
     // Equal parts but for the cost band: ranked by it, and each row says its own.
     expect(role.fits.map((r) => r.part.id)).toEqual(["oa-c1", "oa-c2", "oa-c3"]);
@@ -140,5 +138,44 @@ describe("fitsPiece", () => {
       cost: "1 of 5",
       margin: `${Math.round(best.relative * 100)} %`,
     });
+  });
+});
+
+describe("fitLinesPiece (a topology shown for comparison)", () => {
+  it("numbers the fits by rank from the given place, one line each with its ranking keys", () => {
+    const role = buffer();
+    const html = pieceHtml(fitLinesPiece(input(role), 2));
+    expect(html.startsWith('<ol class="fit-lines" start="2">')).toBe(true);
+    const lines = [...html.matchAll(/<li><a href="\/sub\/parts\/([a-z0-9-]+)\/">\1<\/a> ([^<]*)<\/li>/g)];
+    expect(lines.map((m) => m[1])).toEqual(role.fits.slice(1).map((r) => r.part.id));
+    for (const [i, r] of role.fits.slice(1).entries()) {
+      const k = rankingKeys(r);
+      expect(lines[i]?.[2]).toBe(`${r.verdict}, ${k.status}, cost ${k.cost}, least margin ${k.margin}`);
+    }
+  });
+});
+
+describe("a role that takes another kind standing in", () => {
+  // The sign role takes comparators first and op amps standing in (src/core/kinds.ts: compare).
+  const sign = () => {
+    const e = evaluateDesign(design({ id: "d1" }), catalogue);
+    if (!e.ok) throw new Error(JSON.stringify(e.problems));
+    const role = e.result.roles.find(
+      (r) => r.kinds.length > 1 && r.fits.concat(r.rejected).some((p) => p.part.kind !== r.kind),
+    );
+    if (!role) throw new Error("no role with a stand-in kind");
+    return role;
+  };
+
+  it("marks a stand-in among the fits, but not on a rejection's line, where the role's kinds say it once", () => {
+    const role = sign();
+    const standIns = [...role.fits, ...role.rejected].filter((p) => p.part.kind !== role.kind);
+    expect(standIns.length).toBeGreaterThan(0);
+    const rejected = pieceHtml(rejectionsPiece(input(role)));
+    expect(rejected).not.toContain("standing in");
+    const fits = pieceHtml(fitsPiece(input(role), 1, "all"));
+    for (const p of role.fits.filter((f) => f.part.kind !== role.kind)) {
+      expect(fits).toContain(`>${p.part.id}</a> <span class="mark">${p.part.kind} standing in</span>`);
+    }
   });
 });

@@ -12,13 +12,21 @@ import type { TopologyDef } from "../../core/engine/topology.ts";
 import type { Catalogue } from "../../core/catalogue-index.ts";
 import { designSchemaFor, type Design } from "../../core/schemas/design.ts";
 import { TOPOLOGY_LOADERS } from "../../topologies/load.ts";
+import { rectifyAndSign } from "../../topologies/rectify-and-sign.ts";
 import { ROLE_META, TOPOLOGY_META } from "../../topologies/meta.ts";
 
 /** Topology ids a design may name, "all" last (as src/engine.ts has them). */
 const ids: string[] = [...TOPOLOGY_META.map((t) => t.id), ALL_TOPOLOGIES];
 export const TOPOLOGY_IDS = ids as [string, ...string[]];
 
-const loaded = new Map<string, TopologyDef>();
+/**
+ * The default design's topology (defaults.ts) comes with the page's first
+ * script: every visit without a link needs it at once, and one file
+ * compresses better than three. The others are fetched when named.
+ */
+export const BUNDLED_TOPOLOGY: TopologyDef = rectifyAndSign;
+
+const loaded = new Map<string, TopologyDef>([[BUNDLED_TOPOLOGY.id, BUNDLED_TOPOLOGY]]);
 const loading = new Map<string, Promise<void>>();
 const engines = new Map<string, Engine>();
 

@@ -8,9 +8,7 @@ import { formatProblem, type Problem } from "../../core/problems.ts";
 import type { Design } from "../../core/schemas/design.ts";
 import { needsCaution } from "../../view/design-view.ts";
 import { joinBase, setSiteBase } from "../../view/links.ts";
-import { shortlistCsv, shortlistCsvName } from "./csv-export.ts";
 import { DEFAULT_DRAFT } from "./defaults.ts";
-import { designFileFromDraft } from "./design-file.ts";
 import { checkDraft, draftFromInput } from "./draft.ts";
 import { areLoaded, evaluateDesign, loadTopologies, topologiesFor } from "./engine.ts";
 import { FIELD_BY_PATH, type Draft } from "./fields.ts";
@@ -149,8 +147,8 @@ class TryPage {
     page.form.addEventListener("submit", (e) => e.preventDefault());
     page.load.addEventListener("click", () => this.loadDemo());
     page.results.addEventListener("click", (e) => this.onResultsClick(e));
-    page.downloadDesign.addEventListener("click", () => this.downloadDesign());
-    page.downloadCsv.addEventListener("click", () => this.downloadCsv());
+    page.downloadDesign.addEventListener("click", () => void this.downloadDesign());
+    page.downloadCsv.addEventListener("click", () => void this.downloadCsv());
     doc.getElementById("try-simulate")?.addEventListener("click", () => {
       this.simulating = true;
       this.queueSimulation(0);
@@ -262,8 +260,9 @@ class TryPage {
 
   /**
    * Fetches topology modules with the results marked busy and the status
-   * saying so; true once they are in. A failure is said in the status, and
-   * the next edit tries again. Only the latest call's outcome shows.
+   * saying so; true once they are in. A failure is said in the status; the
+   * browser remembers a module it could not fetch, so only a reload tries
+   * again. Only the latest call's outcome shows.
    */
   async loadFor(ids: readonly string[]): Promise<boolean> {
     const { page } = this;
@@ -281,7 +280,7 @@ class TryPage {
       if (count !== this.loadCount) return false;
       say(
         page.status,
-        `The page could not load ${what} (${e instanceof Error ? e.message : String(e)}). Edit any field, or choose the topology again, to try once more.`,
+        `The page could not load ${what} (${e instanceof Error ? e.message : String(e)}). Reload the page to try again: the address holds the design.`,
       );
       page.downloadCsv.disabled = true;
       return false;
@@ -296,6 +295,9 @@ class TryPage {
     if (!areLoaded(wanted)) {
       void this.loadFor(wanted).then((ready) => {
         if (ready) this.update({ writeUrl });
+        // The address still follows the choice, so a reload tries the same design again.
+        else if (writeUrl === "after-frame") this.queueAddress();
+        else if (writeUrl !== "none") this.writeUrl(writeUrl === "replace");
       });
       return;
     }
@@ -404,12 +406,27 @@ class TryPage {
     this.pushNext = false;
   }
 
-  downloadDesign(): void {
+  /** Code only a button needs, fetched on its first press; a failed fetch is said beside the buttons. */
+  async buttonCode<T>(load: () => Promise<T>): Promise<T | undefined> {
+    try {
+      return await load();
+    } catch (e) {
+      say(
+        this.page.downloadMessage,
+        `The page could not load the code for this button (${e instanceof Error ? e.message : String(e)}). Try again.`,
+      );
+      return undefined;
+    }
+  }
+
+  async downloadDesign(): Promise<void> {
     if (!areLoaded(topologiesFor(this.draft["topology"]))) {
       say(this.page.downloadMessage, "The design file can be written once its topology has loaded.");
       return;
     }
-    const out = designFileFromDraft(this.draft);
+    const code = await this.buttonCode(() => import("./design-file.ts"));
+    if (!code) return;
+    const out = code.designFileFromDraft(this.draft);
     if (!out.ok) {
       say(
         this.page.downloadMessage,
@@ -421,10 +438,14 @@ class TryPage {
     say(this.page.downloadMessage, `Saved ${out.name}: put it in data/designs/ and run railsieve validate.`);
   }
 
-  downloadCsv(): void {
-    if (!this.result) return;
-    download(this.doc, shortlistCsvName(this.result), shortlistCsv(this.result), "text/csv;charset=utf-8");
-    say(this.page.downloadMessage, `Saved ${shortlistCsvName(this.result)}.`);
+  async downloadCsv(): Promise<void> {
+    const result = this.result;
+    if (!result) return;
+    const code = await this.buttonCode(() => import("./csv-export.ts"));
+    if (!code) return;
+    const name = code.shortlistCsvName(result);
+    download(this.doc, name, code.shortlistCsv(result), "text/csv;charset=utf-8");
+    say(this.page.downloadMessage, `Saved ${name}.`);
   }
 }
 

@@ -8,6 +8,7 @@ import * as page from "../../../src/client/try/engine.ts";
 import { loadCatalogue } from "../../../src/node/load-data.ts";
 import { TOPOLOGY_META } from "../../../src/topologies/meta.ts";
 import { DEMO_DESIGNS } from "./demo-designs.ts";
+import { DEFAULT_INPUT } from "../../../src/client/try/defaults.ts";
 
 const { catalogue } = loadCatalogue("data");
 const TOPOLOGIES = [...TOPOLOGY_META.map((t) => t.id), "all"];
@@ -23,6 +24,11 @@ describe("the try page's engine", () => {
     const raw = { ...(DEMO_DESIGNS[0]!.raw as object), topology: "difference-to-mid" };
     expect(page.areLoaded(["difference-to-mid"])).toBe(false);
     expect(() => page.parseDesignValue("d.json", raw)).toThrow(/topology difference-to-mid is not loaded yet/);
+  });
+
+  it("comes with the default design's topology, the one every visit without a link needs", () => {
+    expect(page.BUNDLED_TOPOLOGY.id).toBe(DEFAULT_INPUT.topology);
+    expect(page.areLoaded([DEFAULT_INPUT.topology])).toBe(true);
   });
 
   it("loads topologies on demand: every one for all, the named one otherwise, none for an unknown id", async () => {
