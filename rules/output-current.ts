@@ -63,12 +63,18 @@ export const outputCurrent = defineRule({
           ? `at most ${formatSI(OUTPUT_CURRENT_FLOOR_A, "A")}, which any output drives (common practice): no rating needed`
           : `and 'iout_max_ma' is empty for this part: not rated`
         : `rated ${formatSI(rated, "A")}: ${spareOrShort(margin, "A")}`;
-    return { reason: `${l.sentence.replace("%I", formatSI(current, "A"))}; ${bound}`, steps };
+    return { reason: `${l.sentence().replace("%I", formatSI(current, "A"))}; ${bound}`, steps };
   },
 });
 
 type Load =
-  { case: "no-resistor"; field: string } | { case: "drives"; current: number; sentence: string; formula: string };
+  | { case: "no-resistor"; field: string }
+  | {
+      case: "drives";
+      current: number; /** Worded only when a reason is asked for: measure runs on every candidate. */
+      sentence: () => string;
+      formula: string;
+    };
 
 /** The larger of the currents the output sources (high) and sinks (low) in this level shift. */
 function load(ctx: RoleContext, part: PartOf<"comparator" | "op-amp">): Load {
@@ -83,25 +89,29 @@ function load(ctx: RoleContext, part: PartOf<"comparator" | "op-amp">): Load {
       return {
         case: "drives",
         current,
-        sentence: `with the output high at ${formatVolts(high ?? 0)} it sources %I through the clamp diode into the ${formatSI(logic.pull_down_ohm, "Ω")} pull-down`,
+        sentence: () =>
+          `with the output high at ${formatVolts(high ?? 0)} it sources %I through the clamp diode into the ${formatSI(logic.pull_down_ohm, "Ω")} pull-down`,
         formula: "I·pull_down_ohm + Vf(I) = V_OH",
       };
     }
     case "pull-up": {
-      if (logic.pull_up_ohm === undefined) return { case: "no-resistor", field: "pull_up_ohm" };
-      const sink = pullUpSinkCurrent(logic.vdd_v, low, logic.pull_up_ohm);
-      const source = high === null ? 0 : pullUpSourceCurrent(logic.vdd_v, high, logic.pull_up_ohm);
+      const pullUp = logic.pull_up_ohm;
+      if (pullUp === undefined) return { case: "no-resistor", field: "pull_up_ohm" };
+      const sink = pullUpSinkCurrent(logic.vdd_v, low, pullUp);
+      const source = high === null ? 0 : pullUpSourceCurrent(logic.vdd_v, high, pullUp);
       return source > sink
         ? {
             case: "drives",
             current: source,
-            sentence: `with the output high at ${formatVolts(high ?? 0)}, above V_DD, it sources %I into the ${formatSI(logic.pull_up_ohm, "Ω")} pull-up`,
+            sentence: () =>
+              `with the output high at ${formatVolts(high ?? 0)}, above V_DD, it sources %I into the ${formatSI(pullUp, "Ω")} pull-up`,
             formula: "(V_OH − vdd) / pull_up_ohm",
           }
         : {
             case: "drives",
             current: sink,
-            sentence: `with the output low at ${formatVolts(low, { signed: true })} it sinks %I from the ${formatSI(logic.pull_up_ohm, "Ω")} pull-up`,
+            sentence: () =>
+              `with the output low at ${formatVolts(low, { signed: true })} it sinks %I from the ${formatSI(pullUp, "Ω")} pull-up`,
             formula: "(vdd − V_OL) / pull_up_ohm",
           };
     }
@@ -115,13 +125,15 @@ function load(ctx: RoleContext, part: PartOf<"comparator" | "op-amp">): Load {
         ? {
             case: "drives",
             current: sink,
-            sentence: `with the output low at ${formatVolts(low, { signed: true })} it sinks %I through the ${formatSI(rb, "Ω")} base resistor and the base clamp`,
+            sentence: () =>
+              `with the output low at ${formatVolts(low, { signed: true })} it sinks %I through the ${formatSI(rb, "Ω")} base resistor and the base clamp`,
             formula: "(|V_OL| − Vf) / npn_base_ohm",
           }
         : {
             case: "drives",
             current: base,
-            sentence: `with the output high at ${formatVolts(high ?? 0)} it sources %I into the NPN's base through ${formatSI(rb, "Ω")}`,
+            sentence: () =>
+              `with the output high at ${formatVolts(high ?? 0)} it sources %I into the NPN's base through ${formatSI(rb, "Ω")}`,
             formula: "(V_OH − 0.7 V) / npn_base_ohm",
           };
     }

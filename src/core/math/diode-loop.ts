@@ -6,9 +6,21 @@
 // back to bisection (the left side rises with I, so there is one root).
 import { forwardVoltage, type RatedDiode } from "./diode.ts";
 
+// Three rules (output current, rise time, late sign) ask for the same loop of one
+// candidate in a row: the last answer is kept and given again for the same inputs.
+let last = { volts: NaN, ohm: NaN, vf1: NaN, vf10: NaN, current: 0 };
+
 /** Current through a diode and resistor in series across `volts` (0 when `volts` ≤ 0). */
 export function diodeLoopCurrent(volts: number, ohm: number, diode: RatedDiode): number {
   if (!(volts > 0)) return 0;
+  if (volts === last.volts && ohm === last.ohm && diode.vf_1ma_v === last.vf1 && diode.vf_10ma_v === last.vf10)
+    return last.current;
+  const current = solveLoop(volts, ohm, diode);
+  last = { volts, ohm, vf1: diode.vf_1ma_v, vf10: diode.vf_10ma_v, current };
+  return current;
+}
+
+function solveLoop(volts: number, ohm: number, diode: RatedDiode): number {
   const tolerance = 1e-12 * volts;
   let i = volts / ohm;
   for (let k = 0; k < 6; k++) {
