@@ -2,6 +2,9 @@
 // part) and the shape of a rule. Rules and the engine both read these.
 import type { PartKind, PartOf } from "../catalogue-index.ts";
 import type { LoadBranch } from "../math/stage-load.ts";
+import type { PumpOnRail } from "../math/pump-rail.ts";
+
+export type { PumpOnRail };
 import type { Design, Policy, Role } from "../schemas/design.ts";
 
 /** In order of severity: verdict.ts ranks by this index. */
@@ -156,24 +159,6 @@ export type Rails = {
   negative_v: number;
   /** A charge-pumped V− (SPEC §11.5): what a candidate's own supply current would do to it. */
   pump?: PumpOnRail;
-};
-
-/** The pumped rail as one role sees it: everything but its own parts' draw is fixed. */
-export type PumpOnRail = {
-  drive_v: number;
-  frequency_hz: number;
-  flying_cap_f: number;
-  reservoir_cap_f: number;
-  drive_ohm: number;
-  /** Vf of one pump diode at the conduction current and the cold end (the largest drop). */
-  diode: { vf_1ma_v: number; vf_10ma_v: number };
-  cold_c: number;
-  /** The stated load plus every other role's parts, amps. */
-  other_a: number;
-  /** Channels this role powers (whole packages of the candidate's channel count). */
-  channels: number;
-  /** This role's draw the rail in negative_v was worked out with, amps. */
-  assumed_a: number;
 };
 
 /** What a rule sees of the role it checks a part for; the same for every candidate. */
