@@ -23,6 +23,8 @@ import { loadSiemens } from "../src/core/math/stage-load.ts";
 import { DEFAULT_PIN_CAP_F, pullUpEdge } from "../src/core/math/rc-edge.ts";
 import { signTimeLimit } from "../rules/sign-path.ts";
 import { LOAD_SAME } from "../rules/output-load.ts";
+import { peakOf } from "../rules/stage-output-current.ts";
+import { OUTPUT_CURRENT_FLOOR_A } from "../rules/output-current.ts";
 import type { Design } from "../src/core/schemas/design.ts";
 import { ALL_TOPOLOGIES, engine, evaluateDesign } from "../src/engine.ts";
 import type { RuleId } from "../rules/index.ts";
@@ -348,6 +350,20 @@ function runRule(
         if (allowed !== allowed) unrated(i);
         else if (g !== g) put(i, 0, 0, UNRATED);
         else put(i, allowed - g, 0, g <= allowed * (1 + LOAD_SAME) ? PASS : MARGINAL);
+      }
+      return;
+    }
+    case "stage-output-current": {
+      if (stage.stage !== "op-amp") return;
+      // rules/stage-output-current.ts: the stage's peak current (no part figure) against iout_max_ma, 100 µA floor.
+      const peak = stage.load === undefined ? NaN : peakOf(stage, rails).amps;
+      for (let i = 0; i < n; i++) {
+        const rated = (c.iout_max_ma[i] as number) * 1e-3;
+        if (peak !== peak) put(i, 0, 0, UNRATED);
+        else if (rated !== rated) {
+          const m = OUTPUT_CURRENT_FLOOR_A - peak;
+          put(i, m, OUTPUT_CURRENT_FLOOR_A, m >= 0 ? PASS : UNRATED);
+        } else share(i, rated - peak, rated);
       }
       return;
     }
@@ -736,6 +752,7 @@ const CASES: Record<Benchmarked, true> = {
   "input-common-mode": true,
   "output-swing": true,
   "output-load": true,
+  "stage-output-current": true,
   "unity-gain-stable": true,
   "phase-reversal": true,
   offset: true,

@@ -18,6 +18,7 @@ import { offset } from "./offset.ts";
 import { outputCurrent } from "./output-current.ts";
 import { outputLoad } from "./output-load.ts";
 import { outputSwing } from "./output-swing.ts";
+import { stageOutputCurrent } from "./stage-output-current.ts";
 import { overloadRecoveryRule } from "./overload-recovery.ts";
 import { phaseReversal } from "./phase-reversal.ts";
 import { propagationDelay } from "./propagation-delay.ts";
@@ -36,6 +37,7 @@ export const RULES = [
   inputCommonMode,
   outputSwing,
   outputLoad,
+  stageOutputCurrent,
   unityGainStable,
   phaseReversal,
   offset,

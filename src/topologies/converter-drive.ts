@@ -58,7 +58,10 @@ export function faultPath(gain: number, offsetV: number, ohm: number, what: stri
  * The load of the stage that drives the converter (SPEC §11.8), with its own
  * branches: the pin draws the sampling capacitor's charge each conversion,
  * 1/(f_s·C_s) through any pin resistor in series (the pin capacitor only
- * stores that charge). Without the sample rate or capacitor the draw is
+ * stores that charge). Its average current is f_s·C_s·(V_out − V_cap) with the
+ * capacitor left anywhere in the converter's range 0 … V_ref between samples
+ * (reset to ground or precharged; common practice [M]), so the branch returns
+ * to that whole span and the current rule takes its worst end. Without the sample rate or capacitor the draw is
  * unknown and left out, and the reason says so.
  */
 export function drivingPin(design: Design, branches: LoadBranch[]): StageLoad {
@@ -74,7 +77,7 @@ export function drivingPin(design: Design, branches: LoadBranch[]): StageLoad {
     rPin !== undefined && rPin > 0
       ? `the converter pin, R_pin + 1/(f_s·C_s) = ${formatSI(rPin, "Ω")} + ${formatSI(switchedCapOhm(fs, cs), "Ω")}`
       : "the converter pin, 1/(f_s·C_s)";
-  return { branches: [...branches, { what, ohm: pin }] };
+  return { branches: [...branches, { what, ohm: pin, return_v: { low: 0, high: design.adc.reference_v } }] };
 }
 
 /** The pin RC's corner, when the design gives both parts. */

@@ -121,8 +121,11 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     slew_amplitude_v: G * peak,
     fault: worstFaultPath(design, amp, ref, rails),
     // The output drives R2 into the − input, which feedback holds at the + input's level (the far side of R1
-    // is the V−in source): R2 alone, as Rf of an inverting stage to its virtual ground. And the converter pin.
-    load: drivingPin(design, [{ what: "feedback R2 to the − input", ohm: amp.r_fb_ohm }]),
+    // is the V−in source): R2 alone, as Rf of an inverting stage to its virtual ground, which sits where the
+    // + input puts it, pinLow … pinHigh. And the converter pin.
+    load: drivingPin(design, [
+      { what: "feedback R2 to the − input", ohm: amp.r_fb_ohm, return_v: { low: pinLow, high: pinHigh } },
+    ]),
   };
   role("difference", [{ stage, rules: rulesFor(design, ROLE_RULES) }], rails);
   const cmrr = worstCaseCmrr(G, t);

@@ -86,7 +86,7 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     slew_amplitude_v: x.gain * peak,
     fault: faultPath(n.gain, n.offset_v, n.parallel_ohm, "the gain stage's non-inverting input"),
     // Non-inverting: the output drives Rf into Rg to ground (the − input draws nothing), and the converter pin.
-    load: drivingPin(design, [{ what: "Rf + Rg to ground", ohm: x.rf_ohm + x.rg_ohm }]),
+    load: drivingPin(design, [{ what: "Rf + Rg to ground", ohm: x.rf_ohm + x.rg_ohm, return_v: { low: 0, high: 0 } }]),
   };
   role("gain-stage", [{ stage, rules: rulesFor(design, ROLE_RULES) }], rails);
   const derived: Derived = {

@@ -9,6 +9,7 @@ import { inputCommonMode } from "../../rules/input-common-mode.ts";
 import { offset } from "../../rules/offset.ts";
 import { outputLoad } from "../../rules/output-load.ts";
 import { outputSwing } from "../../rules/output-swing.ts";
+import { stageOutputCurrent } from "../../rules/stage-output-current.ts";
 import { supplyRange } from "../../rules/supply-range.ts";
 import { unityGainStable } from "../../rules/unity-gain-stable.ts";
 import { budgetTerm, type BudgetTerm, type Conversion, type RoleTerm } from "../core/engine/budget.ts";
@@ -114,9 +115,18 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
     output_per_input: a,
     bandwidth_peak_v: 0,
     slew_amplitude_v: 0,
-    // It drives R2 into the node, and from there R1 to the signal (a source, 0 V at rest) and R3 to ground;
-    // the follower's input draws nothing. The signal's own resistance would only lighten it and is left out.
-    load: { branches: [{ what: "R2 + R1 ‖ R3 of the level-shift network", ohm: referenceLoadOhm(network) }] },
+    // It drives R2 into the node, and from there R1 to the signal and R3 to ground; the follower's input
+    // draws nothing. Seen from R2, R1 and R3 are one source (Thévenin): R1 ‖ R3 at V_in·R3/(R1 + R3), which
+    // spans ±peak scaled so. The signal's own resistance would only lighten the load and is left out.
+    load: {
+      branches: [
+        {
+          what: "R2 + R1 ‖ R3 of the level-shift network",
+          ohm: referenceLoadOhm(network),
+          return_v: referenceReturn(network, peak),
+        },
+      ],
+    },
   };
   role("level-shift", [{ stage: levelShift, rules: rulesFor(design, LEVEL_SHIFT_RULES) }], rails);
   role("reference-buffer", referenceBuffer, rails);
@@ -169,6 +179,16 @@ function evaluate({ design, role }: TopologyRun): TopologyEvaluation {
       display: [...display(derived, network, low, high), driveDisplay(design)],
     },
   };
+}
+
+/**
+ * Where the reference buffer's load returns: R1 to the signal (±peak) and R3 to ground as one Thévenin
+ * source, V_in·R3/(R1 + R3) (the signal itself without R3). Leaving out the source's resistance, as
+ * referenceLoadOhm does, overstates both this swing and the current, never understates them.
+ */
+export function referenceReturn(n: LevelShiftNetwork, peak: number): { low: number; high: number } {
+  const share = n.r3_ohm === null ? 1 : n.r3_ohm / (n.r1_ohm + n.r3_ohm);
+  return { low: -peak * share, high: peak * share };
 }
 
 /** What the reference buffer drives: R2 in series with R1 ‖ R3 (R1 alone when there is no R3). */
@@ -273,7 +293,7 @@ export const offsetToMidRail = defineTopology({
     },
     "reference-buffer": {
       label: "optional follower driving the network from the ADC reference (in = out = V_ref)",
-      rules: [supplyRange, inputCommonMode, outputSwing, outputLoad, unityGainStable, offset],
+      rules: [supplyRange, inputCommonMode, outputSwing, outputLoad, stageOutputCurrent, unityGainStable, offset],
     },
   }),
   roleTerms: ROLE_TERMS,

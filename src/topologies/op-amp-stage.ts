@@ -6,6 +6,7 @@ import { outputLoad } from "../../rules/output-load.ts";
 import { outputSwing } from "../../rules/output-swing.ts";
 import { phaseReversal } from "../../rules/phase-reversal.ts";
 import { slewRate } from "../../rules/slew-rate.ts";
+import { stageOutputCurrent } from "../../rules/stage-output-current.ts";
 import { supplyRange } from "../../rules/supply-range.ts";
 import { unityGainStable } from "../../rules/unity-gain-stable.ts";
 import type { AnyRule } from "../core/rule-kit/index.ts";
@@ -15,6 +16,7 @@ export const OP_AMP_STAGE_RULES: readonly AnyRule[] = [
   inputCommonMode,
   outputSwing,
   outputLoad,
+  stageOutputCurrent,
   unityGainStable,
   phaseReversal,
   offset,

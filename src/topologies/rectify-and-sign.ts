@@ -303,7 +303,8 @@ function evaluateWith({ design, catalogue, role }: TopologyRun, draws: readonly 
     baseClamp = { id: d.id, vf_1ma_v: d.vf_1ma_v, vf_10ma_v: d.vf_10ma_v, ir_na: d.ir_na };
   }
 
-  // 4. The amplifiers.
+  // 4. The amplifiers. Every load they drive returns to a virtual ground, held at 0 V by feedback.
+  const ZERO = { low: 0, high: 0 };
   const buffer: OpAmpStage = {
     stage: "op-amp",
     label: "the buffer",
@@ -327,8 +328,8 @@ function evaluateWith({ design, catalogue, role }: TopologyRun, draws: readonly 
   // comparator's input draws nothing.
   buffer.load = {
     branches: [
-      { what: "stage 1's input R to its virtual ground", ohm: R },
-      { what: "the summer's input R to its virtual ground", ohm: R },
+      { what: "stage 1's input R to its virtual ground", ohm: R, return_v: ZERO },
+      { what: "the summer's input R to its virtual ground", ohm: R, return_v: ZERO },
     ],
   };
   const halfWave: OpAmpStage = {
@@ -351,12 +352,16 @@ function evaluateWith({ design, catalogue, role }: TopologyRun, draws: readonly 
     // While stage 1 is dead the summer's output is −x, below 0 V, and the single-supply converter reads 0: off by x.
     zero_crossing_error: "clips",
     // Through the conducting diode the output drives the feedback R and the summer's R/2, both into virtual
-    // grounds: R/3, the 3·W/R the diode carries. The diode's own drop only lightens it and is left out.
+    // grounds: R/3, the 3·W/R the diode carries. Those branches hang from the stage output beyond the diode,
+    // −W … 0, not from the op amp's −(W + Vf) … +Vf (node_v). On the other half-cycle the op amp's output
+    // carries only the input resistor's W/R through the other diode, a third of that.
     load: {
       branches: [
-        { what: "feedback R (through the diode) to the virtual ground", ohm: R },
-        { what: "the summer's input R/2 to its virtual ground", ohm: R / 2 },
+        { what: "feedback R (through the diode) to the virtual ground", ohm: R, return_v: ZERO },
+        { what: "the summer's input R/2 to its virtual ground", ohm: R / 2, return_v: ZERO },
       ],
+      node_v: { low: -W, high: 0 },
+      note: "on the other half-cycle it carries only the input R's W/R, through the other diode",
     },
   };
   const summer: OpAmpStage = {
@@ -371,7 +376,7 @@ function evaluateWith({ design, catalogue, role }: TopologyRun, draws: readonly 
     output_per_input: k,
     bandwidth_peak_v: peak,
     slew_amplitude_v: W,
-    load: drivingPin(design, [{ what: "feedback R to the virtual ground", ohm: R }]),
+    load: drivingPin(design, [{ what: "feedback R to the virtual ground", ohm: R, return_v: ZERO }]),
   };
   const sign: SignStage = {
     stage: "sign",

@@ -79,11 +79,21 @@ export type OpAmpStage = {
 
 /**
  * The resistive load an op-amp stage's output drives: each branch to the node
- * it returns to (a virtual ground, ground, an input held by feedback), all in
- * parallel; `left_out` names a load the design does not state (the converter
+ * it returns to (a virtual ground, ground, an input held by feedback) and that
+ * node's voltage, all in parallel; `left_out` names a load the design does not state (the converter
  * pin's sampling draw without its fields), for the reason.
  */
-export type StageLoad = { branches: LoadBranch[]; left_out?: string };
+export type StageLoad = {
+  branches: LoadBranch[];
+  left_out?: string;
+  /**
+   * The level the branches hang from, when a diode stands between it and the op amp's output (the
+   * half-wave stage: the node sits one drop inside the output); the stage's output when absent.
+   */
+  node_v?: Range;
+  /** Why the current the output delivers is no larger than the branches give (a path they do not show), for the reason. */
+  note?: string;
+};
 
 /**
  * The Thévenin source a fault meets at a stage's input pins, as a function of
