@@ -9,6 +9,7 @@ import { inputFault } from "../../rules/input-fault.ts";
 import { offset } from "../../rules/offset.ts";
 import { budgetTerm, type BudgetTerm, type RoleTerm } from "../core/engine/budget.ts";
 import type { Derived, DisplayGroup } from "../core/engine/result.ts";
+import { metaOf, rolesOf } from "./meta.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import { worstClampCurrent } from "../core/math/clamp-current.ts";
 import {
@@ -253,9 +254,11 @@ const ROLE_TERMS: readonly RoleTerm[] = [
   },
 ];
 
+const META = metaOf("difference-to-mid");
+
 export const differenceToMid = defineTopology({
   id: "difference-to-mid",
-  title: "Difference amplifier to mid-reference",
+  title: META.title,
   description:
     "For a differential source (a bridge: signal.kind 'differential' with its common-mode range) or a single-ended one (V−in at ground). R1 from V−in to the inverting input, R2 from there to the output, R3 = R1 from V+in to the non-inverting input, R4 = R2 from there to REF = V_ref/2: out = G·(V+in − V−in) + REF, G = R2/R1 (textbook superposition; Franco, Design with Operational Amplifiers and Analog Integrated Circuits, ch. 2). G is the largest E-series ratio not above (V_ref/2 − m)/peak, the source's resistance counted in R1 and R3. The op amp's inputs sit at (V+in·R4 + REF·R3)/(R3 + R4) over the common-mode range, its output at REF ± G·peak. Resistor mismatch t limits the common-mode rejection to about (1 + G)/(4t) at worst (Franco, ch. 2): G = 1, t = 0.1 % gives 500, 54.0 dB; the common mode divided by it is a budget term of its own. One op amp on V+ and ground.",
   reading: "volts = (code + 0.5) · (V_ref/2^N)/G − (V_ref/2)/G",
@@ -279,17 +282,13 @@ export const differenceToMid = defineTopology({
     "temperature.max_c",
     ...DRIVE_FIELDS,
   ],
-  roles: [
-    {
-      id: "difference",
-      name: "Difference amplifier",
-      field: "Difference-amplifier op amp",
+  roles: rolesOf(META, {
+    difference: {
       label:
         "difference amplifier with REF at V_ref/2, single supply (inputs at the divided common mode, out = REF ± G·peak)",
-      wants: "amplify",
       rules: ROLE_RULES,
     },
-  ],
+  }),
   roleTerms: ROLE_TERMS,
   checkDesign: (d) => noHeldDivider(d, "difference-to-mid"),
   evaluate,

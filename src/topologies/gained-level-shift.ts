@@ -10,6 +10,7 @@ import { inputFault } from "../../rules/input-fault.ts";
 import { offset } from "../../rules/offset.ts";
 import { budgetTerm, type BudgetTerm, type RoleTerm } from "../core/engine/budget.ts";
 import type { Derived, DisplayGroup } from "../core/engine/result.ts";
+import { metaOf, rolesOf } from "./meta.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import {
   chooseGainedLevelShift,
@@ -196,9 +197,11 @@ const ROLE_TERMS: readonly RoleTerm[] = [
   { name: "gain-stage-bandwidth", label: "gain stage gain error at f max", role: "gain-stage", rule: bandwidth.id },
 ];
 
+const META = metaOf("gained-level-shift");
+
 export const gainedLevelShift = defineTopology({
   id: "gained-level-shift",
-  title: "Gained level shift",
+  title: META.title,
   description:
     "The level-shift network of offset-to-mid-rail (signal through R1, ADC reference through R2, R3 to ground; Millman, Proc. IRE 28(9), 1940: node = a·Vin + b, G = R1‖R2‖R3, a = G/R1, b = V_ref·G/R2) feeds a non-inverting stage of gain Gs = 1 + Rf/Rg with Rg to ground (textbook), so out = Gs·(a·Vin + b) and the overall gain A = Gs·a may exceed ½. All five resistors come from the design's E-series: A as close as the series allows to (V_ref/2 − m)/peak (m = headroom_margin_v) with ±peak inside [m, V_ref − m], the output centred near V_ref/2. Since a + b/V_ref = 1 − G/R3 < 1, the stage gain exceeds A + ½. One op amp on V+ and ground; its input sits near V_ref/(2·Gs), close to ground, and its output swings from m, so input and output reach near ground decide which parts fit. Resistor tolerance is split into a gain part (a one-point calibration removes it) and an offset part (it does not).",
   reading: "volts = (code + 0.5) · (V_ref/2^N)/A − Gs·b/A",
@@ -219,17 +222,13 @@ export const gainedLevelShift = defineTopology({
     "temperature.max_c",
     ...DRIVE_FIELDS,
   ],
-  roles: [
-    {
-      id: "gain-stage",
-      name: "Gain stage",
-      field: "Gain-stage op amp",
+  roles: rolesOf(META, {
+    "gain-stage": {
       label:
         "non-inverting gain stage after the level-shift network, single supply (in ≈ V_ref/(2·Gs), out = m … V_ref − m)",
-      wants: "amplify",
       rules: ROLE_RULES,
     },
-  ],
+  }),
   roleTerms: ROLE_TERMS,
   appliesTo: singleEndedOnly,
   checkDesign: (d) => noHeldDivider(d, "gained-level-shift"),

@@ -2,9 +2,10 @@
 // first script carries this and no topology module): ids in registry order,
 // titles and roles without their rules or labels. Each topology's module (rules, budget
 // terms, simulation) is loaded when a design names it (src/topologies/load.ts).
-// This repeats what the modules declare; test/topologies/meta.test.ts fails
-// when the two drift apart, so a change to a module's roles is made here too.
+// The modules take their titles and roles from here and add each role's label
+// and rules (`rolesOf`), so the two cannot drift apart.
 import type { RoleDef } from "../core/engine/topology.ts";
+import type { AnyRule } from "../core/rule-kit/index.ts";
 
 /** A role as the page needs it before its topology loads: no rules, and no label (the result carries it). */
 export type RoleMeta = Omit<RoleDef, "rules" | "label">;
@@ -117,3 +118,24 @@ export const TOPOLOGY_META: readonly TopologyMeta[] = [
 export const ROLE_META: readonly RoleMeta[] = TOPOLOGY_META.flatMap((t) => t.roles).filter(
   (r, i, all) => all.findIndex((x) => x.id === r.id) === i,
 );
+
+/** A topology's metadata by id; a missing id is a programming error in a module. */
+export function metaOf(id: string): TopologyMeta {
+  const meta = TOPOLOGY_META.find((t) => t.id === id);
+  if (!meta) throw new Error(`topology '${id}' has no entry in TOPOLOGY_META`);
+  return meta;
+}
+
+/** The module's roles: each role's metadata with its label and rules, every role given one. */
+export function rolesOf(
+  meta: TopologyMeta,
+  own: Readonly<Record<string, { label: string; rules: readonly AnyRule[] }>>,
+): RoleDef[] {
+  const extra = Object.keys(own).filter((id) => !meta.roles.some((r) => r.id === id));
+  if (extra.length > 0) throw new Error(`topology '${meta.id}': roles ${extra.join(", ")} are not in TOPOLOGY_META`);
+  return meta.roles.map((r) => {
+    const o = own[r.id];
+    if (!o) throw new Error(`topology '${meta.id}': role '${r.id}' has no label and rules`);
+    return { ...r, label: o.label, rules: o.rules };
+  });
+}

@@ -14,6 +14,7 @@ import { supplyRange } from "../../rules/supply-range.ts";
 import { unityGainStable } from "../../rules/unity-gain-stable.ts";
 import { budgetTerm, type BudgetTerm, type Conversion, type RoleTerm } from "../core/engine/budget.ts";
 import type { Derived, DisplayGroup } from "../core/engine/result.ts";
+import { metaOf, rolesOf } from "./meta.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import {
   chooseLevelShift,
@@ -260,9 +261,11 @@ function conversion(design: Design, a: number, b: number): Conversion {
   };
 }
 
+const META = metaOf("offset-to-mid-rail");
+
 export const offsetToMidRail = defineTopology({
   id: "offset-to-mid-rail",
-  title: "Offset to mid-rail",
+  title: META.title,
   description:
     "The signal through R1, the ADC reference through R2 and R3 to ground meet at a follower's input. By Millman's theorem (Proc. IRE 28(9), 1940) the node is V = (Vin/R1 + V_ref/R2)/(1/R1 + 1/R2 + 1/R3) = a·Vin + b, with G = R1‖R2‖R3, a = G/R1, b = V_ref·G/R2; the source's resistance (and any protection resistor) sits in series with R1 and is counted in it (Thevenin), so a and b are those of R1 + Rs. R1, R2 and R3 are chosen from the E-series so that −peak … +peak lands inside [m, V_ref − m] (m = headroom_margin_v) with the largest a and b nearest V_ref/2; a ≤ 1/2, so a small signal uses only part of the ADC range. One op amp on V+ and ground; no negative rail, no comparator. The level shifter needs b ± a·peak at its input and output; the optional reference buffer needs V_ref at both.",
   reading: "volts = (code + 0.5) · (V_ref/2^N)/a − b/a",
@@ -283,25 +286,16 @@ export const offsetToMidRail = defineTopology({
     "temperature.max_c",
     ...DRIVE_FIELDS,
   ],
-  roles: [
-    {
-      id: "level-shift",
-      name: "Level shift",
-      field: "Level-shift op amp",
+  roles: rolesOf(META, {
+    "level-shift": {
       label: "follower after the level-shift network, single supply (in = out = b ± a·peak)",
-      wants: "amplify",
       rules: LEVEL_SHIFT_RULES,
     },
-    {
-      id: "reference-buffer",
-      name: "Reference buffer",
-      field: "Reference buffer op amp",
+    "reference-buffer": {
       label: "optional follower driving the network from the ADC reference (in = out = V_ref)",
-      wants: "amplify",
       rules: [supplyRange, inputCommonMode, outputSwing, outputLoad, stageOutputCurrent, unityGainStable, offset],
-      optional: true,
     },
-  ],
+  }),
   roleTerms: ROLE_TERMS,
   appliesTo: singleEndedOnly,
   checkDesign: (d) => noHeldDivider(d, "offset-to-mid-rail"),

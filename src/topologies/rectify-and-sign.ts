@@ -37,6 +37,7 @@ import { ratioSpread } from "../core/math/rectifier-ratios.ts";
 import type { OpAmp } from "../core/schemas/op-amp.ts";
 import { isFitResult } from "../core/engine/evaluate-part.ts";
 import type { Derived, DiodeUse, DisplayGroup, DisplayRow, RoleResult } from "../core/engine/result.ts";
+import { metaOf, rolesOf } from "./meta.ts";
 import { defineTopology, type TopologyEvaluation, type TopologyRun } from "../core/engine/topology.ts";
 import { forwardVoltage } from "../core/math/diode.ts";
 import { endPhrase, forwardVoltageAt } from "../core/math/temperature.ts";
@@ -714,9 +715,11 @@ function display(design: Design, d: Derived): DisplayGroup[] {
   return groups;
 }
 
+const META = metaOf("rectify-and-sign");
+
 export const rectifyAndSign = defineTopology({
   id: "rectify-and-sign",
-  title: "Rectify and sign",
+  title: META.title,
   description:
     "A divider (top R1, bottom R2 from the named E-series, ratio k = R2/(Rs + R1 + R2), loaded by the source resistance Rs, as large as possible but not above window/peak) feeds a follower buffer; a comparator decides the sign; a two-op-amp precision rectifier folds the negative half up; an optional diode/capacitor charge pump makes V− = −(V_d − 2V_F) + I/(f·C_fly) + ripple/2, ripple = I/(f·C_res) (switched-capacitor resistance 1/(f·C)). Buffer in = out = ±W; rectifier stage 1 (inverting half-wave) out −(W + Vf) … +Vf at noise gain 2, stage 2 (inverting summer, inputs R and R/2, feedback R) out 0 … W at noise gain 4, both inputs at 0 V, stage 1 reaching the output at weight 2; W = k · peak.",
   reading: "volts = sign · (code + 0.5) · (V_ref/2^N)/k",
@@ -753,31 +756,18 @@ export const rectifyAndSign = defineTopology({
     "temperature.max_c",
     ...DRIVE_FIELDS,
   ],
-  roles: [
-    {
-      id: "buffer",
-      name: "Buffer",
-      field: "Buffer op amp",
+  roles: rolesOf(META, {
+    buffer: {
       label: "follower after the divider (in = out = ±W)",
-      wants: "amplify",
       rules: BUFFER_RULES,
     },
-    {
-      id: "rectifier",
-      name: "Rectifier",
-      field: "Rectifier op amp",
+    rectifier: {
       label:
         "two-op-amp precision rectifier (a dual, or two singles): stage 1 a half-wave inverter (output −(W + Vf) … +Vf, noise gain 2), stage 2 a summer (output 0 … W, noise gain 4); both inputs at 0 V",
-      wants: "amplify",
       rules: RECTIFIER_RULES,
-      count: 2,
     },
-    {
-      id: "sign",
-      name: "Sign comparator",
-      field: "Sign comparator",
+    sign: {
       label: "sign comparator driving a logic input (an op amp may stand in, at best marginal)",
-      wants: "compare",
       rules: [
         supplyRange,
         inputCommonMode,
@@ -794,47 +784,23 @@ export const rectifyAndSign = defineTopology({
         pumpLoadRule,
       ],
     },
-    {
-      id: "pump-diode",
-      name: "Pump diode",
-      field: "Pump diode",
+    "pump-diode": {
       label: "charge-pump diode (two per pump)",
-      wants: "rectify",
       rules: [reverseVoltage, recovery, forwardCurrent],
-      count: 2,
-      when: [{ path: "supply.negative.kind", is: ["charge-pump"] }],
     },
-    {
-      id: "rectifier-diode",
-      name: "Rectifier diode",
-      field: "Rectifier diode",
+    "rectifier-diode": {
       label: "precision-rectifier feedback diode",
-      wants: "rectify",
       rules: [reverseVoltage, leakage, recovery],
-      count: 2,
     },
-    {
-      id: "clamp-diode",
-      name: "Clamp diode",
-      field: "Clamp diode",
+    "clamp-diode": {
       label: "series diode from the comparator to the logic input",
-      wants: "clamp",
       rules: [reverseVoltage, clampLeakage],
-      when: [{ path: "logic.level_shift", is: ["diode-clamp"] }],
     },
-    {
-      id: "base-clamp-diode",
-      name: "Base clamp diode",
-      field: "NPN base clamp diode",
+    "base-clamp-diode": {
       label: "diode across the NPN's base and emitter, so a negative output cannot reverse-bias the base",
-      wants: "clamp",
       rules: [reverseVoltage, forwardCurrent],
-      when: [
-        { path: "logic.level_shift", is: ["npn-inverter"] },
-        { path: "logic.npn_base_clamp", is: ["true"] },
-      ],
     },
-  ],
+  }),
   roleTerms: ROLE_TERMS,
   appliesTo: singleEndedOnly,
   checkDesign(d) {
