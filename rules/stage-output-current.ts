@@ -10,7 +10,7 @@
 // (src/core/math/stage-load.ts peakOutputCurrent). The current needs no part
 // figure, so it is the stage's; only the rating is the part's.
 import { defineRule, record, shareVerdict, spareOrShort, stageAs } from "../src/core/rule-kit/index.ts";
-import { peakOutputCurrent, type PeakCurrent } from "../src/core/math/stage-load.ts";
+import { peakOutputAmps, peakOutputCurrent, type PeakCurrent } from "../src/core/math/stage-load.ts";
 import type { OpAmpStage, Rails } from "../src/core/rule-kit/index.ts";
 import { formatSI, formatVolts } from "../src/core/units.ts";
 import { OUTPUT_CURRENT_FLOOR_A } from "./output-current.ts";
@@ -29,7 +29,8 @@ export const stageOutputCurrent = defineRule({
   measure({ stage, rails, policy }, part, out) {
     const s = stageAs(stage, "op-amp", "stage-output-current");
     if (s.load === undefined) return record(out, "unrated", 0, 0, 0, undefined);
-    const peak = peakOf(s, rails).amps;
+    const load = s.load;
+    const peak = peakOutputAmps(load.branches, load.node_v ?? s.output, rails.negative_v, rails.positive_v);
     if (part.iout_max_ma === undefined) {
       const margin = OUTPUT_CURRENT_FLOOR_A - peak;
       return record(

@@ -7,7 +7,7 @@
 // output-current), a larger one is unrated.
 import { describe, expect, it } from "vitest";
 import type { OpAmpStage } from "../../src/core/rule-kit/index.ts";
-import { peakOutputCurrent } from "../../src/core/math/stage-load.ts";
+import { peakOutputAmps, peakOutputCurrent } from "../../src/core/math/stage-load.ts";
 import { drivingPin } from "../../src/topologies/converter-drive.ts";
 import { design } from "../helpers/designs.ts";
 import { opAmp } from "../helpers/parts.ts";
@@ -196,6 +196,18 @@ describe("peakOutputCurrent", () => {
     // 1 V into 1 kΩ to ground at either end: 1 mA, sourced at +1 V (the first found of two equals is kept).
     const p = peakOutputCurrent([{ what: "1 kΩ", ohm: 1000, return_v: ZERO }], { low: -0.5, high: 1 }, ZERO);
     expect([p.amps, p.at_v, p.sources]).toEqual([1e-3, 1, true]);
+  });
+
+  it("gives the rule's allocation-free |I| the same number for every case above", () => {
+    for (const c of cases) {
+      if (c.run.stage.stage !== "op-amp" || c.run.stage.load === undefined) continue;
+      const { load, output } = c.run.stage;
+      const rails = c.run.rails ?? SPLIT_5V;
+      const span = { low: rails.negative_v, high: rails.positive_v };
+      expect(peakOutputAmps(load.branches, load.node_v ?? output, span.low, span.high), c.label).toBe(
+        peakOutputCurrent(load.branches, load.node_v ?? output, span).amps,
+      );
+    }
   });
 
   it("lets opposite branches cancel at one end but not the other", () => {

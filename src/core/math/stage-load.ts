@@ -79,3 +79,26 @@ export function peakOutputCurrent(branches: readonly LoadBranch[], output: VoltS
   // Both directions at both ends were tried, and one of each pair is ≥ 0: best is set and not negative.
   return best ?? { amps: 0, at_v: output.high, sources: true, shares: [], assumed };
 }
+
+/** peakOutputCurrent's |I| alone, allocating nothing: what a rule measures once per part of the catalogue. */
+export function peakOutputAmps(
+  branches: readonly LoadBranch[],
+  output: VoltSpan,
+  railLow: number,
+  railHigh: number,
+): number {
+  let peak = 0;
+  for (let end = 0; end < 2; end++) {
+    const v = end === 0 ? output.low : output.high;
+    let out = 0;
+    let into = 0;
+    for (const b of branches) {
+      if (!(b.ohm < Infinity)) continue;
+      const r = b.return_v;
+      out += (v - (r === undefined ? railLow : Math.min(r.low, r.high))) / b.ohm;
+      into += (v - (r === undefined ? railHigh : Math.max(r.low, r.high))) / b.ohm;
+    }
+    peak = Math.max(peak, out, -into);
+  }
+  return peak;
+}
