@@ -27,29 +27,52 @@ export type PartResult = {
 };
 
 /**
- * A part's result keeps only its verdict and ranking key; the findings are
- * worked out again on first read. Rules are pure, so the second run gives the
- * same numbers, and a 2,000-part catalogue does not hold 30,000 findings in
- * memory between keystrokes of the try page when a page shows only a few.
+ * What a role's results read their verdict and ranking key from: the typed
+ * arrays the engine scored the candidate list into, shared by every result.
+ */
+export type ScoredList = {
+  readonly checks: Checks;
+  /** Severity of each place in the list, after allow_unrated. */
+  readonly severity: Uint8Array;
+  readonly relative: Float64Array;
+  /** The part the design's BOM names for the role. */
+  readonly bom: string | undefined;
+};
+
+/**
+ * A part's result holds only the part, the list it was scored in and its
+ * place there: verdict and ranking key are read from the list's typed arrays,
+ * and the findings are worked out again on first read. Rules are pure, so the
+ * second run gives the same numbers; a 2,000-part catalogue does not hold
+ * 30,000 findings between keystrokes of the try page, and a 100,000-part
+ * ranking makes small objects that the collector moves cheaply.
  */
 class LazyPartResult implements PartResult {
   readonly part: Part;
-  readonly verdict: Verdict;
-  readonly bom: boolean;
-  readonly relative: number;
-  #checks: Checks;
+  readonly #list: ScoredList;
+  readonly #place: number;
   #findings: Finding[] | undefined;
 
-  constructor(checks: Checks, part: Part, bom: boolean, verdict: Verdict, relative: number) {
+  constructor(list: ScoredList, part: Part, place: number) {
     this.part = part;
-    this.verdict = verdict;
-    this.bom = bom;
-    this.relative = relative;
-    this.#checks = checks;
+    this.#list = list;
+    this.#place = place;
+  }
+
+  get verdict(): Verdict {
+    return VERDICTS[this.#list.severity[this.#place] as number] ?? "fail";
+  }
+
+  get relative(): number {
+    return this.#list.relative[this.#place] as number;
+  }
+
+  get bom(): boolean {
+    return this.part.id === this.#list.bom;
   }
 
   get findings(): Finding[] {
-    this.#findings ??= this.#checks.flatMap(({ rules, ctx, stage }) =>
+    this.#findings ??= this.#list.checks.flatMap(({ rules, ctx, stage }) =>
       rules.map((rule) => {
         const missing = missingColumns(rule, this.part);
         if (missing.length === 0) return finding(rule, ctx, this.part, stage);
@@ -139,23 +162,17 @@ function allowingUnrated(worstSeverity: number, policy: Policy): number {
   return worstSeverity === UNRATED && policy.allow_unrated ? MARGINAL : worstSeverity;
 }
 
-/** One part's result, as a role's ranking makes it when read. */
-export function partResult(
-  checks: Checks,
-  part: Part,
-  bom: boolean,
-  severityOfPart: number,
-  relative: number,
-): PartResult {
-  return new LazyPartResult(checks, part, bom, VERDICTS[severityOfPart] ?? "fail", relative);
+/** The result of the part at `place` in a scored list, as a role's ranking makes it when read. */
+export function partResult(list: ScoredList, part: Part, place: number): PartResult {
+  return new LazyPartResult(list, part, place);
 }
 
 /** Scores one part on its own (tests and single lookups); roles score whole lists in runRole. */
 export function evaluatePart(rules: readonly AnyRule[], ctx: RoleContext, part: Part, bom: boolean): PartResult {
   const relative = new Float64Array(1);
   const checks: Checks = [{ rules, ctx }];
-  const s = scorePart(checks, part, true, relative, 0);
-  return partResult(checks, part, bom, s, relative[0] as number);
+  const severity = Uint8Array.of(scorePart(checks, part, true, relative, 0));
+  return partResult({ checks, severity, relative, bom: bom ? part.id : undefined }, part, 0);
 }
 
 /** The worst finding's verdict, as scorePart folds it; with allow_unrated an unrated finding counts as marginal. */

@@ -1,6 +1,7 @@
 // Ranking of SPEC §7 from the engine's typed arrays: fits (pass, marginal) and
 // rejections (unrated, fail), each by verdict, status, cost band, relative
 // margin (largest first), then id.
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { Part } from "../../../src/core/catalogue.ts";
 import { compareResults, majorKey } from "../../../src/core/engine/evaluate-part.ts";
@@ -70,5 +71,32 @@ describe("RoleRanking", () => {
     const r = ranking(ROWS.filter((x) => x.verdict === "fail" || x.verdict === "unrated"));
     expect(r.bestFit()).toBeUndefined();
     expect(r.fits).toEqual([]);
+  });
+
+  // The lists are dealt into buckets of the major key and only each bucket is
+  // sorted; on any rows, with ties on every key but the id, the order must be
+  // the one compareResults gives (SPEC §7).
+  it("orders any rows as compareResults does", () => {
+    const row = fc.record({
+      verdict: fc.constantFrom<Verdict>("pass", "marginal", "unrated", "fail"),
+      status: fc.constantFrom("stocked", "approved", "listed"),
+      cost_band: fc.option(fc.integer({ min: 1, max: 5 }), { nil: undefined }),
+      relative: fc.constantFrom(-1, -0.25, 0, 0.25, 3),
+    });
+    fc.assert(
+      fc.property(
+        fc.uniqueArray(
+          fc.string({ unit: fc.constantFrom("a", "b", "c", "1", "-"), minLength: 1, maxLength: 4 }).map((t) => `p${t}`),
+          { minLength: 1, maxLength: 40 },
+        ),
+        fc.array(row, { minLength: 40, maxLength: 40 }),
+        (ids, rows) => {
+          const r = ranking(ids.map((id, i) => ({ id, ...rows[i]! })));
+          for (const list of [r.fits, r.rejected]) expect(list).toEqual([...list].sort(compareResults));
+          expect(r.fits.length + r.rejected.length).toBe(ids.length);
+        },
+      ),
+      { seed: 18, numRuns: 200 },
+    );
   });
 });
