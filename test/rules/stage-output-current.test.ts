@@ -4,7 +4,8 @@
 // output's swing; the peak is the larger magnitude. Margin = rated − peak, in amps; marginal
 // within marginal_fraction (0.2 by default) of the rating, fail beyond it. With no rating, a
 // peak ≤ 100 µA passes (any op-amp output drives that: common practice [M], shared with
-// output-current), a larger one is unrated.
+// output-current), a larger one is unrated; under the floor with the converter pin's draw left
+// out (no sampling fields) it is marginal.
 import { describe, expect, it } from "vitest";
 import type { OpAmpStage } from "../../src/core/rule-kit/index.ts";
 import { peakOutputAmps, peakOutputCurrent } from "../../src/core/math/stage-load.ts";
@@ -149,6 +150,13 @@ const cases: RuleCase[] = [
     expected: { verdict: "pass", needed: 0, available: 2e-3, margin: 2e-3 },
   },
   {
+    // With no rating the 100 µA floor (common practice [M]) leaves no room for the pin's unstated draw, which a
+    // 1 MHz, 10 pF converter at 3.3 V puts at 33 µA (case above): never a pass, marginal.
+    label: "a follower into a converter pin whose sampling the design leaves out, no rating",
+    run: { part: opAmp({ iout_max_ma: "" }), stage: pinUnstated },
+    expected: { verdict: "marginal", needed: 0, available: 1e-4, margin: 1e-4 },
+  },
+  {
     label: "a stage with no load stated by its topology",
     run: { part: opAmp({ iout_max_ma: "2" }), stage: bufferStage() },
     expected: { verdict: "unrated", needed: 0, available: 0, margin: 0 },
@@ -163,6 +171,7 @@ describe("stage-output-current", () => {
       {
         "a difference amp's 1 … 4 V into 10 kΩ to a − input at 0.5 … 2 V, rated 2 mA": "pass: with the output at +4.00 V it sources 350 µA into feedback R2 to the − input (10.0 kΩ to +0.50 V); rated 2.00 mA: 1.65 mA to spare",
         "a follower into a 1 MHz, 10 pF converter pin, no rating": "pass: with the output at 0.00 V it sinks 33.0 µA into the converter pin, 1/(f_s·C_s) (100 kΩ to +3.30 V); at most 100 µA, which any output drives (common practice): no rating needed",
+        "a follower into a converter pin whose sampling the design leaves out, no rating": "marginal: its output drives no resistive load; at most 100 µA before a load the design leaves out, and 'iout_max_ma' is empty: the floor any output drives may not hold; left out: the converter pin's sampling draw (no adc.sample_rate_hz and adc.sample_cap_f)",
         "a follower into a converter pin whose sampling the design leaves out, rated 2 mA": "pass: its output drives no resistive load; rated 2.00 mA: 2.00 mA to spare; left out: the converter pin's sampling draw (no adc.sample_rate_hz and adc.sample_cap_f)",
         "a stage with no load stated by its topology": "unrated: not rated: the topology does not say what the buffer's output drives",
         "an output at mid-rail between 10 kΩ to each rail, no rating": "pass: the currents into 10 kΩ to ground (10.0 kΩ to 0.00 V), 10 kΩ to the 5 V rail (10.0 kΩ to +5.00 V) cancel at both ends of its output; at most 100 µA, which any output drives (common practice): no rating needed",
