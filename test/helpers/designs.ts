@@ -23,6 +23,25 @@ export const BASE_DESIGN = {
   policy: {},
 } as const;
 
+/**
+ * Overrides for a ±20 mV bridge on a 1.6–1.7 V common mode, difference-to-mid on a
+ * single 3.3 V rail into a 2.5 V, 12-bit converter (pass to `design`).
+ */
+export const BRIDGE_20MV_ON_3V3: DeepPartial = {
+  topology: "difference-to-mid",
+  supply: { positive_v: 3.3, negative: { kind: "ground" } },
+  signal: {
+    peak_v: 0.02,
+    max_frequency_hz: 50,
+    source_ohm: 0,
+    kind: "differential",
+    common_mode_min_v: 1.6,
+    common_mode_max_v: 1.7,
+  },
+  front_end: { divider_total_ohm: 10e3 },
+  adc: { bits: 12, reference_v: 2.5 },
+};
+
 type Json = string | number | boolean | null | undefined | Json[] | { [key: string]: Json };
 export type DeepPartial = { [key: string]: Json };
 

@@ -10,7 +10,7 @@ import type { DesignResult } from "../../src/core/engine/result.ts";
 import { parallelOhm } from "../../src/core/math/stage-load.ts";
 import type { Design } from "../../src/core/schemas/design.ts";
 import { evaluateDesign } from "../../src/engine.ts";
-import { design } from "../helpers/designs.ts";
+import { BRIDGE_20MV_ON_3V3, design } from "../helpers/designs.ts";
 import { comparator, diode, opAmp } from "../helpers/parts.ts";
 
 // One op amp rated at 10 kΩ (common for the class [M]), on every supply these designs use.
@@ -55,20 +55,7 @@ const GAINED = design({
   front_end: { divider_total_ohm: 10e3 },
   adc: { bits: 12, reference_v: 1.8 },
 });
-const DIFFERENCE = design({
-  topology: "difference-to-mid",
-  supply: { positive_v: 3.3, negative: { kind: "ground" } },
-  signal: {
-    peak_v: 0.02,
-    max_frequency_hz: 50,
-    source_ohm: 0,
-    kind: "differential",
-    common_mode_min_v: 1.6,
-    common_mode_max_v: 1.7,
-  },
-  front_end: { divider_total_ohm: 10e3 },
-  adc: { bits: 12, reference_v: 2.5 },
-});
+const DIFFERENCE = design(BRIDGE_20MV_ON_3V3);
 
 function verdictOf(r: DesignResult, role: string, stage?: string): string | undefined {
   const fit = r.roles.find((x) => x.role === role)?.resultOf("oa-10k");

@@ -10,7 +10,7 @@ import { catalogueFromParts } from "../../src/core/catalogue.ts";
 import type { DesignResult } from "../../src/core/engine/result.ts";
 import type { Design } from "../../src/core/schemas/design.ts";
 import { evaluateDesign } from "../../src/engine.ts";
-import { design } from "../helpers/designs.ts";
+import { BRIDGE_20MV_ON_3V3, design } from "../helpers/designs.ts";
 import { comparator, diode, opAmp } from "../helpers/parts.ts";
 
 // A micropower-class op amp rated for 0.5 mA (invented, demo-style), on every supply these designs use.
@@ -145,22 +145,7 @@ describe("gained-level-shift", () => {
 describe("difference-to-mid", () => {
   // A ±20 mV bridge on 1.6–1.7 V into a 2.5 V converter: R2 = 470 kΩ. The output drives R2 into the
   // − input, which feedback holds at the + input's level, itself anywhere in the stage's input span.
-  const r = run(
-    design({
-      topology: "difference-to-mid",
-      supply: { positive_v: 3.3, negative: { kind: "ground" } },
-      signal: {
-        peak_v: 0.02,
-        max_frequency_hz: 50,
-        source_ohm: 0,
-        kind: "differential",
-        common_mode_min_v: 1.6,
-        common_mode_max_v: 1.7,
-      },
-      front_end: { divider_total_ohm: 10e3 },
-      adc: { bits: 12, reference_v: 2.5 },
-    }),
-  );
+  const r = run(design(BRIDGE_20MV_ON_3V3));
 
   it("asks (V_in+,high − V_out,low)/R2: the output at its lowest under the − input at its highest", () => {
     const stage = r.roles.find((x) => x.role === "difference")?.stages[0]?.stage;
