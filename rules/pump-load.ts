@@ -61,7 +61,7 @@ export const pumpLoad = defineRule({
     }
     const tail =
       w.shallower > 1e-12
-        ? `${formatVolts(w.shallower)} shallower than the ${formatVolts(ctx.rails.negative_v, { signed: true })} the other checks used, so they may be optimistic: at best marginal (name it in the BOM and the rail is worked out with its own draw)`
+        ? `${formatSI(w.shallower, "V")} shallower than the ${formatVolts(ctx.rails.negative_v, { signed: true })} the other checks used, so they may be optimistic: at best marginal (name it in the BOM and the rail is worked out with its own draw)`
         : `no shallower than the ${formatVolts(ctx.rails.negative_v, { signed: true })} the other checks used`;
     return {
       reason: `with this part the pumped rail carries ${sum} and sits at ${formatVolts(w.rail.worst_v, { signed: true })}, ${tail}`,

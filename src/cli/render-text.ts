@@ -88,15 +88,21 @@ function renderSingle(result: DesignResult, io: Pick<Io, "color">): string {
   return `${out.join("\n")}\n`;
 }
 
+/** The budget table's label column: label, value (9) and the largest-term mark fit 80 columns. */
+const LABEL_WIDTH = 54;
+
 function renderBudget(result: DesignResult): string[] {
   const b = result.budget;
   const out = ["", `  accuracy budget (input-referred; required ${formatSI(b.required_v, "V")})`];
   for (const t of b.terms) {
     const mark = t.name === b.dominant ? " <- largest" : "";
-    out.push(`    ${t.label.padEnd(54).slice(0, 54)} ${formatSI(t.v, "V").padStart(9)}${mark}`);
+    // A long label wraps (indented) rather than being cut: the cut part often names the stage or the part.
+    const lines = wrap(t.label, 4 + LABEL_WIDTH, "      ", "    ").split("\n");
+    const last = lines.pop() ?? "";
+    out.push(...lines, `${last.padEnd(4 + LABEL_WIDTH)} ${formatSI(t.v, "V").padStart(9)}${mark}`);
   }
-  out.push(`    ${"worst case (sum)".padEnd(54)} ${formatSI(b.worst_case_v, "V").padStart(9)}`);
-  out.push(`    ${"root-sum-square (JCGM 100:2008)".padEnd(54)} ${formatSI(b.rss_v, "V").padStart(9)}`);
+  out.push(`    ${"worst case (sum)".padEnd(LABEL_WIDTH)} ${formatSI(b.worst_case_v, "V").padStart(9)}`);
+  out.push(`    ${"root-sum-square (JCGM 100:2008)".padEnd(LABEL_WIDTH)} ${formatSI(b.rss_v, "V").padStart(9)}`);
   out.push(
     wrap(
       `verdict: ${b.verdict}; after a one-point gain calibration: ${b.calibrated.verdict} (worst case ${formatSI(b.calibrated.worst_case_v, "V")})`,

@@ -132,6 +132,18 @@ describe("check, text and csv", () => {
     for (const line of out.split("\n")) expect(line.length, line).toBeLessThanOrEqual(80);
   });
 
+  it("wraps a long budget label instead of cutting it: the part it names stays readable", async () => {
+    const { out } = await run("check", "data/designs/hub-generator-15v.json");
+    const budget = out.slice(out.indexOf("accuracy budget"), out.indexOf("worst case (sum)"));
+    for (const line of budget.split("\n")) expect(line.length, line).toBeLessThanOrEqual(80);
+    const dead = budget.slice(budget.indexOf("rectifier dead time"), budget.indexOf("late sign"));
+    expect(dead).toMatchInlineSnapshot(`
+      "rectifier dead time at the crossings
+            (oa-cmos-rrio-150m-12v)                                41.6 mV <- largest
+          "
+    `);
+  });
+
   it("writes one CSV row per design, role, part and rule, neutralising formula cells", async () => {
     const { out } = await run("check", "data/designs/bridge-10v-5v-adc.json", "--format", "csv");
     const lines = out.trimEnd().split("\r\n");

@@ -71,7 +71,7 @@ describe("pump-load", () => {
     expect(reasons("pump-load", cases)).toMatchInlineSnapshot(`
       {
         "0.5 mA + its own 0.5 mA = 1 mA: −2.580 V, as the other checks used": "pass: with this part the pumped rail carries 500 µA (the stated load and the other roles' parts) + 1 × 500 µA = 1.00 mA and sits at −2.58 V, no shallower than the −2.58 V the other checks used",
-        "0.5 mA + its own 1 mA = 1.5 mA: −2.07 V, 0.51 V shallower": "marginal: with this part the pumped rail carries 500 µA (the stated load and the other roles' parts) + 1 × 1.00 mA = 1.50 mA and sits at −2.07 V, 0.51 V shallower than the −2.58 V the other checks used, so they may be optimistic: at best marginal (name it in the BOM and the rail is worked out with its own draw)",
+        "0.5 mA + its own 1 mA = 1.5 mA: −2.07 V, 0.51 V shallower": "marginal: with this part the pumped rail carries 500 µA (the stated load and the other roles' parts) + 1 × 1.00 mA = 1.50 mA and sits at −2.07 V, 510 mV shallower than the −2.58 V the other checks used, so they may be optimistic: at best marginal (name it in the BOM and the rail is worked out with its own draw)",
         "0.5 mA + its own 3.5 mA = 4 mA, past the 3.53 mA collapse": "fail: with this part the pumped rail carries 500 µA (the stated load and the other roles' parts) + 1 × 3.50 mA = 4.00 mA, past the 3.53 mA at which it collapses: no negative rail",
         "a fixed V−: nothing to add": "pass: V− is not pumped: the part's supply current does not move it",
         "supply current empty (as a part object; the schema requires it)": "unrated: not rated: needs 'iq_ma', which is empty for this part",
