@@ -145,7 +145,13 @@ describe("monotonicity", () => {
   it("loosening required_v never turns a passing part into a failing one", () => {
     // The diode roles are pinned in the BOM: otherwise a looser budget may let a
     // different rectifier diode rank first, and its larger Vf is a new demand on
-    // the rectifier op amp, not a harsher judgement of the same one.
+    // the rectifier op amp, not a harsher judgement of the same one. On a pumped
+    // V− the amplifier roles are pinned too: the rail carries the picks' supply
+    // current (SPEC §11.5), so a looser budget that lets a part fit somewhere
+    // loads the rail, and every other role then sees a shallower V−. That is a
+    // different circuit, not a harsher judgement (found by a random seed: a sign
+    // part's late-sign went from fail to marginal, its 1 mA moved V− from −0.76 V
+    // to −0.46 V, and a buffer that had reached −0.76 V no longer could).
     fc.assert(
       fc.property(
         designInputArb,
@@ -156,7 +162,13 @@ describe("monotonicity", () => {
           const pin = (d: RawDesign) => {
             const id = catalogue.diodes[0]!.id;
             d.bom = { "rectifier-diode": id, ...(d.logic.level_shift === "diode-clamp" ? { "clamp-diode": id } : {}) };
-            if (d.supply.negative.kind === "charge-pump") d.bom["pump-diode"] = id;
+            if (d.supply.negative.kind === "charge-pump") {
+              d.bom["pump-diode"] = id;
+              const amp = catalogue.opAmps[0]?.id;
+              const sign = catalogue.comparators[0]?.id ?? amp;
+              if (amp !== undefined) Object.assign(d.bom, { buffer: amp, rectifier: amp });
+              if (sign !== undefined) d.bom.sign = sign;
+            }
             if (d.topology !== "rectify-and-sign") d.topology = "rectify-and-sign";
           };
           const tight = withInput(raw, pin);
@@ -189,7 +201,16 @@ describe("monotonicity", () => {
         const wider: OpAmp = { ...part, out_pos_headroom_v: part.out_pos_headroom_v + widen };
         // Only a part the catalogue would still accept: the headroom pair must leave room in the supply.
         fc.pre(wider.out_neg_headroom_v + wider.out_pos_headroom_v < wider.supply_max_v);
-        const d: Design = { ...design, topology: "rectify-and-sign" };
+        // On a pumped V− the rail carries the picks (SPEC §11.5): a part that stops fitting stops loading it, and
+        // every check then sees a deeper V−. Pinning the roles on the rail holds the rail, so only the part moves
+        // (found by a random seed: output-swing's margin rose from −0.51 V to −0.31 V when the wider part lost its pick).
+        const pumped = design.supply.negative.kind === "charge-pump";
+        const onRail = { buffer: "oa-under-test", rectifier: "oa-under-test", sign: plainComparator.id };
+        const d: Design = {
+          ...design,
+          topology: "rectify-and-sign",
+          bom: pumped ? { ...design.bom, ...onRail } : design.bom,
+        };
         const run = (p: OpAmp) =>
           evaluate(d, catalogueFromParts([{ ...p, id: "oa-under-test" }, plainComparator, plainDiode]));
         const a = run(part);
