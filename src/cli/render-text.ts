@@ -91,18 +91,19 @@ function renderSingle(result: DesignResult, io: Pick<Io, "color">): string {
 /** The budget table's label column: label, value (9) and the largest-term mark fit 80 columns. */
 const LABEL_WIDTH = 54;
 
+/** One budget row; a long label wraps onto indented lines rather than being cut (the cut part often names the part). */
+function budgetRow(label: string, v: number, mark = ""): string[] {
+  const lines = wrap(label, 4 + LABEL_WIDTH, "      ", "    ").split("\n");
+  const last = lines.pop() ?? "";
+  return [...lines, `${last.padEnd(4 + LABEL_WIDTH)} ${formatSI(v, "V").padStart(9)}${mark}`];
+}
+
 function renderBudget(result: DesignResult): string[] {
   const b = result.budget;
   const out = ["", `  accuracy budget (input-referred; required ${formatSI(b.required_v, "V")})`];
-  for (const t of b.terms) {
-    const mark = t.name === b.dominant ? " <- largest" : "";
-    // A long label wraps (indented) rather than being cut: the cut part often names the stage or the part.
-    const lines = wrap(t.label, 4 + LABEL_WIDTH, "      ", "    ").split("\n");
-    const last = lines.pop() ?? "";
-    out.push(...lines, `${last.padEnd(4 + LABEL_WIDTH)} ${formatSI(t.v, "V").padStart(9)}${mark}`);
-  }
-  out.push(`    ${"worst case (sum)".padEnd(LABEL_WIDTH)} ${formatSI(b.worst_case_v, "V").padStart(9)}`);
-  out.push(`    ${"root-sum-square (JCGM 100:2008)".padEnd(LABEL_WIDTH)} ${formatSI(b.rss_v, "V").padStart(9)}`);
+  for (const t of b.terms) out.push(...budgetRow(t.label, t.v, t.name === b.dominant ? " <- largest" : ""));
+  out.push(...budgetRow("worst case (sum)", b.worst_case_v));
+  out.push(...budgetRow("root-sum-square (JCGM 100:2008)", b.rss_v));
   out.push(
     wrap(
       `verdict: ${b.verdict}; after a one-point gain calibration: ${b.calibrated.verdict} (worst case ${formatSI(b.calibrated.worst_case_v, "V")})`,

@@ -23,6 +23,9 @@ export const BASE_DESIGN = {
   policy: {},
 } as const;
 
+type Json = string | number | boolean | null | undefined | Json[] | { [key: string]: Json };
+export type DeepPartial = { [key: string]: Json };
+
 /**
  * Overrides for a ±20 mV bridge on a 1.6–1.7 V common mode, difference-to-mid on a
  * single 3.3 V rail into a 2.5 V, 12-bit converter (pass to `design`).
@@ -41,9 +44,6 @@ export const BRIDGE_20MV_ON_3V3: DeepPartial = {
   front_end: { divider_total_ohm: 10e3 },
   adc: { bits: 12, reference_v: 2.5 },
 };
-
-type Json = string | number | boolean | null | undefined | Json[] | { [key: string]: Json };
-export type DeepPartial = { [key: string]: Json };
 
 function isObject(v: unknown): v is Record<string, Json> {
   return typeof v === "object" && v !== null && !Array.isArray(v);

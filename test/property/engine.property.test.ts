@@ -11,6 +11,7 @@ import { VERDICTS, type Finding, type Verdict } from "../../src/core/engine/type
 import { severity } from "../../src/core/engine/verdict.ts";
 import type { Design } from "../../src/core/schemas/design.ts";
 import type { OpAmp } from "../../src/core/schemas/op-amp.ts";
+import { ROLES_ON_RAIL } from "../../src/topologies/rectify-and-sign-pump.ts";
 import { comparator, diode, opAmp } from "../helpers/parts.ts";
 import { design as makeDesign } from "../helpers/designs.ts";
 import {
@@ -106,6 +107,11 @@ describe("the engine on any valid design and catalogue", () => {
 const plainComparator = comparator({ id: "cmp-plain" });
 const plainDiode = diode({ id: "d-plain" });
 
+/** BOM entries for every role the pumped rail powers (SPEC §11.5): `amp` in each, `sign` in the sign role. */
+function railBom(amp: string, sign: string): Record<string, string> {
+  return Object.fromEntries(ROLES_ON_RAIL.map(({ role }) => [role, role === "sign" ? sign : amp]));
+}
+
 function findingOf(result: DesignResult | undefined, role: string, id: string, rule: string): Finding | undefined {
   const r = result?.roles.find((x) => x.role === role);
   return [...(r?.fits ?? []), ...(r?.rejected ?? [])]
@@ -165,9 +171,7 @@ describe("monotonicity", () => {
             if (d.supply.negative.kind === "charge-pump") {
               d.bom["pump-diode"] = id;
               const amp = catalogue.opAmps[0]?.id;
-              const sign = catalogue.comparators[0]?.id ?? amp;
-              if (amp !== undefined) Object.assign(d.bom, { buffer: amp, rectifier: amp });
-              if (sign !== undefined) d.bom.sign = sign;
+              if (amp !== undefined) Object.assign(d.bom, railBom(amp, catalogue.comparators[0]?.id ?? amp));
             }
             if (d.topology !== "rectify-and-sign") d.topology = "rectify-and-sign";
           };
@@ -205,11 +209,10 @@ describe("monotonicity", () => {
         // every check then sees a deeper V−. Pinning the roles on the rail holds the rail, so only the part moves
         // (found by a random seed: output-swing's margin rose from −0.51 V to −0.31 V when the wider part lost its pick).
         const pumped = design.supply.negative.kind === "charge-pump";
-        const onRail = { buffer: "oa-under-test", rectifier: "oa-under-test", sign: plainComparator.id };
         const d: Design = {
           ...design,
           topology: "rectify-and-sign",
-          bom: pumped ? { ...design.bom, ...onRail } : design.bom,
+          bom: pumped ? { ...design.bom, ...railBom("oa-under-test", plainComparator.id) } : design.bom,
         };
         const run = (p: OpAmp) =>
           evaluate(d, catalogueFromParts([{ ...p, id: "oa-under-test" }, plainComparator, plainDiode]));
